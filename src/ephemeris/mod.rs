@@ -1,0 +1,1 @@
+//! Ephemeris readers (JSON, CCSDS OEM, SP3) and interpolation.

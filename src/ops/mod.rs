@@ -1,0 +1,1 @@
+//! Operations: configuration, telemetry, health, shutdown.

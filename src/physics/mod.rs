@@ -1,0 +1,11 @@
+//! Pure computation: time scales, potentials, clock rates, proper time and signal paths.
+//!
+//! Nothing in here knows about HTTP, JSON or async. Each formula is a small function whose doc
+//! comment names its publication and equation.
+
+pub mod constants;
+pub mod gravity;
+pub mod proper_time;
+pub mod rate;
+pub mod signal;
+pub mod time;

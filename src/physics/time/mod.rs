@@ -1,0 +1,12 @@
+//! Time scales: instants with attosecond resolution, the scales and their relations, the
+//! leap-second table, the TDB - TT series and the text forms of an instant.
+
+pub mod calendar;
+pub mod convert;
+pub mod decimal;
+pub mod error;
+pub mod formats;
+pub mod instant;
+pub mod leap_seconds;
+pub mod scale;
+pub mod tdb_series;
