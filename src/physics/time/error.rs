@@ -1,1 +1,91 @@
-//! (in progress)
+//! Why an instant could not be read, converted or written.
+
+use std::fmt;
+
+/// An error of the time engine. Each variant has a stable machine-readable [`TimeError::code`]
+/// and a message a person can act on.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub enum TimeError {
+    /// A scale name that is not one of the supported scales.
+    UnknownScale(String),
+    /// A format name that is not one of the supported formats.
+    UnknownFormat(String),
+    /// The text does not have the shape of the format.
+    Malformed {
+        /// What the format expects.
+        expected: String,
+        /// What was found instead.
+        found: String,
+    },
+    /// The text has the right shape but names a date or time that does not exist.
+    ImpossibleDate(String),
+    /// A second 60 where no leap second exists (or in a scale without leap seconds).
+    InvalidLeapSecond(String),
+    /// The format does not apply to the scale (e.g. `unix_s` outside UTC).
+    FormatNotForScale {
+        /// The format name.
+        format: &'static str,
+        /// The scale name.
+        scale: &'static str,
+        /// Which scales take the format.
+        allowed: &'static str,
+    },
+    /// A UTC instant before 1960-01-01, where UTC is not defined by the table.
+    BeforeUtc(String),
+    /// A value outside the range the engine supports.
+    OutOfRange(String),
+}
+
+impl TimeError {
+    /// Stable code for clients.
+    pub fn code(&self) -> &'static str {
+        match self {
+            Self::UnknownScale(_) => "unknown_scale",
+            Self::UnknownFormat(_) => "unknown_format",
+            Self::Malformed { .. } => "malformed_instant",
+            Self::ImpossibleDate(_) => "impossible_date",
+            Self::InvalidLeapSecond(_) => "invalid_leap_second",
+            Self::FormatNotForScale { .. } => "format_not_for_scale",
+            Self::BeforeUtc(_) => "utc_before_1960",
+            Self::OutOfRange(_) => "instant_out_of_range",
+        }
+    }
+
+    /// Shorthand for [`TimeError::Malformed`].
+    pub fn malformed(expected: impl Into<String>, found: impl Into<String>) -> Self {
+        Self::Malformed {
+            expected: expected.into(),
+            found: found.into(),
+        }
+    }
+}
+
+impl fmt::Display for TimeError {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        match self {
+            Self::UnknownScale(name) => write!(
+                f,
+                "unknown time scale {name:?}; expected one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST"
+            ),
+            Self::UnknownFormat(name) => write!(
+                f,
+                "unknown instant format {name:?}; expected one of iso, mjd, jd, j2000_s, unix_s, gnss_week"
+            ),
+            Self::Malformed { expected, found } => write!(f, "expected {expected}, found {found:?}"),
+            Self::ImpossibleDate(message)
+            | Self::InvalidLeapSecond(message)
+            | Self::BeforeUtc(message)
+            | Self::OutOfRange(message) => f.write_str(message),
+            Self::FormatNotForScale {
+                format,
+                scale,
+                allowed,
+            } => write!(
+                f,
+                "format {format} does not apply to scale {scale}; it is for {allowed}"
+            ),
+        }
+    }
+}
+
+impl std::error::Error for TimeError {}

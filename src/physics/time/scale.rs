@@ -1,1 +1,163 @@
-//! (in progress)
+//! The time scales the engine knows and what realizes each.
+
+use std::fmt;
+use std::str::FromStr;
+
+/// A time scale.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, PartialOrd, Ord)]
+pub enum Scale {
+    /// Coordinated Universal Time (ITU-R TF.460-6): TAI minus the leap-second table.
+    Utc,
+    /// International Atomic Time (BIPM).
+    Tai,
+    /// Terrestrial Time (IAU 1991 A4, IAU 2000 B1.9): TAI + 32.184 s.
+    Tt,
+    /// Geocentric Coordinate Time (IAU 1991 A4, IAU 2000 B1.9).
+    Tcg,
+    /// Barycentric Coordinate Time (IAU 1991 A4, IAU 2006 B3).
+    Tcb,
+    /// Barycentric Dynamical Time (IAU 2006 B3).
+    Tdb,
+    /// GPS Time (IS-GPS-200): TAI - 19 s.
+    Gpst,
+    /// Galileo System Time (Galileo OS SIS ICD): TAI - 19 s.
+    Gst,
+    /// BeiDou Time (BeiDou OS ICD): TAI - 33 s.
+    Bdt,
+    /// QZSS Time (IS-QZSS): TAI - 19 s.
+    Qzsst,
+}
+
+impl Scale {
+    /// Every scale, in the order answers list them.
+    pub const ALL: [Scale; 10] = [
+        Scale::Utc,
+        Scale::Tai,
+        Scale::Tt,
+        Scale::Tcg,
+        Scale::Tcb,
+        Scale::Tdb,
+        Scale::Gpst,
+        Scale::Gst,
+        Scale::Bdt,
+        Scale::Qzsst,
+    ];
+
+    /// The scale's standard abbreviation.
+    pub fn as_str(self) -> &'static str {
+        match self {
+            Scale::Utc => "UTC",
+            Scale::Tai => "TAI",
+            Scale::Tt => "TT",
+            Scale::Tcg => "TCG",
+            Scale::Tcb => "TCB",
+            Scale::Tdb => "TDB",
+            Scale::Gpst => "GPST",
+            Scale::Gst => "GST",
+            Scale::Bdt => "BDT",
+            Scale::Qzsst => "QZSST",
+        }
+    }
+
+    /// True for the GNSS system times (they have a week numbering).
+    pub fn is_gnss(self) -> bool {
+        matches!(self, Scale::Gpst | Scale::Gst | Scale::Bdt | Scale::Qzsst)
+    }
+
+    /// The full name.
+    pub fn full_name(self) -> &'static str {
+        match self {
+            Scale::Utc => "Coordinated Universal Time",
+            Scale::Tai => "International Atomic Time",
+            Scale::Tt => "Terrestrial Time",
+            Scale::Tcg => "Geocentric Coordinate Time",
+            Scale::Tcb => "Barycentric Coordinate Time",
+            Scale::Tdb => "Barycentric Dynamical Time",
+            Scale::Gpst => "GPS Time",
+            Scale::Gst => "Galileo System Time",
+            Scale::Bdt => "BeiDou Time",
+            Scale::Qzsst => "QZSS Time",
+        }
+    }
+
+    /// What realizes the scale in practice.
+    pub fn realized_by(self) -> &'static str {
+        match self {
+            Scale::Utc => "TAI steered by leap seconds announced in IERS Bulletin C; local realizations UTC(k) by national laboratories",
+            Scale::Tai => "BIPM, from the weighted clock ensemble of the timing laboratories (published monthly in Circular T)",
+            Scale::Tt => "TAI + 32.184 s; TT(BIPM) is a post-processed realization",
+            Scale::Tcg => "computed from TT by the defining rate L_G",
+            Scale::Tcb => "computed from TDB by the defining rate L_B and offset TDB0",
+            Scale::Tdb => "computed from TT by a time ephemeris (here the Fairhead & Bretagnon 1990 series)",
+            Scale::Gpst => "the GPS control segment's composite clock, steered to UTC(USNO) modulo leap seconds",
+            Scale::Gst => "the Galileo ground segment's precise timing facility, steered to TAI modulo 19 s",
+            Scale::Bdt => "the BeiDou ground segment's master clock, steered to UTC(NTSC) modulo leap seconds",
+            Scale::Qzsst => "the QZSS ground segment, steered to GPS Time",
+        }
+    }
+
+    /// How the scale relates to its neighbour in the chain.
+    pub fn relation(self) -> &'static str {
+        match self {
+            Scale::Utc => "UTC = TAI - (TAI - UTC), from the leap-second table; drift formulas 1961-1971; defined here from 1960-01-01",
+            Scale::Tai => "TAI = TT - 32.184 s",
+            Scale::Tt => "TT = TAI + 32.184 s (IAU 1991 A4)",
+            Scale::Tcg => "TCG - TT = L_G / (1 - L_G) * (JD_TT - T0) * 86400 s, L_G = 6.969290134e-10 (IAU 2000 B1.9)",
+            Scale::Tcb => "TCB - TDB = (L_B * (JD_TDB - T0) * 86400 s - TDB0) / (1 - L_B), L_B = 1.550519768e-8, TDB0 = -6.55e-5 s (IAU 2006 B3)",
+            Scale::Tdb => "TDB - TT = periodic series of about 1.66 ms amplitude (Fairhead & Bretagnon 1990), plus a topocentric part when an observer is given",
+            Scale::Gpst => "GPST = TAI - 19 s; weeks from 1980-01-06T00:00:00 GPST (IS-GPS-200)",
+            Scale::Gst => "GST = TAI - 19 s; weeks from 1999-08-22T00:00:00 GST (Galileo OS SIS ICD)",
+            Scale::Bdt => "BDT = TAI - 33 s; weeks from 2006-01-01T00:00:00 BDT (BeiDou OS ICD)",
+            Scale::Qzsst => "QZSST = TAI - 19 s; GPS week numbering (IS-QZSS)",
+        }
+    }
+}
+
+impl fmt::Display for Scale {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        f.write_str(self.as_str())
+    }
+}
+
+/// An unknown scale name.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub struct UnknownScale(pub String);
+
+impl fmt::Display for UnknownScale {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        write!(
+            f,
+            "unknown time scale {:?}; expected one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST",
+            self.0
+        )
+    }
+}
+
+impl std::error::Error for UnknownScale {}
+
+impl FromStr for Scale {
+    type Err = UnknownScale;
+
+    /// Reads a scale name, ignoring ASCII case.
+    fn from_str(text: &str) -> Result<Self, Self::Err> {
+        Scale::ALL
+            .into_iter()
+            .find(|scale| scale.as_str().eq_ignore_ascii_case(text))
+            .ok_or_else(|| UnknownScale(text.to_string()))
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn names_round_trip() {
+        for scale in Scale::ALL {
+            assert_eq!(scale.as_str().parse::<Scale>(), Ok(scale));
+            assert_eq!(scale.as_str().to_lowercase().parse::<Scale>(), Ok(scale));
+        }
+        assert!("GMT".parse::<Scale>().is_err());
+        assert!("".parse::<Scale>().is_err());
+    }
+}

@@ -1,0 +1,300 @@
+//! Text forms of an instant: reading a string in a named format and scale, and writing every
+//! form of an instant.
+//!
+//! Formats: `iso` (calendar or ordinal), `mjd`, `jd`, `j2000_s` (seconds since J2000.0 in the
+//! scale), `unix_s` (UTC only) and `gnss_week` (`WEEK:SECONDS`, GNSS scales only). For UTC the
+//! day-based forms follow the ERFA/SOFA quasi-JD convention: a day fraction is time of day
+//! divided by that day's length (86 401 s on a leap-second day). `j2000_s` and `unix_s` of UTC
+//! count 86 400 s per day (a leap second cannot be written in them; use `iso`).
+
+mod gnss_week;
+mod iso;
+
+use std::fmt;
+use std::str::FromStr;
+
+pub use gnss_week::{gnss_week_origin_mjd, SECONDS_PER_WEEK};
+pub use iso::{parse_iso, write_iso, IsoReading};
+
+use super::calendar::UNIX_EPOCH_MJD;
+use super::decimal::{format_attos_as_seconds, format_ratio, ExactDecimal};
+use super::error::TimeError;
+use super::instant::{
+    uniform_count_attos, uniform_day_reading, DayReading, Instant, ATTOS_PER_DAY, ATTOS_PER_SECOND,
+};
+use super::leap_seconds::LeapTable;
+use super::scale::Scale;
+
+/// Decimals written in the `iso` form.
+pub const ISO_DECIMALS: u32 = 12;
+/// Decimals written in the `mjd` and `jd` forms (1e-24 day is below one attosecond, so the
+/// text reads back to the same attosecond).
+pub const DAY_DECIMALS: u32 = 24;
+/// First MJD accepted (0001-01-01).
+pub const FIRST_MJD: i64 = -678_575;
+/// Last MJD accepted (9999-12-31).
+pub const LAST_MJD: i64 = 2_973_483;
+
+/// How an instant is written in a request.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum InstantFormat {
+    /// ISO 8601 calendar or ordinal date and time.
+    Iso,
+    /// Modified Julian Date.
+    Mjd,
+    /// Julian Date.
+    Jd,
+    /// Seconds since J2000.0 in the instant's scale.
+    J2000S,
+    /// Seconds since 1970-01-01T00:00:00 UTC, 86 400 s per day (UTC only).
+    UnixS,
+    /// GNSS week and seconds of week, `WEEK:SECONDS`.
+    GnssWeek,
+}
+
+impl InstantFormat {
+    /// The format's name in requests.
+    pub fn as_str(self) -> &'static str {
+        match self {
+            Self::Iso => "iso",
+            Self::Mjd => "mjd",
+            Self::Jd => "jd",
+            Self::J2000S => "j2000_s",
+            Self::UnixS => "unix_s",
+            Self::GnssWeek => "gnss_week",
+        }
+    }
+}
+
+impl fmt::Display for InstantFormat {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        f.write_str(self.as_str())
+    }
+}
+
+impl FromStr for InstantFormat {
+    type Err = TimeError;
+    fn from_str(text: &str) -> Result<Self, Self::Err> {
+        [
+            Self::Iso,
+            Self::Mjd,
+            Self::Jd,
+            Self::J2000S,
+            Self::UnixS,
+            Self::GnssWeek,
+        ]
+        .into_iter()
+        .find(|format| format.as_str().eq_ignore_ascii_case(text))
+        .ok_or_else(|| TimeError::UnknownFormat(text.to_string()))
+    }
+}
+
+/// Every written form of an instant.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub struct InstantText {
+    /// The scale.
+    pub scale: Scale,
+    /// ISO 8601 with 12 decimals (truncated).
+    pub iso: String,
+    /// MJD, decimal, lossless.
+    pub mjd: String,
+    /// JD, decimal, lossless.
+    pub jd: String,
+    /// Seconds since J2000.0 in the scale, exact.
+    pub j2000_s: String,
+    /// `WEEK:SECONDS` for GNSS scales (from week 0 on).
+    pub gnss_week: Option<String>,
+}
+
+fn check_mjd_range(mjd: i64) -> Result<(), TimeError> {
+    if (FIRST_MJD..=LAST_MJD).contains(&mjd) {
+        Ok(())
+    } else {
+        Err(TimeError::OutOfRange(format!(
+            "the instant falls on MJD {mjd}, outside the supported years 0001 to 9999"
+        )))
+    }
+}
+
+/// Turns a calendar reading in `scale` into an instant, checking seconds of day against the
+/// day's length (leap seconds exist only in UTC, on the days the table says).
+pub fn instant_from_day_reading(
+    scale: Scale,
+    mjd: i64,
+    seconds_of_day_attos: i128,
+    table: &LeapTable,
+) -> Result<Instant, TimeError> {
+    check_mjd_range(mjd)?;
+    if scale != Scale::Utc {
+        if seconds_of_day_attos >= ATTOS_PER_DAY {
+            return Err(TimeError::InvalidLeapSecond(format!(
+                "second 60 exists only in UTC; {scale} has no leap seconds"
+            )));
+        }
+        return Ok(Instant::from_count_attos(
+            scale,
+            uniform_count_attos(mjd, seconds_of_day_attos),
+        ));
+    }
+    utc_instant(mjd, seconds_of_day_attos, table)
+}
+
+fn utc_instant(
+    mjd: i64,
+    seconds_of_day_attos: i128,
+    table: &LeapTable,
+) -> Result<Instant, TimeError> {
+    if mjd < table.first_utc_mjd() {
+        return Err(TimeError::BeforeUtc(format!(
+            "UTC is defined here from 1960-01-01 (MJD {}); the instant is on MJD {mjd}",
+            table.first_utc_mjd()
+        )));
+    }
+    let day_length = table.utc_day_length_attos(mjd);
+    if seconds_of_day_attos >= day_length {
+        let date = super::calendar::CalendarDate::from_mjd(mjd);
+        return Err(TimeError::InvalidLeapSecond(format!(
+            "{:04}-{:02}-{:02} has no such second: that UTC day is {} s long (no leap second at its end in the table in use)",
+            date.year,
+            date.month,
+            date.day,
+            format_attos_as_seconds(day_length)
+        )));
+    }
+    table
+        .tai_from_utc(mjd, seconds_of_day_attos)
+        .map(|tai| Instant::from_count_attos(Scale::Utc, tai))
+        .map_err(|error| TimeError::BeforeUtc(error.to_string()))
+}
+
+fn day_length_of(scale: Scale, mjd: i64, table: &LeapTable) -> i128 {
+    if scale == Scale::Utc && mjd >= table.first_utc_mjd() {
+        table.utc_day_length_attos(mjd)
+    } else {
+        ATTOS_PER_DAY
+    }
+}
+
+/// Reads an instant from text in `format` and `scale`.
+pub fn parse_instant(
+    text: &str,
+    format: InstantFormat,
+    scale: Scale,
+    table: &LeapTable,
+) -> Result<Instant, TimeError> {
+    match format {
+        InstantFormat::Iso => {
+            let reading = parse_iso(text)?;
+            if reading.utc_designator && scale != Scale::Utc {
+                return Err(TimeError::malformed(
+                    format!("no trailing Z: Z marks UTC, and the scale is {scale}"),
+                    text,
+                ));
+            }
+            instant_from_day_reading(
+                scale,
+                reading.date.to_mjd(),
+                reading.seconds_of_day_attos,
+                table,
+            )
+        }
+        InstantFormat::Mjd | InstantFormat::Jd => {
+            let value = ExactDecimal::parse(text)
+                .map_err(|e| TimeError::malformed(format!("a decimal {format} ({e})"), text))?;
+            // Shift a JD by half a day to an MJD without leaving exact arithmetic.
+            let (whole, fraction_e24) = value.floor_split();
+            let (whole, fraction_e24) = if format == InstantFormat::Jd {
+                let half = 500_000_000_000_000_000_000_000;
+                let shifted = fraction_e24 - half;
+                if shifted < 0 {
+                    (whole - 2_400_001, shifted + 2 * half)
+                } else {
+                    (whole - 2_400_000, shifted)
+                }
+            } else {
+                (whole, fraction_e24)
+            };
+            let mjd = i64::try_from(whole).map_err(|_| {
+                TimeError::OutOfRange(format!("{format} {text} is outside the supported range"))
+            })?;
+            check_mjd_range(mjd)?;
+            let day_length = day_length_of(scale, mjd, table);
+            let seconds_of_day = super::decimal::fraction_times(fraction_e24, day_length);
+            instant_from_day_reading(scale, mjd, seconds_of_day, table)
+        }
+        InstantFormat::J2000S | InstantFormat::UnixS => {
+            if format == InstantFormat::UnixS && scale != Scale::Utc {
+                return Err(TimeError::FormatNotForScale {
+                    format: "unix_s",
+                    scale: scale.as_str(),
+                    allowed: "UTC only",
+                });
+            }
+            let seconds = ExactDecimal::parse(text)
+                .map_err(|e| TimeError::malformed(format!("decimal seconds ({e})"), text))?
+                .times_attos(ATTOS_PER_SECOND);
+            let count = if format == InstantFormat::UnixS {
+                uniform_count_attos(UNIX_EPOCH_MJD, 0) + seconds
+            } else {
+                seconds
+            };
+            let reading = uniform_day_reading(count);
+            instant_from_day_reading(scale, reading.mjd, reading.seconds_of_day_attos, table)
+        }
+        InstantFormat::GnssWeek => {
+            let count = gnss_week::parse_gnss_week(text, scale)?;
+            let reading = uniform_day_reading(count);
+            instant_from_day_reading(scale, reading.mjd, reading.seconds_of_day_attos, table)
+        }
+    }
+}
+
+/// The calendar reading of an instant in its own scale.
+pub fn day_reading(instant: &Instant, table: &LeapTable) -> Result<DayReading, TimeError> {
+    if instant.scale() != Scale::Utc {
+        return Ok(uniform_day_reading(instant.count_attos()));
+    }
+    let (mjd, seconds_of_day_attos) = table
+        .utc_from_tai(instant.count_attos())
+        .map_err(|error| TimeError::BeforeUtc(error.to_string()))?;
+    Ok(DayReading {
+        mjd,
+        seconds_of_day_attos,
+        day_length_attos: table.utc_day_length_attos(mjd),
+    })
+}
+
+/// The reading of an instant as seconds since J2000.0 of its scale (for UTC: 86 400 s per
+/// day, so a leap second shares its count with the first second of the next day).
+pub fn reading_count_attos(instant: &Instant, table: &LeapTable) -> Result<i128, TimeError> {
+    if instant.scale() != Scale::Utc {
+        return Ok(instant.count_attos());
+    }
+    let reading = day_reading(instant, table)?;
+    Ok(uniform_count_attos(
+        reading.mjd,
+        reading.seconds_of_day_attos,
+    ))
+}
+
+/// Writes every form of an instant.
+pub fn write_instant(instant: &Instant, table: &LeapTable) -> Result<InstantText, TimeError> {
+    let reading = day_reading(instant, table)?;
+    check_mjd_range(reading.mjd)?;
+    let day = reading.day_length_attos;
+    let mjd_numerator = i128::from(reading.mjd) * day + reading.seconds_of_day_attos;
+    let jd_numerator = mjd_numerator + 2_400_000 * day + day / 2;
+    let count = if instant.scale() == Scale::Utc {
+        uniform_count_attos(reading.mjd, reading.seconds_of_day_attos)
+    } else {
+        instant.count_attos()
+    };
+    Ok(InstantText {
+        scale: instant.scale(),
+        iso: write_iso(&reading, ISO_DECIMALS),
+        mjd: format_ratio(mjd_numerator, day, DAY_DECIMALS),
+        jd: format_ratio(jd_numerator, day, DAY_DECIMALS),
+        j2000_s: format_attos_as_seconds(count),
+        gnss_week: gnss_week::write_gnss_week(instant.scale(), count),
+    })
+}
