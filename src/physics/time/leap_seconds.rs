@@ -7,12 +7,24 @@ impl fmt::Display for UtcRangeError {
         f.write_str("before 1960")
     }
 }
-#[derive(Debug)]
+#[derive(Debug, Clone)]
 pub struct LeapTable;
 const DAY: i128 = 86_400_000_000_000_000_000_000;
 impl LeapTable {
     pub fn builtin() -> &'static LeapTable {
         &LeapTable
+    }
+    pub fn source(&self) -> &str {
+        "placeholder"
+    }
+    pub fn steps(&self) -> &[LeapStep] {
+        &[]
+    }
+    pub fn parse_any(_t: &str) -> Result<LeapTable, String> {
+        Err("placeholder".into())
+    }
+    pub fn with_source(self, _s: String) -> Self {
+        self
     }
     pub fn first_utc_mjd(&self) -> i64 {
         36_934
@@ -30,4 +42,10 @@ impl LeapTable {
         let x = tai - 37_000_000_000_000_000_000 + DAY / 2;
         Ok((51_544 + x.div_euclid(DAY) as i64, x.rem_euclid(DAY)))
     }
+}
+pub struct LeapStep {
+    pub utc_mjd: i64,
+    pub offset_s: f64,
+    pub drift_reference_mjd: f64,
+    pub drift_s_per_day: f64,
 }

@@ -1,0 +1,22 @@
+//! The time-scale endpoints: conversion, the scales, the leap-second table and now.
+
+pub mod convert;
+pub mod reference;
+pub mod types;
+
+use axum::routing::get;
+use axum::Router;
+
+use super::state::AppState;
+
+/// Routes under `/v1/time`.
+pub fn router() -> Router<AppState> {
+    Router::new()
+        .route(
+            "/v1/time/convert",
+            get(convert::convert_get).post(convert::convert_post),
+        )
+        .route("/v1/time/scales", get(reference::scales))
+        .route("/v1/time/leap-seconds", get(reference::leap_seconds))
+        .route("/v1/time/now", get(reference::now))
+}

@@ -1,0 +1,139 @@
+//! Configuration: command-line flags, each with an `EIGENZEIT_*` environment twin.
+
+use std::net::SocketAddr;
+use std::path::PathBuf;
+
+use clap::{Args, Parser, Subcommand, ValueEnum};
+
+/// Relativistic clock and time-scale service.
+#[derive(Debug, Parser)]
+#[command(name = "eigenzeit", version, about, long_about = None)]
+pub struct Cli {
+    /// What to do (default: serve).
+    #[command(subcommand)]
+    pub command: Option<Command>,
+    /// Service settings (used by `serve`, the default).
+    #[command(flatten)]
+    pub settings: Settings,
+}
+
+/// The binary's subcommands.
+#[derive(Debug, Subcommand)]
+pub enum Command {
+    /// Serve the HTTP API (the default).
+    Serve,
+    /// Print the OpenAPI document and exit.
+    Openapi,
+    /// Ask a running instance for /healthz and exit 0 when it answers 200 (for container health checks).
+    Healthcheck {
+        /// URL to probe.
+        #[arg(long, default_value = "http://127.0.0.1:8080/healthz")]
+        url: String,
+    },
+}
+
+/// Log line format.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, ValueEnum, Default)]
+pub enum LogFormat {
+    /// Human-readable lines.
+    #[default]
+    Pretty,
+    /// One JSON object per line.
+    Json,
+}
+
+/// Every setting of the service, with its default.
+#[derive(Debug, Clone, Args)]
+pub struct Settings {
+    /// Address to listen on.
+    #[arg(long, env = "EIGENZEIT_ADDR", default_value = "127.0.0.1:8080")]
+    pub addr: SocketAddr,
+    /// Log format.
+    #[arg(long, env = "EIGENZEIT_LOG_FORMAT", value_enum, default_value_t = LogFormat::Pretty)]
+    pub log_format: LogFormat,
+    /// Log level or filter (e.g. `info`, `eigenzeit=debug`).
+    #[arg(long, env = "EIGENZEIT_LOG_LEVEL", default_value = "info")]
+    pub log_level: String,
+    /// Largest request body accepted, in bytes (413 above it).
+    #[arg(long, env = "EIGENZEIT_BODY_LIMIT_BYTES", default_value_t = 64 * 1024 * 1024)]
+    pub body_limit_bytes: usize,
+    /// Time a request may take before it is answered 503, in seconds.
+    #[arg(long, env = "EIGENZEIT_REQUEST_TIMEOUT_S", default_value_t = 30.0)]
+    pub request_timeout_s: f64,
+    /// Most items (epochs, rate subjects, ephemeris states) in one request.
+    #[arg(long, env = "EIGENZEIT_BATCH_LIMIT", default_value_t = 100_000)]
+    pub batch_limit: usize,
+    /// On SIGTERM/SIGINT, how long in-flight requests may take to finish, in seconds.
+    #[arg(long, env = "EIGENZEIT_DRAIN_TIMEOUT_S", default_value_t = 20.0)]
+    pub drain_timeout_s: f64,
+    /// On SIGTERM/SIGINT, how long to keep accepting while unready (lets load balancers
+    /// notice), in seconds, before draining.
+    #[arg(long, env = "EIGENZEIT_SHUTDOWN_DELAY_S", default_value_t = 0.0)]
+    pub shutdown_delay_s: f64,
+    /// Origins allowed by CORS, comma-separated (none by default; `*` for any).
+    #[arg(long, env = "EIGENZEIT_CORS_ORIGINS", value_delimiter = ',')]
+    pub cors_origins: Vec<String>,
+    /// Leap-second file to use instead of the built-in table (IERS Leap_Second.dat or IETF leap-seconds.list).
+    #[arg(long, env = "EIGENZEIT_LEAP_SECONDS_FILE")]
+    pub leap_seconds_file: Option<PathBuf>,
+    /// URL polled for a newer leap-second file (same formats).
+    #[arg(long, env = "EIGENZEIT_LEAP_SECONDS_URL")]
+    pub leap_seconds_url: Option<String>,
+    /// Interval between polls of the leap-second URL, in seconds.
+    #[arg(
+        long,
+        env = "EIGENZEIT_LEAP_SECONDS_REFRESH_S",
+        default_value_t = 86_400.0
+    )]
+    pub leap_seconds_refresh_s: f64,
+    /// Longest gap between ephemeris states accepted, in seconds.
+    #[arg(long, env = "EIGENZEIT_MAX_EPHEMERIS_GAP_S", default_value_t = 3_600.0)]
+    pub max_ephemeris_gap_s: f64,
+}
+
+impl Default for Settings {
+    fn default() -> Self {
+        Self {
+            addr: SocketAddr::from(([127, 0, 0, 1], 8080)),
+            log_format: LogFormat::Pretty,
+            log_level: "info".to_string(),
+            body_limit_bytes: 64 * 1024 * 1024,
+            request_timeout_s: 30.0,
+            batch_limit: 100_000,
+            drain_timeout_s: 20.0,
+            shutdown_delay_s: 0.0,
+            cors_origins: Vec::new(),
+            leap_seconds_file: None,
+            leap_seconds_url: None,
+            leap_seconds_refresh_s: 86_400.0,
+            max_ephemeris_gap_s: 3_600.0,
+        }
+    }
+}
+
+impl Settings {
+    /// Checks values that clap cannot (positive, finite durations).
+    pub fn validate(&self) -> Result<(), String> {
+        for (name, value) in [
+            ("--request-timeout-s", self.request_timeout_s),
+            ("--drain-timeout-s", self.drain_timeout_s),
+            ("--leap-seconds-refresh-s", self.leap_seconds_refresh_s),
+            ("--max-ephemeris-gap-s", self.max_ephemeris_gap_s),
+        ] {
+            if !(value.is_finite() && value > 0.0) {
+                return Err(format!(
+                    "{name} must be a positive number of seconds, got {value}"
+                ));
+            }
+        }
+        if !(self.shutdown_delay_s.is_finite() && self.shutdown_delay_s >= 0.0) {
+            return Err(
+                "--shutdown-delay-s must be zero or a positive number of seconds".to_string(),
+            );
+        }
+        if self.batch_limit == 0 || self.body_limit_bytes == 0 {
+            return Err("--batch-limit and --body-limit-bytes must be at least 1".to_string());
+        }
+        Ok(())
+    }
+}

@@ -1,0 +1,118 @@
+//! Liveness, readiness and the metrics endpoint.
+
+use axum::extract::State;
+use axum::http::{header, StatusCode};
+use axum::response::{IntoResponse, Response};
+use axum::Json;
+use serde::Serialize;
+use utoipa::ToSchema;
+
+use crate::api::state::AppState;
+use crate::ops::metrics::Gauges;
+
+/// Liveness answer.
+#[derive(Debug, Serialize, ToSchema)]
+pub struct Health {
+    /// Always `ok` while the process serves.
+    pub status: String,
+    /// Service version.
+    pub version: String,
+}
+
+/// Readiness answer.
+#[derive(Debug, Serialize, ToSchema)]
+pub struct Readiness {
+    /// `ready`, or `draining` during shutdown.
+    pub status: String,
+    /// The leap-second table in force and its refresh.
+    pub leap_seconds: LeapReadiness,
+}
+
+/// The leap-second part of the readiness answer.
+#[derive(Debug, Serialize, ToSchema)]
+pub struct LeapReadiness {
+    /// Where the table came from.
+    pub source: String,
+    /// Expiry date of the table (UTC, ISO date).
+    pub expires: String,
+    /// Days from now to the expiry (negative once expired).
+    pub expires_in_days: f64,
+    /// Unix time of the last successful refresh from the configured URL.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub last_refresh_unix_s: Option<u64>,
+    /// Why the last refresh failed (the table in force was kept).
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub last_refresh_error: Option<String>,
+}
+
+/// Liveness: the process is up and serving.
+#[utoipa::path(get, path = "/healthz", tag = "operations",
+    responses((status = 200, description = "The process serves", body = Health)))]
+pub async fn healthz() -> Json<Health> {
+    Json(Health {
+        status: "ok".to_string(),
+        version: env!("CARGO_PKG_VERSION").to_string(),
+    })
+}
+
+fn leap_readiness(state: &AppState) -> LeapReadiness {
+    let table = state.leap_table();
+    let refresh = state.leap_refresh_status();
+    let expiry = crate::physics::time::calendar::CalendarDate::from_mjd(table.expiry_mjd());
+    LeapReadiness {
+        source: table.source().to_string(),
+        expires: format!("{:04}-{:02}-{:02}", expiry.year, expiry.month, expiry.day),
+        expires_in_days: days_to_expiry(table.expiry_mjd()),
+        last_refresh_unix_s: refresh.last_success_unix_s,
+        last_refresh_error: refresh.last_error,
+    }
+}
+
+/// Days from now to the start of `expiry_mjd` (UTC).
+pub fn days_to_expiry(expiry_mjd: i64) -> f64 {
+    let now_s = std::time::SystemTime::now()
+        .duration_since(std::time::UNIX_EPOCH)
+        .map(|d| d.as_secs_f64())
+        .unwrap_or(0.0);
+    let now_mjd = 40_587.0 + now_s / 86_400.0;
+    expiry_mjd as f64 - now_mjd
+}
+
+/// Readiness: 200 while taking work, 503 while draining before shutdown.
+#[utoipa::path(get, path = "/readyz", tag = "operations",
+    responses(
+        (status = 200, description = "Ready for work", body = Readiness),
+        (status = 503, description = "Draining before shutdown", body = Readiness)))]
+pub async fn readyz(State(state): State<AppState>) -> Response {
+    let ready = state.is_ready();
+    let body = Readiness {
+        status: if ready { "ready" } else { "draining" }.to_string(),
+        leap_seconds: leap_readiness(&state),
+    };
+    let status = if ready {
+        StatusCode::OK
+    } else {
+        StatusCode::SERVICE_UNAVAILABLE
+    };
+    (status, Json(body)).into_response()
+}
+
+/// Prometheus metrics in the text exposition format.
+#[utoipa::path(get, path = "/metrics", tag = "operations",
+    responses((status = 200, description = "Prometheus text format 0.0.4", body = String, content_type = "text/plain")))]
+pub async fn metrics(State(state): State<AppState>) -> Response {
+    let table = state.leap_table();
+    let gauges = Gauges {
+        leap_source: table.source().to_string(),
+        leap_expiry_days: days_to_expiry(table.expiry_mjd()),
+        ready: state.is_ready(),
+    };
+    (
+        [(
+            header::CONTENT_TYPE,
+            "text/plain; version=0.0.4; charset=utf-8",
+        )],
+        state.metrics().render(&gauges),
+    )
+        .into_response()
+}
