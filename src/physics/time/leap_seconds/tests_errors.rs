@@ -68,12 +68,13 @@ fn readings_outside_utc_are_refused() {
     assert_eq!(table.utc_day_length_attos(i64::MIN), 86_400 * ATTOS);
 }
 
-/// The error of parsing `text`, or a failure message.
+/// The error of parsing a text that must be refused.
 fn error_of(result: Result<LeapTable, LeapFileError>) -> LeapFileError {
     match result {
-        Ok(t) => LeapFileError::NoEntries {
-            line: usize::MAX - t.steps().len(),
-        },
+        Ok(t) => panic!(
+            "expected an error, got a table of {} steps",
+            t.steps().len()
+        ),
         Err(e) => e,
     }
 }
@@ -89,6 +90,29 @@ fn small_files_parse() {
         LeapTable::parse_any(IETF_SMALL).map(|t| t.steps().len()),
         Ok(16)
     );
+}
+
+#[test]
+fn a_negative_leap_second_shortens_the_day() {
+    // ITU-R TF.460-6 allows a negative leap second: TAI - UTC 11 s -> 10 s from 1973-01-01,
+    // so 1972-12-31 (MJD 41682) has 86 399 s, 23:59:59 being skipped
+    let text = IERS_SMALL.replace("1973       12", "1973       10");
+    let table = LeapTable::parse_iers_leap_second_dat(&text);
+    assert!(table.is_ok(), "{table:?}");
+    if let Ok(table) = table {
+        assert_eq!(table.utc_day_length_attos(41_682), 86_399 * ATTOS);
+        assert!(table.tai_from_utc(41_682, 86_399 * ATTOS).is_err());
+        let last = table.tai_from_utc(41_682, 86_399 * ATTOS - 1);
+        let next = table.tai_from_utc(41_683, 0);
+        // the last attosecond of the short day is followed by the next day (common practice)
+        assert_eq!(last.map(|t| t + 1), next);
+        assert_eq!(
+            last.and_then(|t| table.utc_from_tai(t)),
+            Ok((41_682, 86_399 * ATTOS - 1))
+        );
+        assert_eq!(next.and_then(|t| table.utc_from_tai(t)), Ok((41_683, 0)));
+        assert_eq!(table.tai_minus_utc_attos(41_683, 0), Some(10 * ATTOS));
+    }
 }
 
 #[test]
