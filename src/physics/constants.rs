@@ -77,3 +77,7 @@ pub const MJD_ZERO_JD: f64 = 2_400_000.5;
 
 /// MJD of J2000.0 (2000-01-01T12:00:00): 51544.5.
 pub const J2000_MJD: f64 = 51_544.5;
+
+/// Days per Julian millennium: 1000 Julian years of 365.25 days (IAU 1976 System of
+/// Astronomical Constants, Julian year); the time unit of the Fairhead & Bretagnon (1990) series.
+pub const DAYS_PER_JULIAN_MILLENNIUM: f64 = 365_250.0;
