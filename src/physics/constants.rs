@@ -81,3 +81,41 @@ pub const J2000_MJD: f64 = 51_544.5;
 /// Days per Julian millennium: 1000 Julian years of 365.25 days (IAU 1976 System of
 /// Astronomical Constants, Julian year); the time unit of the Fairhead & Bretagnon (1990) series.
 pub const DAYS_PER_JULIAN_MILLENNIUM: f64 = 365_250.0;
+
+/// GRS80 geocentric gravitational constant GM (Moritz, Geodetic Reference System 1980), m^3/s^2.
+/// Used only for GRS80 normal gravity; potentials use [`GM_EARTH_M3_S2`].
+pub const GRS80_GM_M3_S2: f64 = 3.986_005e14;
+
+/// GRS80 normal gravity at the equator gamma_e (Moritz, Geodetic Reference System 1980), m/s^2.
+pub const GRS80_NORMAL_GRAVITY_EQUATOR_M_S2: f64 = 9.780_326_771_5;
+
+/// GRS80 normal gravity at the poles gamma_p (Moritz, Geodetic Reference System 1980), m/s^2.
+pub const GRS80_NORMAL_GRAVITY_POLE_M_S2: f64 = 9.832_186_368_5;
+
+/// Lunar gravitational constant GM_Moon (JPL DE430: Folkner et al. 2014, IPN Progress Report
+/// 42-196, 4902.800066 km^3/s^2; from memory, consistent with the 4.9028e12 usually quoted), m^3/s^2.
+pub const GM_MOON_M3_S2: f64 = 4.902_800_066e12;
+
+/// Mean Earth-Moon distance (semi-major axis of the lunar orbit), 384 400 km (NASA NSSDC Moon
+/// fact sheet; common practice, from memory), m.
+pub const EARTH_MOON_MEAN_DISTANCE_M: f64 = 384_400_000.0;
+
+/// Mean radius of the Moon, 1737.4 km (IAU Working Group on Cartographic Coordinates and
+/// Rotational Elements: Archinal et al. 2011, Celest. Mech. Dyn. Astr. 109, 101), m.
+pub const MOON_MEAN_RADIUS_M: f64 = 1_737_400.0;
+
+/// Rotation rate of the Moon, the linear term of its prime-meridian angle W = 38.3213 deg +
+/// 13.17635815 deg/day * d (IAU WGCCRE, Archinal et al. 2011, table 2), in rad/s.
+pub const MOON_ROTATION_RAD_S: f64 = 13.176_358_15 * (core::f64::consts::PI / 180.0) / 86_400.0;
+
+/// Depth margin below the reference surface that a real clock never passes: 11 km, a little more
+/// than the deepest ocean point (Challenger Deep, about 10.9 km; common practice, from memory), m.
+pub const MAX_DEPTH_BELOW_SURFACE_M: f64 = 11_000.0;
+
+/// Upper bound of a geocentric position for the first-order geocentric rate model: the radius of
+/// the Earth's Hill sphere, about 1.5e9 m (common practice, from memory). Beyond it the Sun's
+/// tidal potential, neglected here, dominates the Earth's.
+pub const MAX_GEOCENTRIC_DISTANCE_M: f64 = 1.5e9;
+
+/// Microseconds per day for a fractional rate of 1 (86 400 s * 1e6 us/s).
+pub const MICROSECONDS_PER_DAY: f64 = 86_400.0e6;

@@ -1,0 +1,84 @@
+//! Rate of a clock fixed on the rotating Earth.
+
+use crate::physics::constants::{EARTH_ROTATION_RAD_S, L_G, SPEED_OF_LIGHT_SQUARED_M2_S2};
+use crate::physics::geodesy::{geodetic_to_ecef_m, normal_potential_drop_m2_s2};
+use crate::physics::gravity::{centrifugal_potential_m2_s2, earth_potential_m2_s2, GravityModel};
+use crate::physics::rate::error::RateError;
+use crate::physics::rate::{RateParts, RateReference};
+
+/// How the height of a ground site is given.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum GroundHeight {
+    /// Height above the GRS80 ellipsoid, m: the rate comes from the model potential W(x).
+    EllipsoidalM(f64),
+    /// Height above the geoid (orthometric height), m: W0 - W = integral of GRS80 normal gravity
+    /// over the height; the gravity model is not used.
+    AboveGeoidM(f64),
+}
+
+/// A clock at rest on the rotating Earth.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct GroundSite {
+    /// Geodetic latitude (GRS80), degrees in [-90, 90].
+    pub latitude_deg: f64,
+    /// Longitude, degrees east (any finite value).
+    pub longitude_deg: f64,
+    /// Height, in [-11 km, 1e8 m].
+    pub height: GroundHeight,
+}
+
+/// Fractional rate of a clock fixed on the rotating Earth.
+///
+/// Model: d(tau)/d(TT) = 1 + (W0 - W(x))/c^2 with W = U + omega_E^2 (x^2 + y^2)/2 the gravity plus
+/// centrifugal potential (IERS Conventions (2010) ch. 10 eq. 10.6 with v = omega_E x r, and
+/// L_G = W0/c^2, IAU 2000 Resolution B1.9). Split: `sr = -omega_E^2 (x^2 + y^2)/(2c^2)` (the
+/// rotation speed), `gr = (W0 - U)/c^2` (TT) or `-U/c^2` (TCG).
+///
+/// * [`GroundHeight::EllipsoidalM`]: x from GRS80 geodetic coordinates, U from `model`
+///   (point mass or J2). With J2 the model potential on the ellipsoid (h = 0) is within
+///   1.8e-15 of W0 (measured: +6.7e-16 at the equator, -6.3e-16 at 45 deg, +1.7e-15 at the
+///   poles; the rest is the truncated J4 term, about 150 m^2/s^2 at the poles). A real clock
+///   also sees the geoid undulation N, up to about +-100 m (about +-1.1e-14), which no
+///   ellipsoidal model knows: for 1e-16 work give the height above the geoid instead.
+/// * [`GroundHeight::AboveGeoidM`]: W0 - W = gamma h (1 - (1 + f + m - 2 f sin^2 phi) h/a +
+///   h^2/a^2) with GRS80 normal gravity gamma (Heiskanen & Moritz 1967 eq. 2-215), so a site on
+///   the geoid has rate 0 against TT by definition of TT. `model` is not used; `sr` is the
+///   rotation speed at the point taken as h above the ellipsoid (the geoid undulation changes it
+///   by under 5e-17) and `gr` is the rest of the total.
+///
+/// Errors name `latitude_deg`, `longitude_deg` or `height_m`.
+pub fn ground_site_rate(
+    site: &GroundSite,
+    reference: RateReference,
+    model: GravityModel,
+) -> Result<RateParts, RateError> {
+    let height_m = match site.height {
+        GroundHeight::EllipsoidalM(height_m) | GroundHeight::AboveGeoidM(height_m) => height_m,
+    };
+    let position_m = geodetic_to_ecef_m(site.latitude_deg, site.longitude_deg, height_m)?;
+    let centrifugal_m2_s2 = centrifugal_potential_m2_s2(position_m)?;
+    let speed_squared_m2_s2 = 2.0 * centrifugal_m2_s2;
+    let potential_m2_s2 = match site.height {
+        GroundHeight::EllipsoidalM(_) => earth_potential_m2_s2(model, position_m)?,
+        GroundHeight::AboveGeoidM(_) => {
+            let w0_m2_s2 = L_G * SPEED_OF_LIGHT_SQUARED_M2_S2;
+            let drop_m2_s2 = normal_potential_drop_m2_s2(site.latitude_deg, height_m)?;
+            w0_m2_s2 - drop_m2_s2 - centrifugal_m2_s2
+        }
+    };
+    Ok(RateParts::from_speed_and_potential(
+        reference,
+        speed_squared_m2_s2,
+        potential_m2_s2,
+    ))
+}
+
+/// Rotation speed of a point fixed on the Earth at axial distance rho, omega_E rho, in m/s
+/// (IERS Conventions (2010) table 1.1 omega_E).
+pub fn rotation_speed_m_s(axial_distance_m: f64) -> f64 {
+    EARTH_ROTATION_RAD_S * axial_distance_m
+}
+
+#[cfg(test)]
+#[path = "ground_tests.rs"]
+mod tests;

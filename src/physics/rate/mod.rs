@@ -1,0 +1,161 @@
+//! Clock rate offsets at first post-Newtonian order.
+//!
+//! A clock with GCRS velocity v at geocentric position x, where U is the Earth's Newtonian
+//! potential (positive), ticks proper time tau at
+//!
+//! ```text
+//! d(tau)/d(TCG) = 1 - (v^2/2 + U(x)) / c^2                    IERS Conventions (2010) eq. 10.6
+//! d(tau)/d(TT)  = d(tau)/d(TCG) / (1 - L_G)                   d(TT)/d(TCG) = 1 - L_G, eq. 10.1
+//!               = 1 + (L_G - (v^2/2 + U)/c^2) / (1 - L_G)
+//! ```
+//!
+//! The fractional rate is split into a velocity part `sr` and a gravity part `gr`
+//! ([`RateParts`]):
+//!
+//! * relative to TCG: `sr = -v^2/(2c^2)`, `gr = -U/c^2`;
+//! * relative to TT: `sr = -v^2/(2c^2)`, `gr = L_G - U/c^2 = (W0 - U)/c^2` (L_G = W0/c^2 by
+//!   IAU 2000 Resolution B1.9; the code uses the defining L_G, which equals W0/c^2 of IERS
+//!   Conventions (2010) table 1.1 to 6e-20).
+//!
+//! **The 1/(1 - L_G) factor.** [`RateParts::total`] is the first-order sum `sr + gr`, so the
+//! parts always add up to the total. The exact quotient above is
+//! [`RateParts::total_exact`] = `(sr + gr)/(1 - L_G)` for TT (identical to `total` for TCG);
+//! the two differ by `L_G * total`, at most about 1e-18 for Earth-bound clocks: the same order
+//! as the 1/c^4 terms the first post-Newtonian model neglects, so neither is "more right" at
+//! that level. All the derived answers (microseconds per day, frequency) use `total`.
+//!
+//! Sub-modules: [`state`] (a position and velocity), [`orbit`] (Keplerian elements),
+//! [`ground`] (a site fixed on the rotating Earth), [`lunar`] (a site on the Moon's surface),
+//! [`frequency`] (nominal frequency to offset and factory setting).
+
+pub mod error;
+pub mod frequency;
+pub mod ground;
+pub mod lunar;
+pub mod orbit;
+pub mod state;
+
+#[cfg(test)]
+mod robustness_tests;
+
+pub use crate::physics::gravity::GravityModel;
+pub use error::RateError;
+pub use frequency::{frequency_offset, FrequencyOffset};
+pub use ground::{ground_site_rate, GroundHeight, GroundSite};
+pub use lunar::{lunar_site_rate, LunarSite};
+pub use orbit::{orbit_rate, Anomaly, KeplerianOrbit, OrbitRate, PeriodicTerm};
+pub use state::{state_rate, Frame, StateRate, StateVector};
+
+use crate::physics::constants::{L_G, MICROSECONDS_PER_DAY, SPEED_OF_LIGHT_SQUARED_M2_S2};
+
+/// The coordinate time a rate is measured against.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum RateReference {
+    /// Terrestrial Time: a clock on the geoid has rate 0.
+    Tt,
+    /// Geocentric Coordinate Time.
+    Tcg,
+}
+
+/// A fractional rate offset d(tau)/d(t) - 1 split into its velocity and gravity parts.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct RateParts {
+    /// The reference time scale t.
+    pub reference: RateReference,
+    /// Velocity ("special-relativistic") part, -v^2/(2 c^2); dimensionless, never positive.
+    pub sr: f64,
+    /// Gravity part: -U/c^2 (TCG) or L_G - U/c^2 (TT); dimensionless.
+    pub gr: f64,
+}
+
+impl RateParts {
+    /// Builds the parts from the squared inertial speed and the Newtonian potential U
+    /// (IERS Conventions (2010) eq. 10.6; L_G from IAU 2000 Resolution B1.9).
+    pub fn from_speed_and_potential(
+        reference: RateReference,
+        speed_squared_m2_s2: f64,
+        potential_m2_s2: f64,
+    ) -> Self {
+        let sr = -0.5 * speed_squared_m2_s2 / SPEED_OF_LIGHT_SQUARED_M2_S2;
+        let gr_tcg = -potential_m2_s2 / SPEED_OF_LIGHT_SQUARED_M2_S2;
+        let gr = match reference {
+            RateReference::Tcg => gr_tcg,
+            RateReference::Tt => L_G + gr_tcg,
+        };
+        Self { reference, sr, gr }
+    }
+
+    /// First-order total `sr + gr` (fractional). See the module notes on 1/(1 - L_G).
+    pub fn total(&self) -> f64 {
+        self.sr + self.gr
+    }
+
+    /// Exact quotient of the first post-Newtonian metric: `(sr + gr)/(1 - L_G)` relative to TT,
+    /// `sr + gr` relative to TCG (IERS Conventions (2010) eq. 10.1 and 10.6).
+    pub fn total_exact(&self) -> f64 {
+        match self.reference {
+            RateReference::Tcg => self.total(),
+            RateReference::Tt => self.total() / (1.0 - L_G),
+        }
+    }
+
+    /// The parts in microseconds per day (fractional * 86 400e6).
+    pub fn to_microseconds_per_day(&self) -> MicrosecondsPerDay {
+        MicrosecondsPerDay {
+            sr: fractional_to_microseconds_per_day(self.sr),
+            gr: fractional_to_microseconds_per_day(self.gr),
+            total: fractional_to_microseconds_per_day(self.total()),
+        }
+    }
+}
+
+/// Rate parts expressed as microseconds gained per day of the reference scale.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct MicrosecondsPerDay {
+    /// Velocity part, us/day.
+    pub sr: f64,
+    /// Gravity part, us/day.
+    pub gr: f64,
+    /// Total, us/day.
+    pub total: f64,
+}
+
+/// Converts a fractional rate to microseconds per day (86 400 s/day, 1e6 us/s).
+pub fn fractional_to_microseconds_per_day(fractional: f64) -> f64 {
+    fractional * MICROSECONDS_PER_DAY
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::physics::constants::W0_M2_S2;
+
+    #[test]
+    fn l_g_equals_w0_over_c_squared() {
+        // IAU 2000 Resolution B1.9 / IERS Conventions (2010) table 1.1: L_G = W0/c^2.
+        assert!((W0_M2_S2 / SPEED_OF_LIGHT_SQUARED_M2_S2 - L_G).abs() < 1e-19);
+    }
+
+    #[test]
+    fn tt_and_tcg_differ_by_l_g_and_exact_total_by_the_factor() {
+        // IERS Conventions (2010) eq. 10.1: d(TT)/d(TCG) = 1 - L_G.
+        let tcg = RateParts::from_speed_and_potential(RateReference::Tcg, 1.5e7, 4.0e7);
+        let tt = RateParts::from_speed_and_potential(RateReference::Tt, 1.5e7, 4.0e7);
+        assert_eq!(tcg.sr, tt.sr);
+        assert!((tt.gr - tcg.gr - L_G).abs() < 1e-24);
+        // Exact: (1 + total_tcg)/(1 - L_G) - 1 = (total_tcg + L_G)/(1 - L_G), so the exact total
+        // exceeds the first-order one by L_G * total / (1 - L_G).
+        let excess = tt.total_exact() - tt.total();
+        assert!(
+            (excess - L_G * tt.total() / (1.0 - L_G)).abs() < 1e-25,
+            "{excess:e}"
+        );
+        assert_eq!(tcg.total_exact(), tcg.total());
+    }
+
+    #[test]
+    fn microseconds_per_day() {
+        // 1e-10 fractional = 8.64 us/day (86 400 s/day; common practice).
+        assert!((fractional_to_microseconds_per_day(1e-10) - 8.64).abs() < 1e-12);
+    }
+}

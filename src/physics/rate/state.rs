@@ -1,0 +1,266 @@
+//! Rate of a clock given by its geocentric position and velocity.
+
+use crate::physics::constants::{
+    MAX_DEPTH_BELOW_SURFACE_M, MAX_GEOCENTRIC_DISTANCE_M, SPEED_OF_LIGHT_M_S,
+    SPEED_OF_LIGHT_SQUARED_M2_S2,
+};
+use crate::physics::geodesy::{
+    is_deep_inside_earth, itrf_to_inertial_velocity_m_s, GRS80_SEMI_MINOR_AXIS_M,
+};
+use crate::physics::gravity::{dot, earth_potential_m2_s2, norm, GravityModel};
+use crate::physics::rate::error::{require_finite_vector, RateError};
+use crate::physics::rate::{RateParts, RateReference};
+
+/// Coordinate frame of a state vector.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Frame {
+    /// Geocentric Celestial Reference System (non-rotating).
+    Gcrs,
+    /// International Terrestrial Reference Frame (rotating with the Earth).
+    Itrf,
+}
+
+/// A geocentric state: position (m) and velocity (m/s) in `frame`.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct StateVector {
+    /// Frame of both vectors.
+    pub frame: Frame,
+    /// Geocentric position, m.
+    pub position_m: [f64; 3],
+    /// Velocity in that frame, m/s (for ITRF: relative to the rotating Earth).
+    pub velocity_m_s: [f64; 3],
+}
+
+/// The rate of a clock at a state, with the periodic (eccentricity) term at that state.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct StateRate {
+    /// Instantaneous fractional rate, split.
+    pub parts: RateParts,
+    /// Periodic part of tau - t at this state, -2 (r . v)/c^2, in seconds (IS-GPS-200
+    /// 20.3.3.3.3.1: equal to the broadcast correction dt_r = F e sqrt(A) sin E_k for a Keplerian
+    /// orbit). Meaningful for bound orbits; for a ground clock it is 0 up to the Earth's rotation.
+    pub periodic_value_s: f64,
+}
+
+/// Smallest geocentric distance accepted for a GCRS position: the GRS80 polar radius less
+/// 11 km (6 345 752.3 m). GCRS axes do not tell where the equator bulge is, so this bound is the
+/// deepest a clock can be anywhere; ITRF positions are checked against the ellipsoid instead.
+pub const MIN_GCRS_DISTANCE_M: f64 = GRS80_SEMI_MINOR_AXIS_M - MAX_DEPTH_BELOW_SURFACE_M;
+
+/// Instantaneous fractional rate of a clock at a geocentric state (first post-Newtonian order).
+///
+/// Inputs: `state` (GCRS or ITRF position in m and velocity in m/s), `reference` (TT or TCG),
+/// `model` (point-mass or J2 Earth potential). Result: [`StateRate`] with
+/// `sr = -v^2/(2c^2)` (v the inertial speed; for ITRF v = v_ecef + omega_E x r) and
+/// `gr = (W0 - U)/c^2` (TT) or `-U/c^2` (TCG), plus the periodic value -2 r.v/c^2.
+///
+/// Notes: J2 uses the frame's z axis as the Earth's figure axis (exact for ITRF; for GCRS off by
+/// precession-nutation, below 3e-15 fractional for low orbits in 2026). External bodies (Moon,
+/// Sun) enter only through their tidal potential, neglected here: at GEO about 1e-16
+/// (Moon) and 8e-16 (Sun) of the fractional rate, at the Moon's distance about 7e-14.
+///
+/// Errors: non-finite components; inertial speed >= c (`velocity_m_s`); a position deeper than
+/// 11 km below the GRS80 ellipsoid (ITRF) or closer than [`MIN_GCRS_DISTANCE_M`] (GCRS), or
+/// farther than the Earth's Hill sphere, 1.5e9 m (`position_m`).
+///
+/// References: IERS Conventions (2010) ch. 10 eq. 10.6; IS-GPS-200 20.3.3.3.3.1; Ashby (2003)
+/// Living Rev. Relativity 6, 1, eq. (21) and (38).
+pub fn state_rate(
+    state: &StateVector,
+    reference: RateReference,
+    model: GravityModel,
+) -> Result<StateRate, RateError> {
+    let position_m = require_finite_vector("position_m", state.position_m)?;
+    let velocity_m_s = require_finite_vector("velocity_m_s", state.velocity_m_s)?;
+    validate_position(state.frame, position_m)?;
+    let inertial_velocity_m_s = match state.frame {
+        Frame::Gcrs => velocity_m_s,
+        Frame::Itrf => itrf_to_inertial_velocity_m_s(position_m, velocity_m_s)?,
+    };
+    let speed_m_s = norm(inertial_velocity_m_s);
+    if speed_m_s.is_nan() || speed_m_s >= SPEED_OF_LIGHT_M_S {
+        return Err(RateError::new(
+            "velocity_m_s",
+            format!("inertial speed must be below c = {SPEED_OF_LIGHT_M_S} m/s, got {speed_m_s}"),
+        ));
+    }
+    let potential_m2_s2 = earth_potential_m2_s2(model, position_m)?;
+    let parts =
+        RateParts::from_speed_and_potential(reference, speed_m_s * speed_m_s, potential_m2_s2);
+    Ok(StateRate {
+        parts,
+        periodic_value_s: periodic_value_s(position_m, inertial_velocity_m_s),
+    })
+}
+
+/// Periodic relativistic term of tau - t at a state, -2 (r . v)/c^2, in seconds.
+///
+/// Inputs: geocentric inertial `position_m` and `velocity_m_s`. For a Keplerian orbit
+/// r . v = sqrt(GM a) e sin E, so this equals -2 sqrt(GM a) e sin(E)/c^2 = F e sqrt(a) sin E.
+/// Reference: IS-GPS-200 20.3.3.3.3.1; Ashby (2003) Living Rev. Relativity 6, 1, eq. (40).
+pub fn periodic_value_s(position_m: [f64; 3], velocity_m_s: [f64; 3]) -> f64 {
+    -2.0 * dot(position_m, velocity_m_s) / SPEED_OF_LIGHT_SQUARED_M2_S2
+}
+
+fn validate_position(frame: Frame, position_m: [f64; 3]) -> Result<(), RateError> {
+    let r_m = norm(position_m);
+    if r_m.is_nan() || r_m > MAX_GEOCENTRIC_DISTANCE_M {
+        return Err(RateError::new(
+            "position_m",
+            format!(
+                "geocentric distance {r_m} m is beyond the Earth's Hill sphere ({MAX_GEOCENTRIC_DISTANCE_M} m), where this geocentric model does not apply"
+            ),
+        ));
+    }
+    let inside = match frame {
+        Frame::Gcrs => r_m < MIN_GCRS_DISTANCE_M,
+        Frame::Itrf => is_deep_inside_earth(position_m),
+    };
+    if inside {
+        return Err(RateError::new(
+            "position_m",
+            format!(
+                "position (geocentric distance {r_m} m) is more than {MAX_DEPTH_BELOW_SURFACE_M} m inside the Earth"
+            ),
+        ));
+    }
+    Ok(())
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::physics::constants::{EARTH_ROTATION_RAD_S, GM_EARTH_M3_S2, L_G};
+    use crate::physics::geodesy::geodetic_to_ecef_m;
+
+    fn circular_gcrs(radius_m: f64) -> StateVector {
+        let speed = (GM_EARTH_M3_S2 / radius_m).sqrt();
+        StateVector {
+            frame: Frame::Gcrs,
+            position_m: [radius_m, 0.0, 0.0],
+            velocity_m_s: [0.0, speed * 0.6, speed * 0.8],
+        }
+    }
+
+    #[test]
+    fn circular_state_matches_three_halves_gm_over_a() {
+        // IERS Conventions (2010) eq. 10.6 with v^2 = GM/a: total = L_G - 3GM/(2ac^2);
+        // navigation orbit a = 26 561.75 km gives about +4.4647e-10 (IS-GPS-200).
+        let a = 26_561_750.0;
+        let rate = state_rate(
+            &circular_gcrs(a),
+            RateReference::Tt,
+            GravityModel::PointMass,
+        )
+        .unwrap();
+        let expected = L_G - 1.5 * GM_EARTH_M3_S2 / a / SPEED_OF_LIGHT_SQUARED_M2_S2;
+        assert!((rate.parts.total() - expected).abs() < 1e-22);
+        assert!((rate.parts.total() - 4.4647e-10).abs() < 0.00005e-10);
+        assert!(
+            rate.periodic_value_s.abs() < 1e-20,
+            "circular orbit: r.v = 0"
+        );
+    }
+
+    #[test]
+    fn itrf_ground_clock_equals_rotating_frame_formula() {
+        // Ashby (2003) eq. (21): a clock at rest in ITRF has v = omega_E x r, so the state rate
+        // equals (W0 - W)/c^2 with W = U + omega^2 (x^2+y^2)/2 (IERS Conventions (2010) ch. 10).
+        let position = geodetic_to_ecef_m(40.0, -105.0, 1650.0).unwrap();
+        let state = StateVector {
+            frame: Frame::Itrf,
+            position_m: position,
+            velocity_m_s: [0.0; 3],
+        };
+        let rate = state_rate(&state, RateReference::Tt, GravityModel::J2).unwrap();
+        let w = crate::physics::gravity::earth_fixed_potential_m2_s2(GravityModel::J2, position)
+            .unwrap();
+        let expected = L_G - w / SPEED_OF_LIGHT_SQUARED_M2_S2;
+        assert!((rate.parts.total() - expected).abs() < 1e-22);
+        let axial = (position[0].powi(2) + position[1].powi(2)).sqrt();
+        let speed = EARTH_ROTATION_RAD_S * axial;
+        assert!((rate.parts.sr + 0.5 * speed * speed / SPEED_OF_LIGHT_SQUARED_M2_S2).abs() < 1e-24);
+    }
+
+    #[test]
+    fn periodic_value_matches_is_gps_200_form() {
+        // IS-GPS-200 20.3.3.3.3.1: dt_r = F e sqrt(A) sin E, F = -2 sqrt(mu)/c^2; at perigee
+        // plus 90 deg of eccentric anomaly, r.v = sqrt(mu a) e sin E.
+        let (a, e, ecc_anomaly) = (26_561_750.0f64, 0.02f64, 1.1f64);
+        let mu = GM_EARTH_M3_S2;
+        let (sin_e, cos_e) = ecc_anomaly.sin_cos();
+        let b = a * (1.0 - e * e).sqrt();
+        let r = [a * (cos_e - e), b * sin_e, 0.0];
+        let rate_e = (mu / a.powi(3)).sqrt() / (1.0 - e * cos_e);
+        let v = [-a * sin_e * rate_e, b * cos_e * rate_e, 0.0];
+        let f = -2.0 * mu.sqrt() / SPEED_OF_LIGHT_SQUARED_M2_S2;
+        let expected = f * e * a.sqrt() * sin_e;
+        let got = periodic_value_s(r, v);
+        assert!(
+            (got - expected).abs() < 1e-12 * expected.abs(),
+            "{got:e} vs {expected:e}"
+        );
+    }
+
+    #[test]
+    fn bad_states_name_the_field() {
+        // Input validation (common practice; bounds documented on state_rate).
+        let good = circular_gcrs(7.0e6);
+        let cases = [
+            (
+                StateVector {
+                    velocity_m_s: [3.0e8, 0.0, 0.0],
+                    ..good
+                },
+                "velocity_m_s",
+            ),
+            (
+                StateVector {
+                    velocity_m_s: [f64::NAN, 0.0, 0.0],
+                    ..good
+                },
+                "velocity_m_s",
+            ),
+            (
+                StateVector {
+                    position_m: [6.3e6, 0.0, 0.0],
+                    ..good
+                },
+                "position_m",
+            ),
+            (
+                StateVector {
+                    position_m: [0.0, 0.0, f64::NEG_INFINITY],
+                    ..good
+                },
+                "position_m",
+            ),
+            (
+                StateVector {
+                    position_m: [2.0e9, 0.0, 0.0],
+                    ..good
+                },
+                "position_m",
+            ),
+            (
+                StateVector {
+                    frame: Frame::Itrf,
+                    position_m: [0.0, 0.0, 6.34e6],
+                    ..good
+                },
+                "position_m",
+            ),
+        ];
+        for (state, field) in cases {
+            let err = state_rate(&state, RateReference::Tt, GravityModel::J2).unwrap_err();
+            assert_eq!(err.field, field, "{err}");
+        }
+        // An ITRF point 6.36e6 m from the centre on the pole axis is above the surface there.
+        let polar = StateVector {
+            frame: Frame::Itrf,
+            position_m: [0.0, 0.0, 6.36e6],
+            ..good
+        };
+        assert!(state_rate(&polar, RateReference::Tt, GravityModel::J2).is_ok());
+    }
+}
