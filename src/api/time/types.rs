@@ -9,7 +9,7 @@ use crate::physics::time::formats::InstantText;
 #[derive(Debug, Clone, Serialize, ToSchema)]
 #[schema(example = json!({
     "scale": "TAI", "iso": "2026-03-14T06:30:37.123456789012", "mjd": "61113.271263003...",
-    "jd": "2461113.771263003...", "j2000_s": "826828237.123456789012", "gnss_week": null
+    "jd": "2461113.771263003...", "j2000_s": "826741837.123456789012", "gnss_week": null
 }))]
 pub struct InstantForms {
     /// The scale the instant is read in.
