@@ -6,8 +6,9 @@ mod common;
 #[test]
 fn committed_document_matches_the_code() {
     let generated = eigenzeit::api::openapi::document_json();
-    let committed = std::fs::read_to_string(concat!(env!("CARGO_MANIFEST_DIR"), "/openapi/openapi.json"))
-        .unwrap_or_default();
+    let committed =
+        std::fs::read_to_string(concat!(env!("CARGO_MANIFEST_DIR"), "/openapi/openapi.json"))
+            .unwrap_or_default();
     assert!(
         committed.trim_end() == generated.trim_end(),
         "openapi/openapi.json is out of date: run `cargo run -- openapi > openapi/openapi.json`"
@@ -33,7 +34,17 @@ async fn served_document_and_docs_page() {
     assert_eq!(page.status().as_u16(), 200);
     let html = page.text().await.unwrap_or_default();
     // The page must work offline: no script, style or font from another host.
-    for needle in ["src=\"http", "href=\"http", "src='http", "href='http", "@import url(http", "cdn"] {
-        assert!(!html.to_lowercase().contains(needle), "the docs page loads {needle} from the network");
+    for needle in [
+        "src=\"http",
+        "href=\"http",
+        "src='http",
+        "href='http",
+        "@import url(http",
+        "cdn",
+    ] {
+        assert!(
+            !html.to_lowercase().contains(needle),
+            "the docs page loads {needle} from the network"
+        );
     }
 }

@@ -48,29 +48,45 @@ async fn leap_second_reads_and_writes() {
     .await;
     assert_eq!(status, 200, "{body}");
     assert_eq!(body["input"]["iso"], "2016-12-31T23:59:60.500000000000");
-    assert_eq!(result_for(&body, "TAI")["iso"], "2017-01-01T00:00:36.500000000000");
+    assert_eq!(
+        result_for(&body, "TAI")["iso"],
+        "2017-01-01T00:00:36.500000000000"
+    );
     // And back: TAI 2017-01-01T00:00:36.5 is UTC 23:59:60.5.
     let (_, _, back) = get_json(
         &server,
         "/v1/time/convert?at=2017-01-01T00:00:36.5&from=TAI&to=UTC",
     )
     .await;
-    assert_eq!(result_for(&back, "UTC")["iso"], "2016-12-31T23:59:60.500000000000");
+    assert_eq!(
+        result_for(&back, "UTC")["iso"],
+        "2016-12-31T23:59:60.500000000000"
+    );
 }
 
 #[tokio::test]
 async fn coordinate_scales_at_j2000() {
     let server = TestServer::start().await;
     // TCG - TT at J2000.0 TT is about 0.505833 s (IERS Conventions (2010) ch. 10).
-    let (status, _, body) =
-        get_json(&server, "/v1/time/convert?at=2451545.0&format=jd&from=TT&to=TCG").await;
+    let (status, _, body) = get_json(
+        &server,
+        "/v1/time/convert?at=2451545.0&format=jd&from=TT&to=TCG",
+    )
+    .await;
     assert_eq!(status, 200, "{body}");
-    let tcg_minus_tt = result_for(&body, "TCG")["difference_s"].as_f64().unwrap_or(0.0);
+    let tcg_minus_tt = result_for(&body, "TCG")["difference_s"]
+        .as_f64()
+        .unwrap_or(0.0);
     assert!((tcg_minus_tt - 0.505_833).abs() < 1e-6, "{tcg_minus_tt}");
     // TCB - TDB at J2000.0 is about 11.2538 s (IERS Conventions (2010) ch. 10).
-    let (_, _, body) =
-        get_json(&server, "/v1/time/convert?at=2451545.0&format=jd&from=TDB&to=TCB").await;
-    let tcb_minus_tdb = result_for(&body, "TCB")["difference_s"].as_f64().unwrap_or(0.0);
+    let (_, _, body) = get_json(
+        &server,
+        "/v1/time/convert?at=2451545.0&format=jd&from=TDB&to=TCB",
+    )
+    .await;
+    let tcb_minus_tdb = result_for(&body, "TCB")["difference_s"]
+        .as_f64()
+        .unwrap_or(0.0);
     assert!((tcb_minus_tdb - 11.2538).abs() < 1e-4, "{tcb_minus_tdb}");
 }
 
@@ -105,7 +121,10 @@ async fn every_format_reads_the_same_event() {
     )
     .await;
     assert_eq!(status, 200, "{body}");
-    assert_eq!(result_for(&body, "UTC")["iso"], "2026-03-14T06:30:00.000000000000");
+    assert_eq!(
+        result_for(&body, "UTC")["iso"],
+        "2026-03-14T06:30:00.000000000000"
+    );
 }
 
 #[tokio::test]
@@ -129,18 +148,73 @@ async fn batch_of_ten_thousand_epochs() {
 async fn bad_inputs_are_problems_naming_the_field() {
     let server = TestServer::start().await;
     let cases = [
-        ("/v1/time/convert?at=2026-03-14T00:00:00&from=XYZ", 422, "unknown_scale", "from"),
-        ("/v1/time/convert?at=2026-02-30T00:00:00", 422, "impossible_date", "at"),
-        ("/v1/time/convert?at=2026-03-14T24:00:01", 422, "impossible_date", "at"),
-        ("/v1/time/convert?at=2026-03-14T23:59:60", 422, "invalid_leap_second", "at"),
-        ("/v1/time/convert?at=2016-12-31T23:59:60&from=TAI", 422, "invalid_leap_second", "at"),
-        ("/v1/time/convert?at=2409:0&format=gnss_week&from=TT", 422, "format_not_for_scale", "at"),
-        ("/v1/time/convert?at=0&format=unix_s&from=TAI", 422, "format_not_for_scale", "at"),
-        ("/v1/time/convert?at=1959-12-31T23:59:59", 422, "utc_before_1960", "at"),
+        (
+            "/v1/time/convert?at=2026-03-14T00:00:00&from=XYZ",
+            422,
+            "unknown_scale",
+            "from",
+        ),
+        (
+            "/v1/time/convert?at=2026-02-30T00:00:00",
+            422,
+            "impossible_date",
+            "at",
+        ),
+        (
+            "/v1/time/convert?at=2026-03-14T24:00:01",
+            422,
+            "impossible_date",
+            "at",
+        ),
+        (
+            "/v1/time/convert?at=2026-03-14T23:59:60",
+            422,
+            "invalid_leap_second",
+            "at",
+        ),
+        (
+            "/v1/time/convert?at=2016-12-31T23:59:60&from=TAI",
+            422,
+            "invalid_leap_second",
+            "at",
+        ),
+        (
+            "/v1/time/convert?at=2409:0&format=gnss_week&from=TT",
+            422,
+            "format_not_for_scale",
+            "at",
+        ),
+        (
+            "/v1/time/convert?at=0&format=unix_s&from=TAI",
+            422,
+            "format_not_for_scale",
+            "at",
+        ),
+        (
+            "/v1/time/convert?at=1959-12-31T23:59:59",
+            422,
+            "utc_before_1960",
+            "at",
+        ),
         ("/v1/time/convert?at=abc", 422, "malformed_instant", "at"),
-        ("/v1/time/convert?at=1e5&format=mjd", 422, "malformed_instant", "at"),
-        ("/v1/time/convert?at=60000&format=fortnight", 422, "unknown_format", "format"),
-        ("/v1/time/convert?at=60000&format=mjd&to=TAI,NOPE", 422, "unknown_scale", "to[1]"),
+        (
+            "/v1/time/convert?at=1e5&format=mjd",
+            422,
+            "malformed_instant",
+            "at",
+        ),
+        (
+            "/v1/time/convert?at=60000&format=fortnight",
+            422,
+            "unknown_format",
+            "format",
+        ),
+        (
+            "/v1/time/convert?at=60000&format=mjd&to=TAI,NOPE",
+            422,
+            "unknown_scale",
+            "to[1]",
+        ),
     ];
     for (path, status, code, field) in cases {
         let answer = get_json(&server, path).await;
@@ -162,9 +236,16 @@ async fn bad_batches_are_problems() {
         422,
         "batch_too_large",
     );
-    assert!(body["detail"].as_str().is_some_and(|d| d.contains('5')), "the limit is named: {body}");
+    assert!(
+        body["detail"].as_str().is_some_and(|d| d.contains('5')),
+        "the limit is named: {body}"
+    );
     let empty = json!({"from": "UTC", "to": ["TAI"], "epochs": []});
-    assert_problem(&post_json(&server, "/v1/time/convert", &empty).await, 422, "empty_batch");
+    assert_problem(
+        &post_json(&server, "/v1/time/convert", &empty).await,
+        422,
+        "empty_batch",
+    );
     let one_bad = json!({"from": "UTC", "to": ["TAI"], "epochs": ["2026-01-01", "2026-02-30"]});
     let body = assert_problem(
         &post_json(&server, "/v1/time/convert", &one_bad).await,
@@ -172,8 +253,13 @@ async fn bad_batches_are_problems() {
         "impossible_date",
     );
     assert_eq!(body["field"], "epochs[1]");
-    let unknown_field = json!({"from": "UTC", "to": ["TAI"], "epochs": ["2026-01-01"], "colour": 1});
-    assert_problem(&post_json(&server, "/v1/time/convert", &unknown_field).await, 400, "invalid_body");
+    let unknown_field =
+        json!({"from": "UTC", "to": ["TAI"], "epochs": ["2026-01-01"], "colour": 1});
+    assert_problem(
+        &post_json(&server, "/v1/time/convert", &unknown_field).await,
+        400,
+        "invalid_body",
+    );
     let response = common::client()
         .post(server.url("/v1/time/convert"))
         .header("content-type", "application/json")
@@ -187,7 +273,11 @@ async fn bad_batches_are_problems() {
 #[tokio::test]
 async fn unknown_routes_and_methods_are_problems() {
     let server = TestServer::start().await;
-    assert_problem(&get_json(&server, "/v1/nothing-here").await, 404, "not_found");
+    assert_problem(
+        &get_json(&server, "/v1/nothing-here").await,
+        404,
+        "not_found",
+    );
     let response = common::client()
         .delete(server.url("/v1/time/convert"))
         .send()
@@ -205,7 +295,11 @@ async fn reference_documents() {
     let (status, _, table) = get_json(&server, "/v1/time/leap-seconds").await;
     assert_eq!(status, 200);
     // The last step of the table: 2017-01-01, TAI - UTC = 37 s (IERS Bulletin C 52).
-    let last = table["entries"].as_array().and_then(|e| e.last()).cloned().unwrap_or_default();
+    let last = table["entries"]
+        .as_array()
+        .and_then(|e| e.last())
+        .cloned()
+        .unwrap_or_default();
     assert_eq!(last["utc_date"], "2017-01-01");
     assert_eq!(last["tai_minus_utc_s"], 37.0);
     // Bulletin C 72 (July 2026): the table expires on 2027-06-28.
@@ -223,5 +317,7 @@ async fn utc_past_expiry_carries_a_warning() {
     assert_eq!(status, 200);
     let warnings = body["warnings"].as_array().cloned().unwrap_or_default();
     assert_eq!(warnings.len(), 1, "{body}");
-    assert!(warnings[0].as_str().is_some_and(|w| w.contains("2027-06-28")));
+    assert!(warnings[0]
+        .as_str()
+        .is_some_and(|w| w.contains("2027-06-28")));
 }

@@ -33,14 +33,20 @@ impl TestServer {
 
     /// Starts a server with the given settings and leap-second table.
     pub async fn start_with_table(settings: Settings, table: LeapTable) -> Self {
-        let listener = TcpListener::bind("127.0.0.1:0").await.expect("bind loopback");
+        let listener = TcpListener::bind("127.0.0.1:0")
+            .await
+            .expect("bind loopback");
         let address = listener.local_addr().expect("local address");
         let state = AppState::new(settings, table);
         let (stop, stopped) = oneshot::channel::<()>();
         let shutdown = async move {
             let _ = stopped.await;
         };
-        let task = tokio::spawn(eigenzeit::ops::server::serve(listener, state.clone(), shutdown));
+        let task = tokio::spawn(eigenzeit::ops::server::serve(
+            listener,
+            state.clone(),
+            shutdown,
+        ));
         Self {
             base: format!("http://{address}"),
             state,
@@ -81,7 +87,11 @@ pub fn client() -> reqwest::Client {
 
 /// GETs `path` and returns (status, content type, JSON body).
 pub async fn get_json(server: &TestServer, path: &str) -> (u16, String, serde_json::Value) {
-    let response = client().get(server.url(path)).send().await.expect("request");
+    let response = client()
+        .get(server.url(path))
+        .send()
+        .await
+        .expect("request");
     split(response).await
 }
 
@@ -122,7 +132,10 @@ pub fn assert_problem(
 ) -> serde_json::Value {
     let (got_status, content_type, body) = answer;
     assert_eq!(*got_status, status, "status; body: {body}");
-    assert_eq!(content_type, "application/problem+json", "content type; body: {body}");
+    assert_eq!(
+        content_type, "application/problem+json",
+        "content type; body: {body}"
+    );
     assert_eq!(body["code"], code, "code; body: {body}");
     assert_eq!(body["status"], status);
     assert!(body["title"].is_string() && body["type"].is_string());
