@@ -6,7 +6,9 @@
 
 use eigenzeit::physics::time::convert::{convert, ConversionContext, TdbEvaluation};
 use eigenzeit::physics::time::formats::{parse_instant, reading_count_attos, InstantFormat};
-use eigenzeit::physics::time::instant::{attos_to_seconds_f64, Instant, ATTOS_PER_DAY};
+use eigenzeit::physics::time::instant::{
+    attos_to_seconds_f64, Instant, ATTOS_PER_DAY, ATTOS_PER_SECOND,
+};
 use eigenzeit::physics::time::leap_seconds::LeapTable;
 use eigenzeit::physics::time::scale::Scale;
 use eigenzeit::physics::time::tdb_series::TopocentricObserver;
@@ -92,7 +94,7 @@ fn agrees_with_erfa_within_one_picosecond() {
 /// Pseudo-random epochs (a small xorshift; fixed seed so failures repeat).
 fn epochs_1960_2100(count: usize) -> Vec<i128> {
     let first = (36_934 - 51_544) as i128 * ATTOS_PER_DAY; // 1960-01-01
-    let span = (73_415 - 36_934) as i128 * ATTOS_PER_DAY; // to 2100-01-01
+    let span_s = (73_415 - 36_934) as i128 * 86_400; // to 2100-01-01
     let mut state: u64 = 0x9e37_79b9_7f4a_7c15;
     (0..count)
         .map(|_| {
@@ -100,7 +102,8 @@ fn epochs_1960_2100(count: usize) -> Vec<i128> {
             state ^= state >> 7;
             state ^= state << 17;
             let high = i128::from(state >> 11);
-            first + (high * span) / (1_i128 << 53) + i128::from(state % 1_000_000_007)
+            let whole_s = (high * span_s) / (1_i128 << 53);
+            first + whole_s * ATTOS_PER_SECOND + i128::from(state % 999_999_999_999_999_989)
         })
         .collect()
 }
