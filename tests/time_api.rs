@@ -227,8 +227,10 @@ async fn bad_inputs_are_problems_naming_the_field() {
 
 #[tokio::test]
 async fn bad_batches_are_problems() {
-    let mut settings = eigenzeit::ops::config::Settings::default();
-    settings.batch_limit = 5;
+    let settings = eigenzeit::ops::config::Settings {
+        batch_limit: 5,
+        ..Default::default()
+    };
     let server = TestServer::start_with(settings).await;
     let too_many = json!({"from": "UTC", "to": ["TAI"], "epochs": vec!["2026-01-01"; 6]});
     let body = assert_problem(

@@ -159,6 +159,26 @@ impl ExactDecimal {
     }
 }
 
+/// Reads the digits after a decimal point (`"123456"` for `.123456`) as attoseconds of one
+/// second, rounding half up beyond the 18th digit. `None` when a character is not a digit.
+pub fn fraction_digits_to_attos(digits: &str) -> Option<i128> {
+    let mut attos: i128 = 0;
+    let mut round_up = false;
+    for (index, byte) in digits.bytes().enumerate() {
+        if !byte.is_ascii_digit() {
+            return None;
+        }
+        let digit = i128::from(byte - b'0');
+        match index {
+            0..=17 => attos = attos * 10 + digit,
+            18 => round_up = digit >= 5,
+            _ => {}
+        }
+    }
+    let kept = digits.len().min(18) as u32;
+    Some(attos * 10_i128.pow(18 - kept) + i128::from(round_up))
+}
+
 /// `fraction_e24 / 10^24 * length_attos`, rounded half up, exactly, for `length_attos < 10^23`.
 pub fn fraction_times(fraction_e24: i128, length_attos: i128) -> i128 {
     let high = length_attos / TEN_POW_12;
@@ -238,6 +258,17 @@ mod tests {
         let day = 86_400 * SECOND;
         let value = ExactDecimal::parse("0.000011574074074074074074").map(|d| d.times_attos(day));
         assert_eq!(value, Ok(SECOND));
+    }
+
+    #[test]
+    fn fraction_digits() {
+        assert_eq!(fraction_digits_to_attos("5"), Some(SECOND / 2));
+        assert_eq!(
+            fraction_digits_to_attos("123456789012345678"),
+            Some(123_456_789_012_345_678)
+        );
+        assert_eq!(fraction_digits_to_attos("0000000000000000005"), Some(1));
+        assert_eq!(fraction_digits_to_attos("12a"), None);
     }
 
     #[test]

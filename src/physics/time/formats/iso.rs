@@ -2,7 +2,7 @@
 //! `2026-073T06:30:00`, with an optional `Z` (UTC) and a second 60 inside a leap second.
 
 use super::super::calendar::CalendarDate;
-use super::super::decimal::ExactDecimal;
+use super::super::decimal::fraction_digits_to_attos;
 use super::super::error::TimeError;
 use super::super::instant::{DayReading, ATTOS_PER_SECOND};
 
@@ -84,19 +84,15 @@ fn parse_time_of_day(text: &str, found: &str) -> Result<(i128, bool), TimeError>
             let second = two_digits(whole, "second", found)?;
             let fraction_attos = match fraction {
                 None => 0,
-                Some(digits)
-                    if !digits.is_empty() && digits.bytes().all(|b| b.is_ascii_digit()) =>
-                {
-                    ExactDecimal::parse(&format!("0.{digits}"))
-                        .map_err(|_| TimeError::malformed(EXPECTED, found))?
-                        .times_attos(ATTOS_PER_SECOND)
-                }
-                Some(_) => {
-                    return Err(TimeError::malformed(
-                        format!("{EXPECTED} (digits after the decimal point)"),
-                        found,
-                    ))
-                }
+                Some(digits) => match fraction_digits_to_attos(digits) {
+                    Some(attos) if !digits.is_empty() => attos,
+                    _ => {
+                        return Err(TimeError::malformed(
+                            format!("{EXPECTED} (digits after the decimal point)"),
+                            found,
+                        ))
+                    }
+                },
             };
             (second, fraction_attos)
         }

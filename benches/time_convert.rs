@@ -1,0 +1,72 @@
+//! Conversion throughput of the time engine.
+//!
+//! Run: `cargo bench --bench time_convert`. The baseline is UTC -> TAI (a table look-up and an
+//! integer add), measured in the same run; UTC -> TDB adds the fitted TDB - TT series.
+
+use criterion::{black_box, criterion_group, criterion_main, Criterion};
+use eigenzeit::physics::time::convert::{convert, ConversionContext, TdbEvaluation};
+use eigenzeit::physics::time::formats::{parse_instant, write_instant, InstantFormat};
+use eigenzeit::physics::time::instant::Instant;
+use eigenzeit::physics::time::leap_seconds::LeapTable;
+use eigenzeit::physics::time::scale::Scale;
+
+fn utc_epochs() -> Vec<Instant> {
+    let table = LeapTable::builtin();
+    (0..1024)
+        .filter_map(|i| {
+            let text = format!("{}", 826_000_000 + i * 86_413);
+            parse_instant(&text, InstantFormat::J2000S, Scale::Utc, table).ok()
+        })
+        .collect()
+}
+
+fn bench(c: &mut Criterion) {
+    let table = LeapTable::builtin();
+    let epochs = utc_epochs();
+    let fitted = ConversionContext::geocentric(table);
+    let full = ConversionContext {
+        tdb_evaluation: TdbEvaluation::FullSeries,
+        ..fitted
+    };
+    // Warm the fitted series' intervals.
+    for epoch in &epochs {
+        let _ = convert(epoch, Scale::Tdb, &fitted);
+    }
+    let mut index = 0usize;
+    let mut next = || {
+        index = (index + 1) % epochs.len();
+        epochs[index]
+    };
+    c.bench_function("baseline: UTC -> TAI", |b| {
+        b.iter(|| convert(black_box(&next()), Scale::Tai, &fitted))
+    });
+    c.bench_function("UTC -> TDB (fitted series)", |b| {
+        b.iter(|| convert(black_box(&next()), Scale::Tdb, &fitted))
+    });
+    c.bench_function("UTC -> TCB (fitted series)", |b| {
+        b.iter(|| convert(black_box(&next()), Scale::Tcb, &fitted))
+    });
+    c.bench_function("UTC -> TDB (full 787-term series)", |b| {
+        b.iter(|| convert(black_box(&next()), Scale::Tdb, &full))
+    });
+    c.bench_function("parse ISO + UTC -> TDB + write every form", |b| {
+        b.iter(|| {
+            let input = parse_instant(
+                black_box("2026-03-14T06:30:00.123456789012"),
+                InstantFormat::Iso,
+                Scale::Utc,
+                table,
+            );
+            input
+                .and_then(|i| convert(&i, Scale::Tdb, &fitted))
+                .and_then(|o| write_instant(&o, table))
+        })
+    });
+}
+
+criterion_group! {
+    name = benches;
+    config = Criterion::default().measurement_time(std::time::Duration::from_secs(3)).warm_up_time(std::time::Duration::from_secs(1));
+    targets = bench
+}
+criterion_main!(benches);
