@@ -61,7 +61,7 @@ fn leap_readiness(state: &AppState) -> LeapReadiness {
     let expiry = crate::physics::time::calendar::CalendarDate::from_mjd(table.expiry_mjd());
     LeapReadiness {
         source: table.source().to_string(),
-        expires: format!("{:04}-{:02}-{:02}", expiry.year, expiry.month, expiry.day),
+        expires: expiry.to_string(),
         expires_in_days: days_to_expiry(table.expiry_mjd()),
         last_refresh_unix_s: refresh.last_success_unix_s,
         last_refresh_error: refresh.last_error,

@@ -141,8 +141,7 @@ fn expiry_warning(instant: &Instant, table: &LeapTable) -> Option<String> {
     }
     let expiry = CalendarDate::from_mjd(table.expiry_mjd());
     Some(format!(
-        "UTC on or after {:04}-{:02}-{:02}, the expiry of the leap-second table in use: TAI - UTC is held at its last value, and a leap second announced later would change this answer",
-        expiry.year, expiry.month, expiry.day
+        "UTC on or after {expiry}, the expiry of the leap-second table in use: TAI - UTC is held at its last value, and a leap second announced later would change this answer"
     ))
 }
 

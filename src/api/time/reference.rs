@@ -78,7 +78,7 @@ pub struct LeapSecondTable {
 
 fn iso_date(mjd: i64) -> String {
     let date = CalendarDate::from_mjd(mjd);
-    format!("{:04}-{:02}-{:02}", date.year, date.month, date.day)
+    date.to_string()
 }
 
 /// Answers a reference document with an ETag derived from `tag_basis`, or 304 when the

@@ -117,6 +117,13 @@ impl CalendarDate {
     }
 }
 
+impl std::fmt::Display for CalendarDate {
+    /// ISO 8601 calendar date, `YYYY-MM-DD`.
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        write!(f, "{:04}-{:02}-{:02}", self.year, self.month, self.day)
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
