@@ -8,6 +8,7 @@ pub mod docs;
 pub mod error;
 pub mod extract;
 pub mod openapi;
+pub mod signal;
 pub mod state;
 pub mod time;
 
@@ -53,6 +54,7 @@ pub fn app(state: AppState) -> Router {
     let settings = state.settings().clone();
     Router::new()
         .merge(time::router())
+        .merge(signal::router())
         .merge(docs::router())
         .route("/healthz", get(health::healthz))
         .route("/readyz", get(health::readyz))

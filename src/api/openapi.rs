@@ -17,6 +17,8 @@ use utoipa::OpenApi;
         crate::api::time::reference::scales,
         crate::api::time::reference::leap_seconds,
         crate::api::time::reference::now,
+        crate::api::signal::path::signal_path,
+        crate::api::signal::two_way::two_way,
         crate::ops::health::healthz,
         crate::ops::health::readyz,
         crate::ops::health::metrics,
@@ -24,6 +26,7 @@ use utoipa::OpenApi;
     components(schemas(crate::api::error::Problem)),
     tags(
         (name = "time", description = "Time scales: conversions, the scales, the leap-second table"),
+        (name = "signal", description = "Signal paths: light time with Sagnac, Shapiro and clock terms; two-way time-transfer Sagnac correction"),
         (name = "operations", description = "Liveness, readiness, metrics")
     )
 )]

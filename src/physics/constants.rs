@@ -119,3 +119,8 @@ pub const MAX_GEOCENTRIC_DISTANCE_M: f64 = 1.5e9;
 
 /// Microseconds per day for a fractional rate of 1 (86 400 s * 1e6 us/s).
 pub const MICROSECONDS_PER_DAY: f64 = 86_400.0e6;
+
+/// Radius of the geostationary orbit, 42 164 172 m: a = (GM / omega_E^2)^(1/3) with GM and the
+/// nominal omega_E of IERS Conventions (2010) table 1.1 (Kepler's third law for a period of one
+/// sidereal day), rounded to the metre; the commonly quoted value is 42 164 km (common practice).
+pub const GEOSTATIONARY_RADIUS_M: f64 = 42_164_172.0;

@@ -1,0 +1,177 @@
+//! `POST /v1/signal/path`.
+
+use axum::extract::State;
+use axum::Json;
+
+use super::types::{
+    Correction, PathEndpointInput, SignalPathAnswer, SignalPathRequest, SignalTerms,
+};
+use crate::api::error::ApiError;
+use crate::api::extract::JsonBody;
+use crate::api::state::AppState;
+use crate::api::time::types::InstantForms;
+use crate::physics::constants::SPEED_OF_LIGHT_M_S;
+use crate::physics::geodesy::geodetic_to_ecef_m;
+use crate::physics::signal::{signal_path as solve, Endpoint, Frame, PathGeometry, SignalError};
+use crate::physics::time::formats::{parse_instant, write_instant, InstantFormat};
+use crate::physics::time::scale::Scale;
+
+/// The sign convention of the path answer.
+pub const PATH_SIGN_CONVENTION: &str = "Path terms are added to geometric_range_m / c to give light_time_s: light_time_s = geometric_range_m / c + sagnac.s + shapiro.s; total = sagnac + shapiro. The Sagnac term is positive for an eastward signal. clock_periodic is the transmitter clock's reading minus coordinate time (-2 r.v/c^2, IS-GPS-200); it is not in light_time_s or total.";
+
+/// An endpoint resolved to a frame, and whether it came from a ground site.
+struct Resolved {
+    frame: Frame,
+    endpoint: Endpoint,
+    ground_site: bool,
+}
+
+fn invalid_endpoint(field: String, detail: &str) -> ApiError {
+    ApiError::unprocessable("invalid_endpoint", detail.to_string()).with_field(field)
+}
+
+fn parse_frame(text: &str, field: String) -> Result<Frame, ApiError> {
+    match text.to_ascii_uppercase().as_str() {
+        "GCRS" => Ok(Frame::Gcrs),
+        "ITRF" => Ok(Frame::Itrf),
+        _ => Err(ApiError::unprocessable(
+            "unknown_frame",
+            format!("unknown frame `{text}`; expected GCRS or ITRF"),
+        )
+        .with_field(field)),
+    }
+}
+
+fn resolve(owner: &str, input: &PathEndpointInput) -> Result<Resolved, ApiError> {
+    if let Some(site) = input.ground_site {
+        if input.frame.is_some() || input.position_m.is_some() || input.velocity_m_s.is_some() {
+            return Err(invalid_endpoint(
+                format!("{owner}.ground_site"),
+                "give either ground_site, or frame and position_m (and optionally velocity_m_s), not both",
+            ));
+        }
+        let position_m = geodetic_to_ecef_m(site.latitude_deg, site.longitude_deg, site.height_m)
+            .map_err(|e| {
+            ApiError::from(SignalError::from_rate(&format!("{owner}.ground_site"), e))
+        })?;
+        return Ok(Resolved {
+            frame: Frame::Itrf,
+            endpoint: Endpoint {
+                position_m,
+                velocity_m_s: None,
+            },
+            ground_site: true,
+        });
+    }
+    let frame_text = input.frame.as_deref().ok_or_else(|| {
+        invalid_endpoint(
+            format!("{owner}.frame"),
+            "missing frame (GCRS or ITRF); or give a ground_site",
+        )
+    })?;
+    let frame = parse_frame(frame_text, format!("{owner}.frame"))?;
+    let position_m = input.position_m.ok_or_else(|| {
+        invalid_endpoint(
+            format!("{owner}.position_m"),
+            "missing position_m (three numbers in metres); or give a ground_site",
+        )
+    })?;
+    Ok(Resolved {
+        frame,
+        endpoint: Endpoint {
+            position_m,
+            velocity_m_s: input.velocity_m_s,
+        },
+        ground_site: false,
+    })
+}
+
+fn correction(seconds: f64) -> Correction {
+    Correction {
+        s: seconds,
+        m: seconds * SPEED_OF_LIGHT_M_S,
+    }
+}
+
+/// Parses the reception epoch and writes it back in every form.
+fn epoch_forms(request: &SignalPathRequest, state: &AppState) -> Result<InstantForms, ApiError> {
+    let scale = request
+        .scale
+        .parse::<Scale>()
+        .map_err(|e| ApiError::unprocessable("unknown_scale", e.to_string()).with_field("scale"))?;
+    let format = match request.format.as_deref() {
+        None => InstantFormat::Iso,
+        Some(text) => text
+            .parse::<InstantFormat>()
+            .map_err(|e| ApiError::from_time(&e, "format"))?,
+    };
+    let table = state.leap_table();
+    let instant = parse_instant(&request.epoch, format, scale, &table)
+        .map_err(|e| ApiError::from_time(&e, "epoch"))?;
+    write_instant(&instant, &table)
+        .map(InstantForms::from)
+        .map_err(|e| ApiError::from_time(&e, "epoch"))
+}
+
+/// Light time and relativistic corrections of a signal from a transmitter to a receiver.
+#[utoipa::path(post, path = "/v1/signal/path", tag = "signal",
+    request_body = SignalPathRequest,
+    responses(
+        (status = 200, description = "The light time and its Sagnac, Shapiro and clock terms", body = SignalPathAnswer),
+        (status = 400, description = "The body is not valid JSON or does not match the schema", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 413, description = "Body above the configured limit", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used (position inside the Earth, speed >= c, identical positions, frames that differ, bad epoch, ...); `field` names it", body = crate::api::error::Problem, content_type = "application/problem+json")))]
+pub async fn signal_path(
+    State(state): State<AppState>,
+    JsonBody(request): JsonBody<SignalPathRequest>,
+) -> Result<Json<SignalPathAnswer>, ApiError> {
+    let epoch = epoch_forms(&request, &state)?;
+    let transmitter = resolve("transmitter", &request.transmitter)?;
+    let receiver = resolve("receiver", &request.receiver)?;
+    if transmitter.frame != receiver.frame {
+        let field = if receiver.ground_site {
+            "transmitter.frame"
+        } else {
+            "receiver.frame"
+        };
+        return Err(ApiError::unprocessable(
+            "frames_differ",
+            "transmitter and receiver must be given in the same frame (a ground_site is ITRF); the GCRS-ITRF rotation is not modelled",
+        )
+        .with_field(field));
+    }
+    let geometry = PathGeometry {
+        frame: transmitter.frame,
+        transmitter: transmitter.endpoint,
+        receiver: receiver.endpoint,
+    };
+    let path = solve(&geometry).map_err(|mut error| {
+        // A ground site has no position_m in the request: point at the site instead.
+        for (owner, resolved) in [("transmitter", &transmitter), ("receiver", &receiver)] {
+            if resolved.ground_site && error.field == format!("{owner}.position_m") {
+                error.field = format!("{owner}.ground_site");
+            }
+        }
+        ApiError::from(error)
+    })?;
+    let frame = match geometry.frame {
+        Frame::Gcrs => "GCRS",
+        Frame::Itrf => "ITRF",
+    };
+    Ok(Json(SignalPathAnswer {
+        epoch,
+        frame: frame.to_string(),
+        light_time_s: path.light_time_s,
+        geometric_range_m: path.geometric_range_m,
+        inertial_range_m: path.inertial_range_m,
+        iterations: path.iterations,
+        terms: SignalTerms {
+            sagnac: correction(path.sagnac_s),
+            shapiro: correction(path.shapiro_s),
+            clock_periodic: path.clock_periodic_s.map(correction),
+        },
+        total: correction(path.sagnac_s + path.shapiro_s),
+        emission_position_m: path.emission_position_m,
+        sign_convention: PATH_SIGN_CONVENTION.to_string(),
+    }))
+}

@@ -1,0 +1,46 @@
+//! The error of every signal-path function: a stable code, the input at fault and why.
+
+use std::fmt;
+
+use crate::physics::rate::error::RateError;
+
+/// Bad input to a signal-path computation.
+#[derive(Debug, Clone, PartialEq)]
+pub struct SignalError {
+    /// Stable machine-readable code (for example `inside_earth`, `speed_not_below_c`).
+    pub code: &'static str,
+    /// The input at fault as a dotted path with its unit suffix, for example
+    /// `transmitter.position_m` or `station_b.latitude_deg`.
+    pub field: String,
+    /// What is wrong with it, for a person to act on.
+    pub message: String,
+}
+
+impl SignalError {
+    /// A new error with `code` about `field`.
+    pub fn new(code: &'static str, field: impl Into<String>, message: impl Into<String>) -> Self {
+        Self {
+            code,
+            field: field.into(),
+            message: message.into(),
+        }
+    }
+
+    /// Wraps an error of the shared geodesy / rate checks, prefixing its field with `owner`
+    /// (for example `station_a` + `latitude_deg` gives `station_a.latitude_deg`).
+    pub fn from_rate(owner: &str, error: RateError) -> Self {
+        Self::new(
+            "invalid_value",
+            format!("{owner}.{}", error.field),
+            error.message,
+        )
+    }
+}
+
+impl fmt::Display for SignalError {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        write!(f, "{}: {}", self.field, self.message)
+    }
+}
+
+impl std::error::Error for SignalError {}

@@ -1,0 +1,299 @@
+//! The signal endpoints through the real server. Each check names its source.
+
+mod common;
+
+use common::{assert_problem, post_json, TestServer};
+use serde_json::{json, Value};
+
+const C_M_S: f64 = 299_792_458.0;
+const NAV_RADIUS_M: f64 = 26_561_750.0;
+const GROUND_M: f64 = 6_378_137.0;
+
+fn number(value: &Value) -> f64 {
+    value
+        .as_f64()
+        .unwrap_or_else(|| panic!("not a number: {value}"))
+}
+
+async fn path(server: &TestServer, transmitter: Value, receiver: Value) -> Value {
+    let body = json!({
+        "transmitter": transmitter, "receiver": receiver,
+        "epoch": "2026-03-14T06:30:00", "scale": "GPST"
+    });
+    let (status, _, answer) = post_json(server, "/v1/signal/path", &body).await;
+    assert_eq!(status, 200, "{answer}");
+    answer
+}
+
+#[tokio::test]
+async fn shapiro_delay_of_a_navigation_satellite_at_zenith_and_horizon() {
+    let server = TestServer::start().await;
+    let zenith = path(
+        &server,
+        json!({"frame": "GCRS", "position_m": [NAV_RADIUS_M, 0.0, 0.0]}),
+        json!({"frame": "GCRS", "position_m": [GROUND_M, 0.0, 0.0]}),
+    )
+    .await;
+    // IERS Conventions (2010) ch. 11 eq. 11.17; PHYSICS.md: about 13 mm at zenith.
+    let zenith_m = number(&zenith["terms"]["shapiro"]["m"]);
+    assert!((0.0125..0.0135).contains(&zenith_m), "{zenith_m}");
+    // m = s * c (definition of the answer).
+    let zenith_s = number(&zenith["terms"]["shapiro"]["s"]);
+    assert!((zenith_s * C_M_S - zenith_m).abs() < 1e-12);
+    let horizon_y = (NAV_RADIUS_M * NAV_RADIUS_M - GROUND_M * GROUND_M).sqrt();
+    let horizon = path(
+        &server,
+        json!({"frame": "GCRS", "position_m": [GROUND_M, horizon_y, 0.0]}),
+        json!({"frame": "GCRS", "position_m": [GROUND_M, 0.0, 0.0]}),
+    )
+    .await;
+    // Same source: about 19 mm near the horizon.
+    let horizon_m = number(&horizon["terms"]["shapiro"]["m"]);
+    assert!((0.018..0.0195).contains(&horizon_m), "{horizon_m}");
+    // GCRS: no Sagnac term (the rotation is in the inertial positions; module documentation).
+    assert_eq!(number(&zenith["terms"]["sagnac"]["s"]), 0.0);
+    assert!(zenith["terms"]["clock_periodic"].is_null());
+    // The epoch is echoed in every form (DESIGN.md instant answer).
+    assert_eq!(zenith["epoch"]["scale"], "GPST");
+    assert_eq!(zenith["epoch"]["iso"], "2026-03-14T06:30:00.000000000000");
+    assert!(zenith["epoch"]["gnss_week"].is_string());
+}
+
+#[tokio::test]
+async fn sagnac_sign_for_satellites_east_and_west_of_an_equatorial_ground_site() {
+    let server = TestServer::start().await;
+    let receiver =
+        json!({"ground_site": {"latitude_deg": 0.0, "longitude_deg": 0.0, "height_m": 0.0}});
+    for longitude_deg in [-40.0_f64, 0.0, 40.0] {
+        let (sin, cos) = longitude_deg.to_radians().sin_cos();
+        let satellite = [NAV_RADIUS_M * cos, NAV_RADIUS_M * sin, 0.0];
+        let answer = path(
+            &server,
+            json!({"frame": "ITRF", "position_m": satellite}),
+            receiver.clone(),
+        )
+        .await;
+        let sagnac_m = number(&answer["terms"]["sagnac"]["m"]);
+        // Hand value of (omega_E/c)(x_T y_R - y_T x_R) (IS-GPS-200 20.3.3.4.3.3.2) with the
+        // receiver at (a, 0, 0): -(omega_E/c) a r_S sin(longitude) = -/+ 26.49 m at +/-40 deg;
+        // 0 at zenith (the exact term adds 0.1 mm of second order there).
+        let hand_m =
+            -7.292_115e-5 / C_M_S * GROUND_M * NAV_RADIUS_M * longitude_deg.to_radians().sin();
+        assert!(
+            (sagnac_m - hand_m).abs() < 1e-3,
+            "{longitude_deg}: {sagnac_m} vs {hand_m}"
+        );
+        if longitude_deg == 0.0 {
+            assert!(sagnac_m.abs() < 2e-4, "zenith {sagnac_m}");
+        } else {
+            assert!((26.48..26.50).contains(&sagnac_m.abs()), "{sagnac_m}");
+        }
+        // Sign convention of the answer: light time = range/c + sagnac + shapiro; total = sum.
+        let light_time_s = number(&answer["light_time_s"]);
+        let range_s = number(&answer["geometric_range_m"]) / C_M_S;
+        let total_s = number(&answer["total"]["s"]);
+        assert!((range_s + total_s - light_time_s).abs() < 1e-16);
+        let terms_s =
+            number(&answer["terms"]["sagnac"]["s"]) + number(&answer["terms"]["shapiro"]["s"]);
+        assert!((terms_s - total_s).abs() < 1e-20);
+    }
+}
+
+#[tokio::test]
+async fn moving_navigation_satellite_converges_with_a_clock_term() {
+    let server = TestServer::start().await;
+    let answer = path(
+        &server,
+        json!({"frame": "ITRF", "position_m": [15_600_000.0, 7_540_000.0, 20_140_000.0],
+               "velocity_m_s": [-2000.0, 2800.0, 500.0]}),
+        json!({"ground_site": {"latitude_deg": 50.8, "longitude_deg": 4.4, "height_m": 100.0}}),
+    )
+    .await;
+    // Common practice: the GNSS light-time iteration converges in a few steps, and MEO light
+    // times lie between 0.067 s (zenith) and 0.086 s (horizon).
+    let iterations = answer["iterations"].as_u64().unwrap_or(99);
+    assert!(iterations <= 5, "{iterations}");
+    let light_time_s = number(&answer["light_time_s"]);
+    assert!((0.067..0.086).contains(&light_time_s), "{light_time_s}");
+    // IS-GPS-200 20.3.3.3.3.1: -2 r.v/c^2 with the inertial velocity; r.(omega x r) = 0, so
+    // it is -2 r.v_ecef/c^2 at emission: recomputed here from the answer's emission position.
+    let emission: Vec<f64> = answer["emission_position_m"]
+        .as_array()
+        .map(|v| v.iter().map(number).collect())
+        .unwrap_or_default();
+    let dot = emission[0] * -2000.0 + emission[1] * 2800.0 + emission[2] * 500.0;
+    let expected_s = -2.0 * dot / (C_M_S * C_M_S);
+    let clock_s = number(&answer["terms"]["clock_periodic"]["s"]);
+    assert!(
+        (clock_s - expected_s).abs() < 1e-20,
+        "{clock_s} vs {expected_s}"
+    );
+}
+
+#[tokio::test]
+async fn two_way_symmetric_stations_and_meridian_stations() {
+    let server = TestServer::start().await;
+    let site =
+        |lat: f64, lon: f64| json!({"latitude_deg": lat, "longitude_deg": lon, "height_m": 0.0});
+    let (status, _, symmetric) = post_json(
+        &server,
+        "/v1/signal/two-way",
+        &json!({"station_a": site(0.0, -10.0), "station_b": site(0.0, 50.0), "satellite_longitude_deg": 20.0}),
+    )
+    .await;
+    assert_eq!(status, 200, "{symmetric}");
+    // 2 omega_E A / c^2 (ITU-R TF.1153) with A = a r_GEO sin(30 deg)/2: 109.1 ns per leg, legs
+    // opposite; the two-way term is their difference, 218.2 ns (the A -> S -> B signal runs
+    // eastward the whole way, so it does not cancel).
+    let leg_a = number(&symmetric["leg_a_s"]);
+    let leg_b = number(&symmetric["leg_b_s"]);
+    assert!((leg_a - 109.1e-9).abs() < 0.05e-9, "{leg_a}");
+    assert!((leg_a + leg_b).abs() < 1e-18);
+    assert!((number(&symmetric["two_way_s"]) - 2.0 * leg_a).abs() < 1e-18);
+    assert_eq!(number(&symmetric["satellite_radius_m"]), 42_164_172.0);
+    // Stations on the sub-satellite meridian: zero projected area (ITU-R TF.1153 area rule).
+    let (_, _, meridian) = post_json(
+        &server,
+        "/v1/signal/two-way",
+        &json!({"station_a": site(45.0, 20.0), "station_b": site(-35.0, 20.0), "satellite_longitude_deg": 20.0}),
+    )
+    .await;
+    assert!(number(&meridian["two_way_s"]).abs() < 1e-20, "{meridian}");
+}
+
+#[tokio::test]
+async fn two_way_transatlantic_magnitude() {
+    // Loose sanity check only (from memory): intercontinental two-way links carry Sagnac
+    // corrections of tens to about two hundred nanoseconds.
+    let server = TestServer::start().await;
+    let (status, _, answer) = post_json(
+        &server,
+        "/v1/signal/two-way",
+        &json!({
+            "station_a": {"latitude_deg": 38.9, "longitude_deg": -77.0, "height_m": 100.0},
+            "station_b": {"latitude_deg": 52.3, "longitude_deg": 10.5, "height_m": 100.0},
+            "satellite_longitude_deg": -50.0
+        }),
+    )
+    .await;
+    assert_eq!(status, 200, "{answer}");
+    let two_way = number(&answer["two_way_s"]);
+    assert!((50e-9..300e-9).contains(&two_way.abs()), "{two_way}");
+    assert!(answer["sign_convention"]
+        .as_str()
+        .is_some_and(|s| s.contains("TI(A)")));
+}
+
+#[tokio::test]
+async fn bad_inputs_are_422_problems_naming_the_field() {
+    // Input validation (common practice; api_conventions: 422 with the field at fault).
+    let server = TestServer::start().await;
+    let sat = json!({"frame": "GCRS", "position_m": [NAV_RADIUS_M, 0.0, 0.0]});
+    let ground = json!({"frame": "GCRS", "position_m": [GROUND_M, 0.0, 0.0]});
+    let request = |transmitter: &Value, receiver: &Value| json!({"transmitter": transmitter, "receiver": receiver, "epoch": "2026-03-14T06:30:00", "scale": "UTC"});
+    let cases = [
+        (
+            request(
+                &sat,
+                &json!({"frame": "GCRS", "position_m": [1.0e6, 0.0, 0.0]}),
+            ),
+            "inside_earth",
+            "receiver.position_m",
+        ),
+        (
+            request(
+                &sat,
+                &json!({"ground_site": {"latitude_deg": 0.0, "longitude_deg": 0.0, "height_m": -50000.0}}),
+            ),
+            "invalid_value",
+            "receiver.ground_site.height_m",
+        ),
+        (
+            request(&sat, &sat),
+            "coincident_endpoints",
+            "receiver.position_m",
+        ),
+        (
+            request(
+                &json!({"frame": "GCRS", "position_m": [NAV_RADIUS_M, 0.0, 0.0], "velocity_m_s": [0.0, 3.0e8, 0.0]}),
+                &ground,
+            ),
+            "speed_not_below_c",
+            "transmitter.velocity_m_s",
+        ),
+        (
+            request(
+                &json!({"frame": "GCRS", "position_m": [-NAV_RADIUS_M, 0.0, 0.0]}),
+                &ground,
+            ),
+            "path_through_earth",
+            "receiver.position_m",
+        ),
+        (
+            request(
+                &sat,
+                &json!({"ground_site": {"latitude_deg": 0.0, "longitude_deg": 0.0, "height_m": 0.0}}),
+            ),
+            "frames_differ",
+            "transmitter.frame",
+        ),
+        (
+            request(
+                &json!({"frame": "ECEF", "position_m": [NAV_RADIUS_M, 0.0, 0.0]}),
+                &ground,
+            ),
+            "unknown_frame",
+            "transmitter.frame",
+        ),
+        (
+            request(&json!({"position_m": [NAV_RADIUS_M, 0.0, 0.0]}), &ground),
+            "invalid_endpoint",
+            "transmitter.frame",
+        ),
+        (
+            request(
+                &sat,
+                &json!({"frame": "GCRS", "position_m": [2.0e9, 0.0, 0.0]}),
+            ),
+            "beyond_range",
+            "receiver.position_m",
+        ),
+        (
+            json!({"transmitter": sat, "receiver": ground, "epoch": "2026-02-30T00:00:00", "scale": "UTC"}),
+            "impossible_date",
+            "epoch",
+        ),
+    ];
+    for (body, code, field) in cases {
+        let answer = post_json(&server, "/v1/signal/path", &body).await;
+        let problem = assert_problem(&answer, 422, code);
+        assert_eq!(problem["field"], field, "{problem}");
+    }
+    let site =
+        |lat: f64, lon: f64| json!({"latitude_deg": lat, "longitude_deg": lon, "height_m": 0.0});
+    let two_way_cases = [
+        (
+            json!({"station_a": site(0.0, 0.0), "station_b": site(0.0, 100.0), "satellite_longitude_deg": 0.0}),
+            "not_visible",
+            "station_b",
+        ),
+        (
+            json!({"station_a": site(95.0, 0.0), "station_b": site(0.0, 10.0), "satellite_longitude_deg": 0.0}),
+            "invalid_value",
+            "station_a.latitude_deg",
+        ),
+        (
+            json!({"station_a": site(0.0, 0.0), "station_b": site(0.0, 10.0), "satellite_longitude_deg": 0.0, "satellite_radius_m": 1000.0}),
+            "invalid_value",
+            "satellite_radius_m",
+        ),
+    ];
+    for (body, code, field) in two_way_cases {
+        let answer = post_json(&server, "/v1/signal/two-way", &body).await;
+        let problem = assert_problem(&answer, 422, code);
+        assert_eq!(problem["field"], field, "{problem}");
+    }
+    // A body that does not match the schema is a 400 (api_conventions).
+    let answer = post_json(&server, "/v1/signal/two-way", &json!({"station_a": {}})).await;
+    assert_problem(&answer, 400, "invalid_body");
+}
