@@ -17,6 +17,8 @@ use utoipa::OpenApi;
         crate::api::time::reference::scales,
         crate::api::time::reference::leap_seconds,
         crate::api::time::reference::now,
+        crate::api::clock::rate::rate,
+        crate::api::clock::compare::compare,
         crate::ops::health::healthz,
         crate::ops::health::readyz,
         crate::ops::health::metrics,
@@ -24,6 +26,7 @@ use utoipa::OpenApi;
     components(schemas(crate::api::error::Problem)),
     tags(
         (name = "time", description = "Time scales: conversions, the scales, the leap-second table"),
+        (name = "clock", description = "Clock rates against TT or TCG: state vectors, orbits, ground and lunar sites; comparisons between clocks"),
         (name = "operations", description = "Liveness, readiness, metrics")
     )
 )]
