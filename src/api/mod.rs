@@ -4,6 +4,7 @@
 //! Handlers parse and validate, call the physics library, and shape the answer. Nothing here
 //! computes physics.
 
+pub mod clock;
 pub mod docs;
 pub mod error;
 pub mod extract;
@@ -54,6 +55,7 @@ pub fn app(state: AppState) -> Router {
     let settings = state.settings().clone();
     Router::new()
         .merge(time::router())
+        .merge(clock::router())
         .merge(signal::router())
         .merge(docs::router())
         .route("/healthz", get(health::healthz))

@@ -17,6 +17,8 @@ use utoipa::OpenApi;
         crate::api::time::reference::scales,
         crate::api::time::reference::leap_seconds,
         crate::api::time::reference::now,
+        crate::api::clock::rate::rate,
+        crate::api::clock::compare::compare,
         crate::api::signal::path::signal_path,
         crate::api::signal::two_way::two_way,
         crate::ops::health::healthz,
@@ -26,6 +28,7 @@ use utoipa::OpenApi;
     components(schemas(crate::api::error::Problem)),
     tags(
         (name = "time", description = "Time scales: conversions, the scales, the leap-second table"),
+        (name = "clock", description = "Clock rates against TT or TCG: state vectors, orbits, ground and lunar sites; comparisons between clocks"),
         (name = "signal", description = "Signal paths: light time with Sagnac, Shapiro and clock terms; two-way time-transfer Sagnac correction"),
         (name = "operations", description = "Liveness, readiness, metrics")
     )

@@ -9,6 +9,7 @@ use crate::physics::constants::{
 };
 use crate::physics::rate::error::{
     require_finite, require_finite_vector, require_latitude_deg, require_longitude_deg, RateError,
+    RateErrorKind,
 };
 
 /// GRS80 semi-minor axis b = a (1 - f), m (6 356 752.3141 m, Moritz, GRS80).
@@ -59,13 +60,15 @@ pub fn require_height_m(field: &'static str, height_m: f64) -> Result<f64, RateE
             format!(
                 "must be at least -{MAX_DEPTH_BELOW_SURFACE_M} m (deeper than any real clock), got {height_m}"
             ),
-        ));
+        )
+        .with_kind(RateErrorKind::BelowSurface));
     }
     if height_m > MAX_SITE_HEIGHT_M {
         return Err(RateError::new(
             field,
             format!("must be at most {MAX_SITE_HEIGHT_M} m for a site fixed to the body, got {height_m}"),
-        ));
+        )
+        .with_kind(RateErrorKind::BeyondModelRange));
     }
     Ok(height_m)
 }

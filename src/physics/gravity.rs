@@ -8,7 +8,9 @@
 use crate::physics::constants::{
     EARTH_ROTATION_RAD_S, EQUATORIAL_RADIUS_EARTH_M, GM_EARTH_M3_S2, GM_MOON_M3_S2, J2_EARTH,
 };
-use crate::physics::rate::error::{require_finite, require_finite_vector, RateError};
+use crate::physics::rate::error::{
+    require_finite, require_finite_vector, RateError, RateErrorKind,
+};
 
 /// Smallest distance from a body's centre at which a potential is evaluated, m. Below it the
 /// point-mass potential is meaningless (and 1/r would overflow); callers apply tighter bounds.
@@ -28,10 +30,16 @@ fn distance_m(field: &'static str, position_m: [f64; 3]) -> Result<f64, RateErro
     require_finite_vector(field, position_m)?;
     let r_m = norm(position_m);
     if !r_m.is_finite() || r_m < MIN_DISTANCE_M {
+        let kind = if r_m.is_finite() {
+            RateErrorKind::BelowSurface
+        } else {
+            RateErrorKind::NotFinite
+        };
         return Err(RateError::new(
             field,
             format!("distance from the body's centre must be at least {MIN_DISTANCE_M} m and finite, got {r_m}"),
-        ));
+        )
+        .with_kind(kind));
     }
     Ok(r_m)
 }

@@ -1,24 +1,89 @@
-//! The error of every rate, potential and geodesy function: the offending input field and why.
+//! The error of every rate, potential and geodesy function: the offending input field, a stable
+//! kind (with its snake_case code) and why.
 
 use std::fmt;
 
+/// What kind of failure a [`RateError`] is; [`RateErrorKind::code`] is its stable name.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum RateErrorKind {
+    /// A value that is not a finite number (NaN, infinite, or a norm that overflows).
+    NotFinite,
+    /// An inertial speed at or above the speed of light.
+    SpeedNotBelowC,
+    /// A position (or periapsis, or height) inside the body, deeper than any real clock.
+    BelowSurface,
+    /// A position (or apoapsis, or height) beyond the range where the model applies.
+    BeyondModelRange,
+    /// A semi-major axis that is zero or negative.
+    InvalidSemiMajorAxis,
+    /// An eccentricity outside [0, 1).
+    InvalidEccentricity,
+    /// A latitude outside [-90, 90] degrees.
+    LatitudeOutOfRange,
+    /// An angle so large that its fraction of a turn is lost (|value| above 1e6 degrees).
+    AngleOutOfRange,
+    /// A gravity model the computation does not offer.
+    UnsupportedGravityModel,
+    /// A nominal frequency that is zero or negative.
+    InvalidFrequency,
+    /// A fractional rate too large for the frequency answer (|y| above 1e-3).
+    RateOutOfRange,
+    /// Any other value that cannot be used.
+    InvalidValue,
+}
+
+impl RateErrorKind {
+    /// The stable snake_case code of this kind (for example `speed_not_below_c`).
+    pub fn code(self) -> &'static str {
+        match self {
+            Self::NotFinite => "not_finite",
+            Self::SpeedNotBelowC => "speed_not_below_c",
+            Self::BelowSurface => "below_surface",
+            Self::BeyondModelRange => "beyond_model_range",
+            Self::InvalidSemiMajorAxis => "invalid_semi_major_axis",
+            Self::InvalidEccentricity => "invalid_eccentricity",
+            Self::LatitudeOutOfRange => "latitude_out_of_range",
+            Self::AngleOutOfRange => "angle_out_of_range",
+            Self::UnsupportedGravityModel => "unsupported_gravity_model",
+            Self::InvalidFrequency => "invalid_frequency",
+            Self::RateOutOfRange => "rate_out_of_range",
+            Self::InvalidValue => "invalid_value",
+        }
+    }
+}
+
 /// Bad input to a clock-rate computation. `field` names the input (for example
-/// `"velocity_m_s"`, `"eccentricity"`, `"latitude_deg"`) so that a caller can point at it.
+/// `"velocity_m_s"`, `"eccentricity"`, `"latitude_deg"`) so that a caller can point at it;
+/// `kind` says what is wrong in a stable, machine-readable way.
 #[derive(Debug, Clone, PartialEq)]
 pub struct RateError {
     /// The input field at fault, in snake_case with its unit suffix.
     pub field: &'static str,
     /// What is wrong with it, for a person to act on.
     pub message: String,
+    /// The kind of failure ([`RateErrorKind::InvalidValue`] unless set with [`Self::with_kind`]).
+    pub kind: RateErrorKind,
 }
 
 impl RateError {
-    /// A new error for `field`.
+    /// A new error for `field`, of kind [`RateErrorKind::InvalidValue`].
     pub fn new(field: &'static str, message: impl Into<String>) -> Self {
         Self {
             field,
             message: message.into(),
+            kind: RateErrorKind::InvalidValue,
         }
+    }
+
+    /// The same error with its kind set.
+    pub fn with_kind(mut self, kind: RateErrorKind) -> Self {
+        self.kind = kind;
+        self
+    }
+
+    /// The stable snake_case code of the failure (see [`RateErrorKind::code`]).
+    pub fn code(&self) -> &'static str {
+        self.kind.code()
     }
 }
 
@@ -35,10 +100,10 @@ pub fn require_finite(field: &'static str, value: f64) -> Result<f64, RateError>
     if value.is_finite() {
         Ok(value)
     } else {
-        Err(RateError::new(
-            field,
-            format!("must be a finite number, got {value}"),
-        ))
+        Err(
+            RateError::new(field, format!("must be a finite number, got {value}"))
+                .with_kind(RateErrorKind::NotFinite),
+        )
     }
 }
 
@@ -50,7 +115,8 @@ pub fn require_finite_vector(field: &'static str, value: [f64; 3]) -> Result<[f6
         Err(RateError::new(
             field,
             format!("every component must be a finite number, got {value:?}"),
-        ))
+        )
+        .with_kind(RateErrorKind::NotFinite))
     }
 }
 
@@ -63,7 +129,8 @@ pub fn require_latitude_deg(field: &'static str, latitude_deg: f64) -> Result<f6
         Err(RateError::new(
             field,
             format!("must lie in [-90, 90] degrees, got {latitude_deg}"),
-        ))
+        )
+        .with_kind(RateErrorKind::LatitudeOutOfRange))
     }
 }
 
@@ -76,6 +143,40 @@ pub fn require_longitude_deg(field: &'static str, longitude_deg: f64) -> Result<
         Err(RateError::new(
             field,
             format!("must be an angle in degrees (|value| <= 1e6), got {longitude_deg}"),
-        ))
+        )
+        .with_kind(RateErrorKind::AngleOutOfRange))
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn codes_are_stable_and_default_is_invalid_value() {
+        // The codes are part of the HTTP contract (DESIGN.md "HTTP contract": stable `code`).
+        assert_eq!(RateError::new("x_m", "bad").code(), "invalid_value");
+        assert_eq!(
+            require_finite("x_m", f64::NAN).unwrap_err().code(),
+            "not_finite"
+        );
+        assert_eq!(
+            require_latitude_deg("latitude_deg", 90.5)
+                .unwrap_err()
+                .code(),
+            "latitude_out_of_range"
+        );
+        assert_eq!(
+            require_longitude_deg("longitude_deg", 2e6)
+                .unwrap_err()
+                .code(),
+            "angle_out_of_range"
+        );
+        assert_eq!(
+            RateError::new("velocity_m_s", "too fast")
+                .with_kind(RateErrorKind::SpeedNotBelowC)
+                .code(),
+            "speed_not_below_c"
+        );
     }
 }

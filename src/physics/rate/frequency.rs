@@ -1,6 +1,6 @@
 //! From a fractional rate to frequencies: the offset seen from the ground and the factory setting.
 
-use crate::physics::rate::error::{require_finite, RateError};
+use crate::physics::rate::error::{require_finite, RateError, RateErrorKind};
 
 /// Frequency consequences of a fractional rate offset y = d(tau)/d(t) - 1.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -32,17 +32,18 @@ pub fn frequency_offset(
 ) -> Result<FrequencyOffset, RateError> {
     require_finite("nominal_hz", nominal_hz)?;
     if nominal_hz <= 0.0 {
-        return Err(RateError::new(
-            "nominal_hz",
-            format!("must be positive, got {nominal_hz}"),
-        ));
+        return Err(
+            RateError::new("nominal_hz", format!("must be positive, got {nominal_hz}"))
+                .with_kind(RateErrorKind::InvalidFrequency),
+        );
     }
     require_finite("fractional_rate", fractional_rate)?;
     if fractional_rate.abs() > MAX_FRACTIONAL_RATE {
         return Err(RateError::new(
             "fractional_rate",
             format!("must be at most {MAX_FRACTIONAL_RATE} in magnitude, got {fractional_rate}"),
-        ));
+        )
+        .with_kind(RateErrorKind::RateOutOfRange));
     }
     Ok(FrequencyOffset {
         nominal_hz,

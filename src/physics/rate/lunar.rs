@@ -6,7 +6,7 @@ use crate::physics::constants::{
 };
 use crate::physics::gravity::{dot, point_mass_potential_m2_s2, tidal_potential_m2_s2};
 use crate::physics::rate::error::{
-    require_finite, require_latitude_deg, require_longitude_deg, RateError,
+    require_finite, require_latitude_deg, require_longitude_deg, RateError, RateErrorKind,
 };
 use crate::physics::rate::{RateParts, RateReference};
 
@@ -36,7 +36,12 @@ pub fn lunar_site_geocentric_state(site: &LunarSite) -> Result<([f64; 3], [f64; 
             format!(
                 "must lie in [-{MAX_DEPTH_BELOW_SURFACE_M}, {MAX_LUNAR_SITE_HEIGHT_M}] m above the mean lunar radius, got {height_m}"
             ),
-        ));
+        )
+        .with_kind(if height_m < 0.0 {
+            RateErrorKind::BelowSurface
+        } else {
+            RateErrorKind::BeyondModelRange
+        }));
     }
     let radius_m = MOON_MEAN_RADIUS_M + height_m;
     let (sin_lat, cos_lat) = site.latitude_deg.to_radians().sin_cos();

@@ -39,7 +39,7 @@ pub mod state;
 mod robustness_tests;
 
 pub use crate::physics::gravity::GravityModel;
-pub use error::RateError;
+pub use error::{RateError, RateErrorKind};
 pub use frequency::{frequency_offset, FrequencyOffset};
 pub use ground::{ground_site_rate, GroundHeight, GroundSite};
 pub use lunar::{lunar_site_rate, LunarSite};
@@ -125,6 +125,32 @@ pub fn fractional_to_microseconds_per_day(fractional: f64) -> f64 {
     fractional * MICROSECONDS_PER_DAY
 }
 
+/// Converts a fractional rate to nanoseconds per day (86 400 s/day, 1e9 ns/s).
+pub fn fractional_to_nanoseconds_per_day(fractional: f64) -> f64 {
+    fractional * MICROSECONDS_PER_DAY * 1.0e3
+}
+
+/// How fast clock A runs relative to clock B, to first order: y_A - y_B, dimensionless
+/// (positive when A gains on B).
+///
+/// Inputs: the rates of A and B against the same reference (TT or TCG). The exact ratio of the
+/// two proper-time rates is (1 + y_A)/(1 + y_B) - 1 = (y_A - y_B)/(1 + y_B); the first-order
+/// difference returned here departs from it by y_B (y_A - y_B), below 1e-18 for clocks near the
+/// Earth (|y| of order 1e-9), the order of the terms the first post-Newtonian model neglects.
+/// The reference drops out (L_G cancels), which is why both must use the same one.
+///
+/// Errors: the two rates use different references (`reference`).
+/// Reference: IERS Conventions (2010) ch. 10 eq. 10.6 applied to each clock.
+pub fn rate_difference(a: &RateParts, b: &RateParts) -> Result<f64, RateError> {
+    if a.reference != b.reference {
+        return Err(RateError::new(
+            "reference",
+            "both rates must be relative to the same reference (TT or TCG)",
+        ));
+    }
+    Ok(a.total() - b.total())
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -155,7 +181,30 @@ mod tests {
 
     #[test]
     fn microseconds_per_day() {
-        // 1e-10 fractional = 8.64 us/day (86 400 s/day; common practice).
+        // 1e-10 fractional = 8.64 us/day = 8640 ns/day (86 400 s/day; common practice).
         assert!((fractional_to_microseconds_per_day(1e-10) - 8.64).abs() < 1e-12);
+        assert!((fractional_to_nanoseconds_per_day(1e-10) - 8640.0).abs() < 1e-9);
+    }
+
+    #[test]
+    fn difference_is_reference_free_and_needs_one_reference() {
+        // IERS Conventions (2010) eq. 10.6: L_G cancels in y_A - y_B.
+        let parts = |reference, v2, u| RateParts::from_speed_and_potential(reference, v2, u);
+        let tt = rate_difference(
+            &parts(RateReference::Tt, 1.5e7, 1.5e7),
+            &parts(RateReference::Tt, 2.0e5, 6.26e7),
+        )
+        .unwrap();
+        let tcg = rate_difference(
+            &parts(RateReference::Tcg, 1.5e7, 1.5e7),
+            &parts(RateReference::Tcg, 2.0e5, 6.26e7),
+        )
+        .unwrap();
+        assert!((tt - tcg).abs() < 1e-24, "{tt:e} {tcg:e}");
+        let mixed = rate_difference(
+            &parts(RateReference::Tt, 1.5e7, 1.5e7),
+            &parts(RateReference::Tcg, 1.5e7, 1.5e7),
+        );
+        assert_eq!(mixed.unwrap_err().field, "reference");
     }
 }

@@ -6,7 +6,7 @@ use crate::physics::constants::{
     GM_EARTH_M3_S2, MAX_GEOCENTRIC_DISTANCE_M, SPEED_OF_LIGHT_SQUARED_M2_S2,
 };
 use crate::physics::gravity::GravityModel;
-use crate::physics::rate::error::{require_finite, RateError};
+use crate::physics::rate::error::{require_finite, RateError, RateErrorKind};
 use crate::physics::rate::state::MIN_GCRS_DISTANCE_M;
 use crate::physics::rate::{RateParts, RateReference};
 
@@ -75,7 +75,8 @@ pub fn orbit_rate(
         return Err(RateError::new(
             "gravity_model",
             "orbit mean rates use the point-mass model; give a state vector to include J2",
-        ));
+        )
+        .with_kind(RateErrorKind::UnsupportedGravityModel));
     }
     let a_m = validate_orbit(orbit)?;
     let e = orbit.eccentricity;
@@ -158,7 +159,8 @@ pub fn eccentric_anomaly_rad(anomaly: Anomaly, eccentricity: f64) -> Result<f64,
         return Err(RateError::new(
             field,
             format!("must be at most {MAX_ANGLE_DEG} degrees in magnitude, got {angle_deg}"),
-        ));
+        )
+        .with_kind(RateErrorKind::AngleOutOfRange));
     }
     let e = eccentricity;
     let angle_rad = angle_deg.to_radians().rem_euclid(2.0 * PI);
@@ -189,29 +191,40 @@ fn validate_orbit(orbit: &KeplerianOrbit) -> Result<f64, RateError> {
         return Err(RateError::new(
             "eccentricity",
             format!("must lie in [0, 1) for a closed orbit, got {e}"),
-        ));
+        )
+        .with_kind(RateErrorKind::InvalidEccentricity));
     }
     if !(MIN_GCRS_DISTANCE_M..=MAX_GEOCENTRIC_DISTANCE_M).contains(&a_m) {
+        let kind = if a_m <= 0.0 {
+            RateErrorKind::InvalidSemiMajorAxis
+        } else if a_m < MIN_GCRS_DISTANCE_M {
+            RateErrorKind::BelowSurface
+        } else {
+            RateErrorKind::BeyondModelRange
+        };
         return Err(RateError::new(
             "semi_major_axis_m",
             format!(
                 "must lie in [{MIN_GCRS_DISTANCE_M}, {MAX_GEOCENTRIC_DISTANCE_M}] m (above the Earth, inside its Hill sphere), got {a_m}"
             ),
-        ));
+        )
+        .with_kind(kind));
     }
     let periapsis_m = a_m * (1.0 - e);
     if periapsis_m < MIN_GCRS_DISTANCE_M {
         return Err(RateError::new(
             "eccentricity",
             format!("periapsis a(1 - e) = {periapsis_m} m is inside the Earth (below {MIN_GCRS_DISTANCE_M} m)"),
-        ));
+        )
+        .with_kind(RateErrorKind::BelowSurface));
     }
     let apoapsis_m = a_m * (1.0 + e);
     if apoapsis_m > MAX_GEOCENTRIC_DISTANCE_M {
         return Err(RateError::new(
             "eccentricity",
             format!("apoapsis a(1 + e) = {apoapsis_m} m is beyond the Earth's Hill sphere ({MAX_GEOCENTRIC_DISTANCE_M} m)"),
-        ));
+        )
+        .with_kind(RateErrorKind::BeyondModelRange));
     }
     Ok(a_m)
 }

@@ -243,4 +243,26 @@ fn bad_orbits_name_the_field() {
     }
     let err = orbit_rate(&good, RateReference::Tt, GravityModel::J2).unwrap_err();
     assert_eq!(err.field, "gravity_model");
+    assert_eq!(err.code(), "unsupported_gravity_model");
+    // Stable codes (the HTTP layer answers them).
+    let code = |orbit: KeplerianOrbit| {
+        orbit_rate(&orbit, RateReference::Tt, GravityModel::PointMass)
+            .unwrap_err()
+            .code()
+    };
+    let with_a = |semi_major_axis_m| KeplerianOrbit {
+        semi_major_axis_m,
+        ..good
+    };
+    let with_e = |eccentricity| KeplerianOrbit {
+        eccentricity,
+        ..good
+    };
+    assert_eq!(code(with_a(0.0)), "invalid_semi_major_axis");
+    assert_eq!(code(with_a(-5.0e6)), "invalid_semi_major_axis");
+    assert_eq!(code(with_a(6.0e6)), "below_surface");
+    assert_eq!(code(with_a(2.0e9)), "beyond_model_range");
+    assert_eq!(code(with_e(1.0)), "invalid_eccentricity");
+    assert_eq!(code(with_e(0.8)), "below_surface");
+    assert_eq!(code(with_a(f64::NAN)), "not_finite");
 }

@@ -1,14 +1,14 @@
 //! Rate of a clock given by its geocentric position and velocity.
 
 use crate::physics::constants::{
-    MAX_DEPTH_BELOW_SURFACE_M, MAX_GEOCENTRIC_DISTANCE_M, SPEED_OF_LIGHT_M_S,
+    GM_EARTH_M3_S2, MAX_DEPTH_BELOW_SURFACE_M, MAX_GEOCENTRIC_DISTANCE_M, SPEED_OF_LIGHT_M_S,
     SPEED_OF_LIGHT_SQUARED_M2_S2,
 };
 use crate::physics::geodesy::{
     is_deep_inside_earth, itrf_to_inertial_velocity_m_s, GRS80_SEMI_MINOR_AXIS_M,
 };
 use crate::physics::gravity::{dot, earth_potential_m2_s2, norm, GravityModel};
-use crate::physics::rate::error::{require_finite_vector, RateError};
+use crate::physics::rate::error::{require_finite_vector, RateError, RateErrorKind};
 use crate::physics::rate::{RateParts, RateReference};
 
 /// Coordinate frame of a state vector.
@@ -40,6 +40,10 @@ pub struct StateRate {
     /// 20.3.3.3.3.1: equal to the broadcast correction dt_r = F e sqrt(A) sin E_k for a Keplerian
     /// orbit). Meaningful for bound orbits; for a ground clock it is 0 up to the Earth's rotation.
     pub periodic_value_s: f64,
+    /// Amplitude of the periodic term of the osculating point-mass Keplerian orbit through this
+    /// state, s (see [`osculating_periodic_amplitude_s`]); None when the state is not on a
+    /// closed orbit whose periapsis clears the Earth (a ground clock, an escape trajectory).
+    pub osculating_amplitude_s: Option<f64>,
 }
 
 /// Smallest geocentric distance accepted for a GCRS position: the GRS80 polar radius less
@@ -82,7 +86,8 @@ pub fn state_rate(
         return Err(RateError::new(
             "velocity_m_s",
             format!("inertial speed must be below c = {SPEED_OF_LIGHT_M_S} m/s, got {speed_m_s}"),
-        ));
+        )
+        .with_kind(RateErrorKind::SpeedNotBelowC));
     }
     let potential_m2_s2 = earth_potential_m2_s2(model, position_m)?;
     let parts =
@@ -90,7 +95,48 @@ pub fn state_rate(
     Ok(StateRate {
         parts,
         periodic_value_s: periodic_value_s(position_m, inertial_velocity_m_s),
+        osculating_amplitude_s: osculating_periodic_amplitude_s(
+            GM_EARTH_M3_S2,
+            position_m,
+            inertial_velocity_m_s,
+        ),
     })
+}
+
+/// Amplitude of the periodic relativistic term of the osculating Keplerian orbit through a
+/// state, 2 sqrt(GM a) e / c^2, in seconds.
+///
+/// Inputs: `gm_m3_s2`, geocentric inertial `position_m` and `velocity_m_s`. With the specific
+/// energy v^2/2 - GM/r = -GM/(2a) and the angular momentum h = |r x v| = sqrt(GM a (1 - e^2)),
+/// GM a e^2 = GM a - h^2, so the amplitude is 2 sqrt(GM a - h^2) / c^2 (no division by e).
+/// Result: None when the orbit is not closed (energy >= 0) or its periapsis a (1 - e) lies
+/// below [`MIN_GCRS_DISTANCE_M`] (the state is then not a free fall around the Earth, e.g. a
+/// clock at rest on the ground), or the inputs are not finite.
+///
+/// References: vis-viva and angular-momentum relations of the two-body problem; IS-GPS-200
+/// 20.3.3.3.3.1 (|F| e sqrt(A)); Ashby (2003) Living Rev. Relativity 6, 1, eq. (40).
+pub fn osculating_periodic_amplitude_s(
+    gm_m3_s2: f64,
+    position_m: [f64; 3],
+    velocity_m_s: [f64; 3],
+) -> Option<f64> {
+    let r_m = norm(position_m);
+    let energy_m2_s2 = 0.5 * dot(velocity_m_s, velocity_m_s) - gm_m3_s2 / r_m;
+    if !energy_m2_s2.is_finite() || energy_m2_s2 >= 0.0 {
+        return None;
+    }
+    let a_m = -gm_m3_s2 / (2.0 * energy_m2_s2);
+    let [x, y, z] = position_m;
+    let [vx, vy, vz] = velocity_m_s;
+    let momentum = [y * vz - z * vy, z * vx - x * vz, x * vy - y * vx];
+    let gm_a = gm_m3_s2 * a_m;
+    let gm_a_e_squared = (gm_a - dot(momentum, momentum)).max(0.0);
+    let eccentricity = (gm_a_e_squared / gm_a).sqrt();
+    let periapsis_m = a_m * (1.0 - eccentricity);
+    if !periapsis_m.is_finite() || periapsis_m < MIN_GCRS_DISTANCE_M {
+        return None;
+    }
+    Some(2.0 * gm_a_e_squared.sqrt() / SPEED_OF_LIGHT_SQUARED_M2_S2)
 }
 
 /// Periodic relativistic term of tau - t at a state, -2 (r . v)/c^2, in seconds.
@@ -110,7 +156,12 @@ fn validate_position(frame: Frame, position_m: [f64; 3]) -> Result<(), RateError
             format!(
                 "geocentric distance {r_m} m is beyond the Earth's Hill sphere ({MAX_GEOCENTRIC_DISTANCE_M} m), where this geocentric model does not apply"
             ),
-        ));
+        )
+        .with_kind(if r_m.is_nan() {
+            RateErrorKind::NotFinite
+        } else {
+            RateErrorKind::BeyondModelRange
+        }));
     }
     let inside = match frame {
         Frame::Gcrs => r_m < MIN_GCRS_DISTANCE_M,
@@ -122,7 +173,8 @@ fn validate_position(frame: Frame, position_m: [f64; 3]) -> Result<(), RateError
             format!(
                 "position (geocentric distance {r_m} m) is more than {MAX_DEPTH_BELOW_SURFACE_M} m inside the Earth"
             ),
-        ));
+        )
+        .with_kind(RateErrorKind::BelowSurface));
     }
     Ok(())
 }
@@ -160,6 +212,48 @@ mod tests {
             rate.periodic_value_s.abs() < 1e-20,
             "circular orbit: r.v = 0"
         );
+        // Circular: e = 0, so the osculating amplitude is 0 (to rounding of GM a - h^2).
+        let amplitude = rate.osculating_amplitude_s.unwrap();
+        assert!(amplitude < 1e-12, "{amplitude:e}");
+    }
+
+    #[test]
+    fn osculating_amplitude_matches_the_orbit_form_and_is_absent_on_the_ground() {
+        // IS-GPS-200 20.3.3.3.3.1: amplitude |F| e sqrt(A) = 2 sqrt(GM a) e / c^2; the state at
+        // eccentric anomaly 1.1 rad of an e = 0.02 orbit has the same osculating a and e.
+        let (a, e, ecc_anomaly) = (26_561_750.0f64, 0.02f64, 1.1f64);
+        let mu = GM_EARTH_M3_S2;
+        let (sin_e, cos_e) = ecc_anomaly.sin_cos();
+        let b = a * (1.0 - e * e).sqrt();
+        let rate_e = (mu / a.powi(3)).sqrt() / (1.0 - e * cos_e);
+        let state = StateVector {
+            frame: Frame::Gcrs,
+            position_m: [a * (cos_e - e), b * sin_e, 0.0],
+            velocity_m_s: [-a * sin_e * rate_e, b * cos_e * rate_e, 0.0],
+        };
+        let rate = state_rate(&state, RateReference::Tt, GravityModel::PointMass).unwrap();
+        let expected = 2.0 * (mu * a).sqrt() * e / SPEED_OF_LIGHT_SQUARED_M2_S2;
+        let got = rate.osculating_amplitude_s.unwrap();
+        assert!(
+            (got - expected).abs() < 1e-9 * expected,
+            "{got:e} vs {expected:e}"
+        );
+        // A clock at rest in ITRF is not in free fall: no osculating amplitude (common practice).
+        let ground = StateVector {
+            frame: Frame::Itrf,
+            position_m: geodetic_to_ecef_m(10.0, 20.0, 0.0).unwrap(),
+            velocity_m_s: [0.0; 3],
+        };
+        let rate = state_rate(&ground, RateReference::Tt, GravityModel::J2).unwrap();
+        assert_eq!(rate.osculating_amplitude_s, None);
+        // Escape speed: no closed orbit.
+        let escape = StateVector {
+            velocity_m_s: [0.0, 12_000.0, 0.0],
+            position_m: [7.0e6, 0.0, 0.0],
+            frame: Frame::Gcrs,
+        };
+        let rate = state_rate(&escape, RateReference::Tt, GravityModel::PointMass).unwrap();
+        assert_eq!(rate.osculating_amplitude_s, None);
     }
 
     #[test]
@@ -255,6 +349,32 @@ mod tests {
             let err = state_rate(&state, RateReference::Tt, GravityModel::J2).unwrap_err();
             assert_eq!(err.field, field, "{err}");
         }
+        // Stable codes (the HTTP layer answers them): speed, depth, distance.
+        let code = |state: StateVector| {
+            state_rate(&state, RateReference::Tt, GravityModel::J2)
+                .unwrap_err()
+                .code()
+        };
+        let fast = StateVector {
+            velocity_m_s: [3.0e8, 0.0, 0.0],
+            ..good
+        };
+        assert_eq!(code(fast), "speed_not_below_c");
+        let deep = StateVector {
+            position_m: [6.3e6, 0.0, 0.0],
+            ..good
+        };
+        assert_eq!(code(deep), "below_surface");
+        let far = StateVector {
+            position_m: [2.0e9, 0.0, 0.0],
+            ..good
+        };
+        assert_eq!(code(far), "beyond_model_range");
+        let huge = StateVector {
+            position_m: [1e300, 1e300, 0.0],
+            ..good
+        };
+        assert_eq!(code(huge), "beyond_model_range");
         // An ITRF point 6.36e6 m from the centre on the pole axis is above the surface there.
         let polar = StateVector {
             frame: Frame::Itrf,

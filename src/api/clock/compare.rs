@@ -1,0 +1,57 @@
+//! `POST /v1/clock/compare`.
+
+use axum::Json;
+
+use super::answer::{CompareAnswer, RateDifferenceAnswer};
+use super::evaluate::{evaluate_item, Defaults};
+use super::types::CompareRequest;
+use crate::api::error::ApiError;
+use crate::api::extract::JsonBody;
+use crate::physics::rate::{
+    fractional_to_microseconds_per_day, fractional_to_nanoseconds_per_day, rate_difference,
+};
+
+/// How fast clock A runs relative to clock B: the rate of each against the common reference
+/// and their difference, to first order. Positive: A runs fast relative to B.
+#[utoipa::path(post, path = "/v1/clock/compare", tag = "clock",
+    request_body = CompareRequest,
+    responses(
+        (status = 200, description = "The rate of each clock and how fast A runs relative to B", body = CompareAnswer),
+        (status = 400, description = "The body is not valid JSON or does not match the schema", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 413, description = "Body above the configured limit", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it (e.g. `clock_b.ground_site.latitude_deg`); the codes are those of `POST /v1/clock/rate`, plus reference_mismatch when the two clocks use different references", body = crate::api::error::Problem, content_type = "application/problem+json")))]
+pub async fn compare(
+    JsonBody(request): JsonBody<CompareRequest>,
+) -> Result<Json<CompareAnswer>, ApiError> {
+    let defaults = Defaults::parse(
+        request.reference.as_deref(),
+        request.gravity_model.as_deref(),
+        request.nominal_frequency_hz,
+    )?;
+    let a = evaluate_item(&request.clock_a, &defaults, "clock_a")?;
+    let b = evaluate_item(&request.clock_b, &defaults, "clock_b")?;
+    let fractional = rate_difference(&a.parts, &b.parts).map_err(|_| {
+        let field = if request.clock_b.reference.is_some() {
+            "clock_b.reference"
+        } else {
+            "clock_a.reference"
+        };
+        ApiError::unprocessable(
+            "reference_mismatch",
+            format!(
+                "clock_a is relative to {} and clock_b to {}; compare clocks against one reference",
+                a.answer.reference, b.answer.reference
+            ),
+        )
+        .with_field(field)
+    })?;
+    Ok(Json(CompareAnswer {
+        clock_a: a.answer,
+        clock_b: b.answer,
+        a_minus_b: RateDifferenceAnswer {
+            fractional,
+            us_per_day: fractional_to_microseconds_per_day(fractional),
+            ns_per_day: fractional_to_nanoseconds_per_day(fractional),
+        },
+    }))
+}

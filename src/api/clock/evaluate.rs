@@ -1,0 +1,390 @@
+//! One clock item: pick its subject, resolve its settings (item over request over default),
+//! call the rate library, shape the answer. Errors name the full JSON path at fault.
+
+use super::answer::{FrequencyAnswer, PeriodicAnswer, RateAnswer, RateSplit};
+use super::notes;
+use super::types::{GroundSiteInput, LunarSiteInput, OrbitInput, RateItem, StateInput};
+use crate::api::error::ApiError;
+use crate::physics::rate::{
+    frequency_offset, ground_site_rate, lunar_site_rate, orbit_rate, state_rate, Anomaly, Frame,
+    GravityModel, GroundHeight, GroundSite, KeplerianOrbit, LunarSite, RateError, RateParts,
+    RateReference, StateVector,
+};
+
+/// Settings given at the request level, already read.
+#[derive(Debug, Clone, Copy, Default)]
+pub struct Defaults {
+    /// Reference scale for items without their own.
+    pub reference: Option<RateReference>,
+    /// Gravity model for items without their own.
+    pub gravity_model: Option<GravityModel>,
+    /// Nominal frequency for items without their own, Hz.
+    pub nominal_frequency_hz: Option<f64>,
+}
+
+impl Defaults {
+    /// Reads the request-level settings; errors name `reference` or `gravity_model`.
+    pub fn parse(
+        reference: Option<&str>,
+        gravity_model: Option<&str>,
+        nominal_frequency_hz: Option<f64>,
+    ) -> Result<Self, ApiError> {
+        Ok(Self {
+            reference: reference
+                .map(|text| parse_reference(text, "reference"))
+                .transpose()?,
+            gravity_model: gravity_model
+                .map(|text| parse_gravity_model(text, "gravity_model"))
+                .transpose()?,
+            nominal_frequency_hz,
+        })
+    }
+}
+
+/// One evaluated item: the answer and the rate it came from.
+#[derive(Debug, Clone)]
+pub struct Evaluated {
+    /// The answer as sent.
+    pub answer: RateAnswer,
+    /// The first-order rate (for comparisons).
+    pub parts: RateParts,
+}
+
+/// Reads `TT` or `TCG` (any letter case).
+pub fn parse_reference(text: &str, field: &str) -> Result<RateReference, ApiError> {
+    match text.trim().to_ascii_uppercase().as_str() {
+        "TT" => Ok(RateReference::Tt),
+        "TCG" => Ok(RateReference::Tcg),
+        _ => Err(ApiError::unprocessable(
+            "unknown_reference",
+            format!("unknown reference `{text}`; expected TT or TCG"),
+        )
+        .with_field(field)),
+    }
+}
+
+fn parse_gravity_model(text: &str, field: &str) -> Result<GravityModel, ApiError> {
+    match text.trim().to_ascii_lowercase().as_str() {
+        "point_mass" => Ok(GravityModel::PointMass),
+        "j2" => Ok(GravityModel::J2),
+        _ => Err(ApiError::unprocessable(
+            "unknown_gravity_model",
+            format!("unknown gravity model `{text}`; expected point_mass or j2"),
+        )
+        .with_field(field)),
+    }
+}
+
+fn reference_name(reference: RateReference) -> &'static str {
+    match reference {
+        RateReference::Tt => "TT",
+        RateReference::Tcg => "TCG",
+    }
+}
+
+fn model_name(model: GravityModel) -> &'static str {
+    match model {
+        GravityModel::PointMass => "point_mass",
+        GravityModel::J2 => "j2",
+    }
+}
+
+/// The one subject of an item.
+enum Subject<'a> {
+    State(&'a StateInput),
+    Orbit(&'a OrbitInput),
+    Ground(&'a GroundSiteInput),
+    Lunar(&'a LunarSiteInput),
+}
+
+impl Subject<'_> {
+    fn key(&self) -> &'static str {
+        match self {
+            Self::State(_) => "state",
+            Self::Orbit(_) => "orbit",
+            Self::Ground(_) => "ground_site",
+            Self::Lunar(_) => "lunar_site",
+        }
+    }
+}
+
+fn subject_of<'a>(item: &'a RateItem, path: &str) -> Result<Subject<'a>, ApiError> {
+    let mut found = Vec::with_capacity(1);
+    if let Some(state) = &item.state {
+        found.push(Subject::State(state));
+    }
+    if let Some(orbit) = &item.orbit {
+        found.push(Subject::Orbit(orbit));
+    }
+    if let Some(site) = &item.ground_site {
+        found.push(Subject::Ground(site));
+    }
+    if let Some(site) = &item.lunar_site {
+        found.push(Subject::Lunar(site));
+    }
+    if found.len() > 1 {
+        let keys: Vec<&str> = found.iter().map(Subject::key).collect();
+        return Err(ApiError::unprocessable(
+            "subject_ambiguous",
+            format!(
+                "{path} gives {}; give exactly one subject per item",
+                keys.join(" and ")
+            ),
+        )
+        .with_field(path));
+    }
+    found.pop().ok_or_else(|| {
+        ApiError::unprocessable(
+            "subject_missing",
+            format!("{path} gives no subject; give exactly one of state, orbit, ground_site, lunar_site"),
+        )
+        .with_field(path)
+    })
+}
+
+/// Where the settings of one item came from, to name them in errors.
+struct Origins<'a> {
+    path: &'a str,
+    subject: &'static str,
+    gravity_field: String,
+    nominal_field: String,
+}
+
+impl Origins<'_> {
+    fn error(&self, error: RateError) -> ApiError {
+        let field = match error.field {
+            "gravity_model" => self.gravity_field.clone(),
+            "nominal_hz" => self.nominal_field.clone(),
+            "fractional_rate" => format!("{}.{}", self.path, self.subject),
+            other => format!("{}.{}.{other}", self.path, self.subject),
+        };
+        ApiError::unprocessable(error.code(), format!("{field}: {}", error.message))
+            .with_field(field)
+    }
+}
+
+fn setting_field(path: &str, name: &str, given_on_item: bool) -> String {
+    if given_on_item {
+        format!("{path}.{name}")
+    } else {
+        name.to_string()
+    }
+}
+
+/// Evaluates one item at JSON path `path` (e.g. `items[3]` or `clock_a`).
+pub fn evaluate_item(
+    item: &RateItem,
+    defaults: &Defaults,
+    path: &str,
+) -> Result<Evaluated, ApiError> {
+    let subject = subject_of(item, path)?;
+    let reference = match &item.reference {
+        Some(text) => parse_reference(text, &format!("{path}.reference"))?,
+        None => defaults.reference.unwrap_or(RateReference::Tt),
+    };
+    let item_model = item
+        .gravity_model
+        .as_deref()
+        .map(|text| parse_gravity_model(text, &format!("{path}.gravity_model")))
+        .transpose()?;
+    let origins = Origins {
+        path,
+        subject: subject.key(),
+        gravity_field: setting_field(path, "gravity_model", item_model.is_some()),
+        nominal_field: setting_field(
+            path,
+            "nominal_frequency_hz",
+            item.nominal_frequency_hz.is_some(),
+        ),
+    };
+    let requested_model = item_model.or(defaults.gravity_model);
+    let mut notes: Vec<String> = Vec::new();
+    let (parts, model_label, periodic, inclination_deg) = match subject {
+        Subject::State(state) => {
+            let model = requested_model.unwrap_or(GravityModel::PointMass);
+            let (parts, periodic) = state_answer(state, reference, model, path, &origins)?;
+            notes.extend(notes::state(model));
+            (parts, model_name(model), Some(periodic), None)
+        }
+        Subject::Orbit(orbit) => {
+            let model = match (item_model, defaults.gravity_model) {
+                (Some(model), _) => model,
+                (None, Some(GravityModel::J2)) => {
+                    notes.push(notes::ORBIT_REQUEST_J2.to_string());
+                    GravityModel::PointMass
+                }
+                _ => GravityModel::PointMass,
+            };
+            let (parts, periodic, inclination) =
+                orbit_answer(orbit, reference, model, path, &origins)?;
+            notes.extend(notes::orbit());
+            (parts, model_name(model), Some(periodic), inclination)
+        }
+        Subject::Ground(site) => {
+            let (parts, label) = ground_answer(site, reference, requested_model, path, &origins)?;
+            notes.extend(notes::ground(label));
+            (parts, label, None, None)
+        }
+        Subject::Lunar(site) => {
+            let lunar = LunarSite {
+                latitude_deg: site.latitude_deg,
+                longitude_deg: site.longitude_deg,
+                height_m: site.height_m.unwrap_or(0.0),
+            };
+            let parts = lunar_site_rate(&lunar, reference).map_err(|e| origins.error(e))?;
+            notes.extend(notes::lunar(requested_model == Some(GravityModel::J2)));
+            (parts, "point_mass", None, None)
+        }
+    };
+    let nominal = item.nominal_frequency_hz.or(defaults.nominal_frequency_hz);
+    let frequency = nominal
+        .map(|nominal_hz| frequency_offset(nominal_hz, parts.total()))
+        .transpose()
+        .map_err(|e| origins.error(e))?
+        .map(|f| FrequencyAnswer {
+            nominal_hz: f.nominal_hz,
+            offset_hz: f.offset_hz,
+            factory_setting_hz: f.factory_setting_hz,
+        });
+    let us = parts.to_microseconds_per_day();
+    let answer = RateAnswer {
+        subject: subject.key().to_string(),
+        reference: reference_name(reference).to_string(),
+        gravity_model: model_label.to_string(),
+        fractional: RateSplit {
+            sr: parts.sr,
+            gr: parts.gr,
+            total: parts.total(),
+        },
+        us_per_day: RateSplit {
+            sr: us.sr,
+            gr: us.gr,
+            total: us.total,
+        },
+        frequency,
+        periodic,
+        inclination_deg,
+        model_notes: notes,
+    };
+    Ok(Evaluated { answer, parts })
+}
+
+fn state_answer(
+    state: &StateInput,
+    reference: RateReference,
+    model: GravityModel,
+    path: &str,
+    origins: &Origins<'_>,
+) -> Result<(RateParts, PeriodicAnswer), ApiError> {
+    let frame = match state.frame.trim().to_ascii_uppercase().as_str() {
+        "GCRS" => Frame::Gcrs,
+        "ITRF" => Frame::Itrf,
+        _ => {
+            return Err(ApiError::unprocessable(
+                "unknown_frame",
+                format!("unknown frame `{}`; expected GCRS or ITRF", state.frame),
+            )
+            .with_field(format!("{path}.state.frame")))
+        }
+    };
+    let vector = StateVector {
+        frame,
+        position_m: state.position_m,
+        velocity_m_s: state.velocity_m_s,
+    };
+    let rate = state_rate(&vector, reference, model).map_err(|e| origins.error(e))?;
+    Ok((
+        rate.parts,
+        PeriodicAnswer {
+            amplitude_s: rate.osculating_amplitude_s,
+            value_at_state_s: Some(rate.periodic_value_s),
+        },
+    ))
+}
+
+fn orbit_answer(
+    orbit: &OrbitInput,
+    reference: RateReference,
+    model: GravityModel,
+    path: &str,
+    origins: &Origins<'_>,
+) -> Result<(RateParts, PeriodicAnswer, Option<f64>), ApiError> {
+    let anomalies = [
+        orbit.true_anomaly_deg.map(Anomaly::TrueDeg),
+        orbit.mean_anomaly_deg.map(Anomaly::MeanDeg),
+        orbit.eccentric_anomaly_deg.map(Anomaly::EccentricDeg),
+    ];
+    let mut given = anomalies.into_iter().flatten();
+    let anomaly = given.next();
+    if given.next().is_some() {
+        return Err(ApiError::unprocessable(
+            "anomaly_ambiguous",
+            "give at most one of true_anomaly_deg, mean_anomaly_deg, eccentric_anomaly_deg",
+        )
+        .with_field(format!("{path}.orbit")));
+    }
+    if let Some(inclination) = orbit.inclination_deg {
+        if !(0.0..=180.0).contains(&inclination) {
+            return Err(ApiError::unprocessable(
+                "angle_out_of_range",
+                format!("inclination must lie in [0, 180] degrees, got {inclination}"),
+            )
+            .with_field(format!("{path}.orbit.inclination_deg")));
+        }
+    }
+    let keplerian = KeplerianOrbit {
+        semi_major_axis_m: orbit.semi_major_axis_m,
+        eccentricity: orbit.eccentricity,
+        anomaly,
+    };
+    let rate = orbit_rate(&keplerian, reference, model).map_err(|e| origins.error(e))?;
+    Ok((
+        rate.mean,
+        PeriodicAnswer {
+            amplitude_s: Some(rate.periodic.amplitude_s),
+            value_at_state_s: rate.periodic.value_s,
+        },
+        orbit.inclination_deg,
+    ))
+}
+
+fn ground_answer(
+    site: &GroundSiteInput,
+    reference: RateReference,
+    requested_model: Option<GravityModel>,
+    path: &str,
+    origins: &Origins<'_>,
+) -> Result<(RateParts, &'static str), ApiError> {
+    let above_geoid = match site
+        .height_reference
+        .as_deref()
+        .map(|text| text.trim().to_ascii_lowercase())
+        .as_deref()
+    {
+        None | Some("ellipsoid") => false,
+        Some("geoid") => true,
+        Some(_) => {
+            return Err(ApiError::unprocessable(
+                "unknown_height_reference",
+                "unknown height reference; expected ellipsoid or geoid",
+            )
+            .with_field(format!("{path}.ground_site.height_reference")))
+        }
+    };
+    let model = requested_model.unwrap_or(GravityModel::J2);
+    let (height, label) = if above_geoid {
+        (
+            GroundHeight::AboveGeoidM(site.height_m),
+            "grs80_normal_gravity",
+        )
+    } else {
+        (GroundHeight::EllipsoidalM(site.height_m), model_name(model))
+    };
+    let ground = GroundSite {
+        latitude_deg: site.latitude_deg,
+        longitude_deg: site.longitude_deg,
+        height,
+    };
+    let parts = ground_site_rate(&ground, reference, model).map_err(|e| origins.error(e))?;
+    Ok((parts, label))
+}

@@ -1,0 +1,65 @@
+//! `POST /v1/clock/rate`.
+
+use axum::extract::State;
+use axum::http::StatusCode;
+use axum::Json;
+
+use super::answer::RateBatchAnswer;
+use super::evaluate::{evaluate_item, Defaults};
+use super::types::RateRequest;
+use crate::api::error::ApiError;
+use crate::api::extract::JsonBody;
+use crate::api::state::AppState;
+
+/// Rate offsets of clocks (state vectors, orbits, ground sites, lunar sites) relative to TT or
+/// TCG, split into the velocity and gravity parts, with the frequency offset and the periodic
+/// term where they apply. Positive rates: the clock runs fast relative to the reference.
+#[utoipa::path(post, path = "/v1/clock/rate", tag = "clock",
+    request_body = RateRequest,
+    responses(
+        (status = 200, description = "One answer per item, in order", body = RateBatchAnswer),
+        (status = 400, description = "The body is not valid JSON or does not match the schema (e.g. a number beyond the f64 range such as 1e400, a missing or unknown field)", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 413, description = "Body above the configured limit", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it (e.g. `items[3].orbit.eccentricity`) and `code` says why: subject_missing, subject_ambiguous, unknown_reference, unknown_gravity_model, unknown_frame, unknown_height_reference, anomaly_ambiguous, empty_batch, batch_too_large, not_finite, speed_not_below_c, below_surface, beyond_model_range, invalid_semi_major_axis, invalid_eccentricity, latitude_out_of_range, angle_out_of_range, unsupported_gravity_model, invalid_frequency, rate_out_of_range", body = crate::api::error::Problem, content_type = "application/problem+json")))]
+pub async fn rate(
+    State(state): State<AppState>,
+    JsonBody(request): JsonBody<RateRequest>,
+) -> Result<Json<RateBatchAnswer>, ApiError> {
+    let limit = state.settings().batch_limit;
+    if request.items.is_empty() {
+        return Err(
+            ApiError::unprocessable("empty_batch", "expected at least one item")
+                .with_field("items"),
+        );
+    }
+    if request.items.len() > limit {
+        return Err(ApiError::unprocessable(
+            "batch_too_large",
+            format!(
+                "{} items in one request; the configured limit is {limit} (see --batch-limit)",
+                request.items.len()
+            ),
+        )
+        .with_field("items"));
+    }
+    let defaults = Defaults::parse(
+        request.reference.as_deref(),
+        request.gravity_model.as_deref(),
+        request.nominal_frequency_hz,
+    )?;
+    let work = move || {
+        request
+            .items
+            .iter()
+            .enumerate()
+            .map(|(index, item)| {
+                evaluate_item(item, &defaults, &format!("items[{index}]"))
+                    .map(|evaluated| evaluated.answer)
+            })
+            .collect::<Result<Vec<_>, _>>()
+    };
+    let results = tokio::task::spawn_blocking(work).await.map_err(|e| {
+        ApiError::new(StatusCode::INTERNAL_SERVER_ERROR, "internal", e.to_string())
+    })??;
+    Ok(Json(RateBatchAnswer { results }))
+}

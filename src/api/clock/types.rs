@@ -1,0 +1,179 @@
+//! Request types of the clock-rate endpoints.
+
+use serde::Deserialize;
+use utoipa::ToSchema;
+
+/// Names of the reference time scales (documentation of the `reference` strings).
+#[derive(Debug, Clone, Copy, ToSchema)]
+#[allow(clippy::upper_case_acronyms, dead_code)]
+pub enum ReferenceName {
+    /// Terrestrial Time: a clock at rest on the geoid has rate 0.
+    TT,
+    /// Geocentric Coordinate Time (TT runs slower than TCG by L_G = 6.969290134e-10).
+    TCG,
+}
+
+/// Names of the Earth gravity models (documentation of the `gravity_model` strings).
+#[derive(Debug, Clone, Copy, ToSchema)]
+#[serde(rename_all = "snake_case")]
+#[allow(dead_code)]
+pub enum GravityModelName {
+    /// U = GM/r with GM of IERS Conventions (2010) table 1.1.
+    PointMass,
+    /// U = GM/r (1 - J2 (a_E/r)^2 P2(sin phi)) with GM, J2, a_E of IERS Conventions (2010).
+    J2,
+}
+
+/// A geocentric state vector.
+#[derive(Debug, Clone, Deserialize, ToSchema)]
+#[serde(deny_unknown_fields)]
+#[schema(example = json!({"frame": "GCRS", "position_m": [26561750.0, 0.0, 0.0],
+    "velocity_m_s": [0.0, 2324.298, 3099.064]}))]
+pub struct StateInput {
+    /// `GCRS` (non-rotating, geocentric) or `ITRF` (Earth-fixed, rotating; the velocity is then
+    /// relative to the rotating Earth and the rotation omega_E x r is added).
+    #[schema(example = "GCRS")]
+    pub frame: String,
+    /// Geocentric position [x, y, z], metres.
+    pub position_m: [f64; 3],
+    /// Velocity [vx, vy, vz] in `frame`, metres per second.
+    pub velocity_m_s: [f64; 3],
+}
+
+/// A Keplerian orbit around the Earth (point mass). Give at most one anomaly; with one, the
+/// answer carries the periodic term's value at that point.
+#[derive(Debug, Clone, Deserialize, ToSchema)]
+#[serde(deny_unknown_fields)]
+#[schema(example = json!({"semi_major_axis_m": 26561750.0, "eccentricity": 0.01,
+    "inclination_deg": 55.0, "mean_anomaly_deg": 30.0}))]
+pub struct OrbitInput {
+    /// Semi-major axis a, metres (periapsis above the Earth, apoapsis inside its Hill sphere,
+    /// 1.5e9 m).
+    pub semi_major_axis_m: f64,
+    /// Eccentricity e, in [0, 1).
+    pub eccentricity: f64,
+    /// Inclination, degrees in [0, 180]. Accepted and echoed; it does not change the
+    /// first-order rate of a point-mass orbit.
+    pub inclination_deg: Option<f64>,
+    /// True anomaly nu, degrees (|value| <= 1e6).
+    pub true_anomaly_deg: Option<f64>,
+    /// Mean anomaly M, degrees (|value| <= 1e6).
+    pub mean_anomaly_deg: Option<f64>,
+    /// Eccentric anomaly E, degrees (|value| <= 1e6).
+    pub eccentric_anomaly_deg: Option<f64>,
+}
+
+/// A clock at rest on the rotating Earth.
+#[derive(Debug, Clone, Deserialize, ToSchema)]
+#[serde(deny_unknown_fields)]
+#[schema(example = json!({"latitude_deg": 47.3, "longitude_deg": 8.5, "height_m": 500.0,
+    "height_reference": "geoid"}))]
+pub struct GroundSiteInput {
+    /// Geodetic latitude on GRS80, degrees in [-90, 90].
+    pub latitude_deg: f64,
+    /// Longitude, degrees east (|value| <= 1e6).
+    pub longitude_deg: f64,
+    /// Height above `height_reference`, metres, in [-11 000, 1e8]. Higher clocks run faster
+    /// (about +1.09e-16 per metre near the ground).
+    pub height_m: f64,
+    /// `ellipsoid` (default: height above the GRS80 ellipsoid, the rate comes from the gravity
+    /// model) or `geoid` (orthometric height: W0 - W from GRS80 normal gravity, so a clock on
+    /// the geoid has rate 0 against TT; the gravity model is not used).
+    #[schema(example = "ellipsoid")]
+    pub height_reference: Option<String>,
+}
+
+/// A clock fixed on the Moon's surface.
+#[derive(Debug, Clone, Deserialize, ToSchema)]
+#[serde(deny_unknown_fields)]
+#[schema(example = json!({"latitude_deg": -89.5, "longitude_deg": 0.0, "height_m": 0.0}))]
+pub struct LunarSiteInput {
+    /// Selenographic latitude, degrees in [-90, 90] (IAU mean-Earth/polar-axis system).
+    pub latitude_deg: f64,
+    /// Selenographic longitude, degrees east; 0 is the mean sub-Earth point.
+    pub longitude_deg: f64,
+    /// Height above the mean lunar sphere of radius 1737.4 km, metres, in [-11 000, 100 000]
+    /// (default 0).
+    pub height_m: Option<f64>,
+}
+
+/// One clock: exactly one subject (`state`, `orbit`, `ground_site`, `lunar_site`), and
+/// optional settings that override those of the request.
+#[derive(Debug, Clone, Deserialize, ToSchema)]
+#[serde(deny_unknown_fields)]
+#[schema(example = json!({"orbit": {"semi_major_axis_m": 26561750.0, "eccentricity": 0.0},
+    "nominal_frequency_hz": 10.23e6}))]
+pub struct RateItem {
+    /// A geocentric state vector (instantaneous rate).
+    pub state: Option<StateInput>,
+    /// A Keplerian orbit (rate averaged over one revolution, and the periodic term).
+    pub orbit: Option<OrbitInput>,
+    /// A site fixed on the rotating Earth.
+    pub ground_site: Option<GroundSiteInput>,
+    /// A site fixed on the Moon.
+    pub lunar_site: Option<LunarSiteInput>,
+    /// Reference scale for this clock (`TT` or `TCG`); overrides the request's.
+    #[schema(value_type = Option<ReferenceName>)]
+    pub reference: Option<String>,
+    /// Gravity model for this clock (`point_mass` or `j2`); overrides the request's. Orbits
+    /// offer only `point_mass`.
+    #[schema(value_type = Option<GravityModelName>)]
+    pub gravity_model: Option<String>,
+    /// Nominal oscillator frequency for this clock, Hz (> 0); overrides the request's.
+    pub nominal_frequency_hz: Option<f64>,
+}
+
+/// Rates of many clocks.
+#[derive(Debug, Clone, Deserialize, ToSchema)]
+#[serde(deny_unknown_fields)]
+#[schema(example = json!({
+    "items": [
+        {"orbit": {"semi_major_axis_m": 26561750.0, "eccentricity": 0.01, "mean_anomaly_deg": 30.0}},
+        {"ground_site": {"latitude_deg": 47.3, "longitude_deg": 8.5, "height_m": 500.0}},
+        {"state": {"frame": "GCRS", "position_m": [7000000.0, 0.0, 0.0], "velocity_m_s": [0.0, 7546.05, 0.0]}},
+        {"lunar_site": {"latitude_deg": -89.5, "longitude_deg": 0.0}}
+    ],
+    "reference": "TT",
+    "nominal_frequency_hz": 10.23e6
+}))]
+pub struct RateRequest {
+    /// The clocks, at least one and at most the configured batch limit (default 100 000).
+    pub items: Vec<RateItem>,
+    /// Reference scale for every item without its own: `TT` (default) or `TCG`.
+    #[schema(value_type = Option<ReferenceName>)]
+    pub reference: Option<String>,
+    /// Gravity model for every item without its own: `point_mass` or `j2`. Without any, ground
+    /// sites (ellipsoidal height) use `j2` (a point-mass Earth is off by up to about 7e-13 on the
+    /// ground) and the other subjects `point_mass`. Orbits always use `point_mass` (a
+    /// request-level `j2` does not apply to them; their answer says so); the Earth's J2 is
+    /// below 1e-17 of rate at the Moon.
+    #[schema(value_type = Option<GravityModelName>)]
+    pub gravity_model: Option<String>,
+    /// Nominal oscillator frequency for every item without its own, Hz (> 0): adds the
+    /// `frequency` answer.
+    pub nominal_frequency_hz: Option<f64>,
+}
+
+/// Two clocks to compare.
+#[derive(Debug, Clone, Deserialize, ToSchema)]
+#[serde(deny_unknown_fields)]
+#[schema(example = json!({
+    "clock_a": {"orbit": {"semi_major_axis_m": 26561750.0, "eccentricity": 0.0}},
+    "clock_b": {"ground_site": {"latitude_deg": 47.3, "longitude_deg": 8.5, "height_m": 0.0,
+        "height_reference": "geoid"}},
+    "reference": "TT"
+}))]
+pub struct CompareRequest {
+    /// Clock A (the clock whose gain is reported).
+    pub clock_a: RateItem,
+    /// Clock B (the clock A is compared with).
+    pub clock_b: RateItem,
+    /// Reference scale for both clocks (default `TT`); both must end up with the same one.
+    #[schema(value_type = Option<ReferenceName>)]
+    pub reference: Option<String>,
+    /// Gravity model for a clock without its own (see `POST /v1/clock/rate`).
+    #[schema(value_type = Option<GravityModelName>)]
+    pub gravity_model: Option<String>,
+    /// Nominal oscillator frequency for a clock without its own, Hz (> 0).
+    pub nominal_frequency_hz: Option<f64>,
+}
