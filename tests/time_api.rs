@@ -262,6 +262,26 @@ async fn bad_batches_are_problems() {
         400,
         "invalid_body",
     );
+    // A body that does not match the schema names the JSON path at fault.
+    let wrong_type = json!({"from": "UTC", "to": ["TAI"], "epochs": ["2026-01-01", 7]});
+    let body = assert_problem(
+        &post_json(&server, "/v1/time/convert", &wrong_type).await,
+        400,
+        "invalid_body",
+    );
+    assert_eq!(body["field"], "epochs[1]");
+    let response = common::client()
+        .post(server.url("/v1/time/convert"))
+        .header("content-type", "text/plain")
+        .body("{}")
+        .send()
+        .await
+        .expect("request");
+    assert_problem(
+        &common::split(response).await,
+        415,
+        "unsupported_media_type",
+    );
     let response = common::client()
         .post(server.url("/v1/time/convert"))
         .header("content-type", "application/json")

@@ -1,6 +1,6 @@
 //! Extractors that answer their rejections as problem+json.
 
-use axum::extract::rejection::{JsonRejection, QueryRejection};
+use axum::extract::rejection::QueryRejection;
 use axum::extract::{FromRequest, FromRequestParts, Request};
 use axum::http::request::Parts;
 use axum::http::StatusCode;
@@ -19,32 +19,60 @@ where
     type Rejection = ApiError;
 
     async fn from_request(request: Request, state: &S) -> Result<Self, Self::Rejection> {
-        match axum::Json::<T>::from_request(request, state).await {
-            Ok(axum::Json(value)) => Ok(Self(value)),
-            Err(rejection) => Err(json_rejection(rejection)),
+        let is_json = request
+            .headers()
+            .get(axum::http::header::CONTENT_TYPE)
+            .and_then(|value| value.to_str().ok())
+            .and_then(|value| value.split(';').next())
+            .is_some_and(|media| {
+                let media = media.trim().to_ascii_lowercase();
+                media == "application/json" || media.ends_with("+json")
+            });
+        if !is_json {
+            return Err(ApiError::new(
+                StatusCode::UNSUPPORTED_MEDIA_TYPE,
+                "unsupported_media_type",
+                "expected a JSON body with Content-Type: application/json",
+            ));
         }
+        let bytes = axum::body::Bytes::from_request(request, state)
+            .await
+            .map_err(|rejection| match rejection.status() {
+                StatusCode::PAYLOAD_TOO_LARGE => body_too_large(),
+                _ => ApiError::bad_request(
+                    "unreadable_body",
+                    format!("the request body cannot be read: {}", rejection.body_text()),
+                ),
+            })?;
+        parse_json(&bytes).map(Self)
     }
 }
 
-fn json_rejection(rejection: JsonRejection) -> ApiError {
-    let status = rejection.status();
-    let detail = rejection.body_text();
-    match status {
-        StatusCode::PAYLOAD_TOO_LARGE => body_too_large(),
-        StatusCode::UNSUPPORTED_MEDIA_TYPE => ApiError::new(
-            status,
-            "unsupported_media_type",
-            "expected a JSON body with Content-Type: application/json",
-        ),
-        StatusCode::UNPROCESSABLE_ENTITY => ApiError::bad_request(
-            "invalid_body",
-            format!("the JSON body does not match the schema: {detail}"),
-        ),
-        _ => ApiError::bad_request(
+/// Reads JSON into `T`; a failure is a 400 problem naming the JSON path at fault.
+pub fn parse_json<T: DeserializeOwned>(bytes: &[u8]) -> Result<T, ApiError> {
+    let mut deserializer = serde_json::Deserializer::from_slice(bytes);
+    let value = serde_path_to_error::deserialize(&mut deserializer).map_err(|error| {
+        let path = error.path().to_string();
+        let inner = error.into_inner();
+        let (code, what) = if inner.is_data() {
+            ("invalid_body", "the JSON body does not match the schema")
+        } else {
+            ("invalid_json", "the body is not valid JSON")
+        };
+        let problem = ApiError::bad_request(code, format!("{what}: {inner}"));
+        if path == "." || path.is_empty() {
+            problem
+        } else {
+            problem.with_field(path)
+        }
+    })?;
+    deserializer.end().map_err(|error| {
+        ApiError::bad_request(
             "invalid_json",
-            format!("the body is not valid JSON: {detail}"),
-        ),
-    }
+            format!("the body is not valid JSON: {error}"),
+        )
+    })?;
+    Ok(value)
 }
 
 /// The problem answered when a body is above the configured limit.
