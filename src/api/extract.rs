@@ -108,3 +108,30 @@ fn query_rejection(rejection: QueryRejection) -> ApiError {
         format!("the query string cannot be read: {}", rejection.body_text()),
     )
 }
+
+/// Checks the size of a batch: 422 `empty_batch` when empty, 422 `batch_too_large` (naming the
+/// configured limit) above `limit`. `field` is the list's JSON path, `noun` what it holds.
+pub fn check_batch_size(
+    count: usize,
+    limit: usize,
+    field: &str,
+    noun: &str,
+) -> Result<(), ApiError> {
+    if count == 0 {
+        return Err(ApiError::unprocessable(
+            "empty_batch",
+            format!("expected at least one {noun}"),
+        )
+        .with_field(field));
+    }
+    if count > limit {
+        return Err(ApiError::unprocessable(
+            "batch_too_large",
+            format!(
+                "{count} {noun}s in one request; the configured limit is {limit} (see --batch-limit)"
+            ),
+        )
+        .with_field(field));
+    }
+    Ok(())
+}

@@ -8,7 +8,7 @@ use super::answer::RateBatchAnswer;
 use super::evaluate::{evaluate_item, Defaults};
 use super::types::RateRequest;
 use crate::api::error::ApiError;
-use crate::api::extract::JsonBody;
+use crate::api::extract::{check_batch_size, JsonBody};
 use crate::api::state::AppState;
 
 /// Rate offsets of clocks (state vectors, orbits, ground sites, lunar sites) relative to TT or
@@ -25,23 +25,12 @@ pub async fn rate(
     State(state): State<AppState>,
     JsonBody(request): JsonBody<RateRequest>,
 ) -> Result<Json<RateBatchAnswer>, ApiError> {
-    let limit = state.settings().batch_limit;
-    if request.items.is_empty() {
-        return Err(
-            ApiError::unprocessable("empty_batch", "expected at least one item")
-                .with_field("items"),
-        );
-    }
-    if request.items.len() > limit {
-        return Err(ApiError::unprocessable(
-            "batch_too_large",
-            format!(
-                "{} items in one request; the configured limit is {limit} (see --batch-limit)",
-                request.items.len()
-            ),
-        )
-        .with_field("items"));
-    }
+    check_batch_size(
+        request.items.len(),
+        state.settings().batch_limit,
+        "items",
+        "item",
+    )?;
     let defaults = Defaults::parse(
         request.reference.as_deref(),
         request.gravity_model.as_deref(),

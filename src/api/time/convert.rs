@@ -9,7 +9,7 @@ use super::types::{
     ObserverInput,
 };
 use crate::api::error::ApiError;
-use crate::api::extract::{JsonBody, QueryParams};
+use crate::api::extract::{check_batch_size, JsonBody, QueryParams};
 use crate::api::state::AppState;
 use crate::physics::time::calendar::CalendarDate;
 use crate::physics::time::convert::{convert, ConversionContext, TdbEvaluation};
@@ -234,24 +234,12 @@ pub async fn convert_post(
     let from = parse_scale(&request.from, "from")?;
     let targets = parse_targets(request.to.iter().map(String::as_str), "to")?;
     let format = parse_format(request.format.as_deref(), "format")?;
-    let limit = state.settings().batch_limit;
-    if request.epochs.is_empty() {
-        return Err(
-            ApiError::unprocessable("empty_batch", "expected at least one epoch")
-                .with_field("epochs"),
-        );
-    }
-    if request.epochs.len() > limit {
-        return Err(ApiError::new(
-            StatusCode::UNPROCESSABLE_ENTITY,
-            "batch_too_large",
-            format!(
-                "{} epochs in one request; the configured limit is {limit} (see --batch-limit)",
-                request.epochs.len()
-            ),
-        )
-        .with_field("epochs"));
-    }
+    check_batch_size(
+        request.epochs.len(),
+        state.settings().batch_limit,
+        "epochs",
+        "epoch",
+    )?;
     let observer = request
         .observer
         .as_ref()
