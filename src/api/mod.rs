@@ -9,6 +9,7 @@ pub mod docs;
 pub mod error;
 pub mod extract;
 pub mod openapi;
+pub mod problem_codes;
 pub mod signal;
 pub mod state;
 pub mod time;

@@ -137,6 +137,10 @@ pub fn assert_problem(
         "content type; body: {body}"
     );
     assert_eq!(body["code"], code, "code; body: {body}");
+    assert!(
+        eigenzeit::api::problem_codes::meaning(code).is_some(),
+        "problem code {code} is not listed in src/api/problem_codes.rs"
+    );
     assert_eq!(body["status"], status);
     assert!(body["title"].is_string() && body["type"].is_string());
     assert!(

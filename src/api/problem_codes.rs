@@ -1,0 +1,294 @@
+//! Every stable problem `code` the API can answer, with what it means for the caller.
+//!
+//! Each error answer carries `"type": "/docs#problem-<code>"`; the documentation page renders
+//! one entry per row of [`PROBLEM_CODES`] with the anchor `id="problem-<code>"`, and
+//! `GET /docs/problem-codes.json` serves the same table as JSON.
+//!
+//! Adding a code (when a handler starts answering a new one):
+//! 1. append one row `("your_code", "What it means and what the caller can do.")` to
+//!    [`PROBLEM_CODES`], in the group of its endpoint (order is the order on the page);
+//! 2. the code is lowercase ASCII letters, digits and `_` (it becomes part of a URL fragment);
+//! 3. the meaning is one or two plain sentences; `backticks` render as code on the page.
+//!
+//! The unit tests below check that codes are unique, well formed and explained.
+
+/// (code, meaning) for every problem code the API answers, in the order the page lists them.
+pub const PROBLEM_CODES: &[(&str, &str)] = &[
+    // Any route: routing, request reading, limits.
+    (
+        "not_found",
+        "No resource at this path. The list of paths is on this page and in `/openapi.json`.",
+    ),
+    (
+        "method_not_allowed",
+        "The path exists but does not take this HTTP method; each operation on this page shows the method it takes.",
+    ),
+    (
+        "invalid_query",
+        "The query string cannot be read (a parameter has the wrong type or shape); `field` names it when known.",
+    ),
+    (
+        "invalid_json",
+        "The request body is not valid JSON.",
+    ),
+    (
+        "invalid_body",
+        "The body is valid JSON but does not match the request schema (a missing or unknown field, or a value of the wrong type).",
+    ),
+    (
+        "unsupported_media_type",
+        "The body must be sent with `Content-Type: application/json`.",
+    ),
+    (
+        "body_too_large",
+        "The request body is above the configured limit (`--body-limit-bytes`); split the request.",
+    ),
+    (
+        "request_timeout",
+        "The request took longer than the configured limit (`--request-timeout-s`); split it into smaller requests.",
+    ),
+    (
+        "internal",
+        "An unexpected fault inside the service. Please report it with the `x-request-id` of the answer.",
+    ),
+    // Time scales and instants (the time engine).
+    (
+        "unknown_scale",
+        "The time scale is not one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST.",
+    ),
+    (
+        "unknown_format",
+        "The instant format is not one of `iso`, `mjd`, `jd`, `j2000_s`, `unix_s`, `gnss_week`.",
+    ),
+    (
+        "malformed_instant",
+        "The instant text does not have the shape its format expects; `detail` says what was expected.",
+    ),
+    (
+        "impossible_date",
+        "The text has the right shape but names a date or time that does not exist (for example 30 February).",
+    ),
+    (
+        "invalid_leap_second",
+        "A second 60 where the leap-second table has no leap second, or in a scale without leap seconds.",
+    ),
+    (
+        "format_not_for_scale",
+        "The format does not apply to the scale (`unix_s` is for UTC only, `gnss_week` for GNSS scales only).",
+    ),
+    (
+        "utc_before_1960",
+        "A UTC instant before 1960-01-01, where UTC is not defined by the table in use; give the instant in TAI or TT.",
+    ),
+    (
+        "instant_out_of_range",
+        "The instant or number is outside the range the time engine supports.",
+    ),
+    // Time conversion requests.
+    (
+        "no_target_scale",
+        "No target scale was given; name at least one scale, or `all`.",
+    ),
+    (
+        "empty_batch",
+        "The batch has no epochs; send at least one.",
+    ),
+    (
+        "batch_too_large",
+        "More epochs than the configured limit (`--batch-limit`) in one request; split the batch.",
+    ),
+    (
+        "invalid_observer",
+        "The observer is not usable: give either `itrf_position_m`, or `latitude_deg` and `longitude_deg` (and optionally `height_m`), with valid values.",
+    ),
+    (
+        "observer_not_on_ground",
+        "The observer position is not near the Earth's surface; positions are ITRF metres from the geocentre.",
+    ),
+    (
+        "not_finite",
+        "A number is not finite (NaN or infinite).",
+    ),
+    (
+        "clock_unavailable",
+        "The server's own clock cannot give the current time; the operators need to check the host clock.",
+    ),
+    // Clock rates, comparisons and signal paths.
+    (
+        "unreadable_body",
+        "The request body could not be read to its end (the connection broke or the body was malformed at the transport level). Send it again.",
+    ),
+    (
+        "subject_missing",
+        "A rate item names no subject: give exactly one of `state`, `orbit`, `ground_site` or `lunar_site`.",
+    ),
+    (
+        "subject_ambiguous",
+        "A rate item names more than one subject: give exactly one of `state`, `orbit`, `ground_site` or `lunar_site`.",
+    ),
+    (
+        "unknown_reference",
+        "The rate reference is not `TT` or `TCG`.",
+    ),
+    (
+        "unknown_gravity_model",
+        "The gravity model is not `point_mass` or `j2`.",
+    ),
+    (
+        "unsupported_gravity_model",
+        "The gravity model does not apply to this subject (e.g. `j2` for a Keplerian orbit); use `point_mass` or give a state vector.",
+    ),
+    (
+        "unknown_frame",
+        "The frame is not one the endpoint takes (`GCRS` inertial or `ITRF` Earth-fixed).",
+    ),
+    (
+        "unknown_height_reference",
+        "The height reference is not `ellipsoid` or `geoid`.",
+    ),
+    (
+        "anomaly_ambiguous",
+        "More than one of `true_anomaly_deg`, `mean_anomaly_deg`, `eccentric_anomaly_deg` is given; give one.",
+    ),
+    (
+        "speed_not_below_c",
+        "A speed is at or above the speed of light: the relativistic formulas have no meaning there.",
+    ),
+    (
+        "below_surface",
+        "A position is below the Earth's (or the Moon's) surface by more than the 11 km margin; check units (metres) and frame.",
+    ),
+    (
+        "beyond_model_range",
+        "A position or orbit is beyond the range of the geocentric model (outside the Earth's Hill sphere, about 1.5e9 m).",
+    ),
+    (
+        "invalid_semi_major_axis",
+        "The semi-major axis must be positive and keep the whole orbit above the Earth's surface.",
+    ),
+    (
+        "invalid_eccentricity",
+        "The eccentricity must be at least 0 and below 1 (closed orbits only).",
+    ),
+    (
+        "latitude_out_of_range",
+        "A latitude must lie between -90 and 90 degrees.",
+    ),
+    (
+        "angle_out_of_range",
+        "An angle is not finite or outside the range it is read in.",
+    ),
+    (
+        "invalid_frequency",
+        "The nominal frequency must be a positive, finite number of hertz.",
+    ),
+    (
+        "rate_out_of_range",
+        "The computed rate is outside the first-order model's range; the input is not a physical clock near the Earth or Moon.",
+    ),
+    (
+        "reference_mismatch",
+        "The two clocks of a comparison name different references; compare them against one reference.",
+    ),
+    (
+        "invalid_value",
+        "A value cannot be used; `detail` says why and `field` names it.",
+    ),
+    (
+        "inside_earth",
+        "A signal end point is inside the Earth; check units (metres) and frame.",
+    ),
+    (
+        "beyond_range",
+        "A signal end point is farther than the model's range from the geocentre.",
+    ),
+    (
+        "coincident_endpoints",
+        "The transmitter and the receiver are at the same place: there is no path.",
+    ),
+    (
+        "path_through_earth",
+        "The straight path between the end points passes through the Earth: the receiver cannot see the transmitter.",
+    ),
+    (
+        "no_convergence",
+        "The light-time iteration did not converge; check that the states are physical.",
+    ),
+    (
+        "frames_differ",
+        "The two end points are in different frames (GCRS and ITRF); give both in one frame.",
+    ),
+    (
+        "invalid_endpoint",
+        "A signal end point must give either a position (with a frame) or a ground site, not both or neither.",
+    ),
+    (
+        "not_visible",
+        "The satellite is below a station's horizon: no two-way link is possible.",
+    ),
+];
+
+/// The meaning of `code`, when it is in [`PROBLEM_CODES`].
+pub fn meaning(code: &str) -> Option<&'static str> {
+    PROBLEM_CODES
+        .iter()
+        .find(|(known, _)| *known == code)
+        .map(|(_, meaning)| *meaning)
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::physics::time::error::TimeError;
+    use std::collections::HashSet;
+
+    #[test]
+    fn codes_are_unique_well_formed_and_explained() {
+        // Common practice: a stable code is a unique, non-empty identifier; RFC 9457 section 3.1.1
+        // lets `type` be a URI reference, so the code must be valid in a URL fragment and an HTML id.
+        let mut seen = HashSet::new();
+        for (code, meaning) in PROBLEM_CODES {
+            assert!(!code.is_empty(), "empty code (meaning {meaning:?})");
+            assert!(
+                code.bytes()
+                    .all(|b| b.is_ascii_lowercase() || b.is_ascii_digit() || b == b'_'),
+                "code {code:?} must be lowercase ASCII letters, digits and _"
+            );
+            assert!(seen.insert(*code), "code {code:?} is listed twice");
+            assert!(!meaning.trim().is_empty(), "code {code:?} needs a meaning");
+        }
+    }
+
+    #[test]
+    fn every_time_engine_code_is_listed() {
+        // The codes of src/physics/time/error.rs (the time engine's own error type).
+        let errors = [
+            TimeError::UnknownScale("X".into()),
+            TimeError::UnknownFormat("x".into()),
+            TimeError::malformed("a number", "x"),
+            TimeError::ImpossibleDate("x".into()),
+            TimeError::InvalidLeapSecond("x".into()),
+            TimeError::FormatNotForScale {
+                format: "unix_s",
+                scale: "TT",
+                allowed: "UTC",
+            },
+            TimeError::BeforeUtc("x".into()),
+            TimeError::OutOfRange("x".into()),
+        ];
+        for error in errors {
+            assert!(
+                meaning(error.code()).is_some(),
+                "time engine code {:?} is missing from PROBLEM_CODES",
+                error.code()
+            );
+        }
+    }
+
+    #[test]
+    fn meaning_finds_listed_codes_only() {
+        // Common practice: lookup returns the row's own text, and nothing for an unlisted code.
+        assert!(meaning("not_found").is_some_and(|m| m.contains("path")));
+        assert_eq!(meaning("no_such_code_here"), None);
+    }
+}
