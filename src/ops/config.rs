@@ -2,17 +2,24 @@
 
 use std::net::SocketAddr;
 use std::path::PathBuf;
+use std::time::Duration;
 
 use clap::{Args, Parser, Subcommand, ValueEnum};
 
 /// Relativistic clock and time-scale service.
 #[derive(Debug, Parser)]
-#[command(name = "eigenzeit", version, about, long_about = None)]
+#[command(
+    name = "eigenzeit",
+    version,
+    about,
+    long_about = None,
+    args_conflicts_with_subcommands = true
+)]
 pub struct Cli {
     /// What to do (default: serve).
     #[command(subcommand)]
     pub command: Option<Command>,
-    /// Service settings (used by `serve`, the default).
+    /// Service settings (when no subcommand is given, the service is served with them).
     #[command(flatten)]
     pub settings: Settings,
 }
@@ -20,14 +27,18 @@ pub struct Cli {
 /// The binary's subcommands.
 #[derive(Debug, Subcommand)]
 pub enum Command {
-    /// Serve the HTTP API (the default).
-    Serve,
+    /// Serve the HTTP API (the default; takes the same settings).
+    Serve(Settings),
     /// Print the OpenAPI document and exit.
     Openapi,
     /// Ask a running instance for /healthz and exit 0 when it answers 200 (for container health checks).
     Healthcheck {
         /// URL to probe.
-        #[arg(long, default_value = "http://127.0.0.1:8080/healthz")]
+        #[arg(
+            long,
+            env = "EIGENZEIT_HEALTHCHECK_URL",
+            default_value = "http://127.0.0.1:8080/healthz"
+        )]
         url: String,
     },
 }
@@ -40,6 +51,20 @@ pub enum LogFormat {
     Pretty,
     /// One JSON object per line.
     Json,
+}
+
+/// The longest duration a setting accepts, in seconds (about 31.7 years; common practice: a
+/// bound that keeps every timer representable).
+pub const MAX_DURATION_S: f64 = 1.0e9;
+
+/// A duration setting in seconds as a [`Duration`], without panicking on any input: negative
+/// or NaN gives zero, values too large for a `Duration` give [`Duration::MAX`].
+pub fn duration_from_s(value_s: f64) -> Duration {
+    Duration::try_from_secs_f64(value_s).unwrap_or(if value_s > 0.0 {
+        Duration::MAX
+    } else {
+        Duration::ZERO
+    })
 }
 
 /// Every setting of the service, with its default.
@@ -120,16 +145,19 @@ impl Settings {
             ("--leap-seconds-refresh-s", self.leap_seconds_refresh_s),
             ("--max-ephemeris-gap-s", self.max_ephemeris_gap_s),
         ] {
-            if !(value.is_finite() && value > 0.0) {
+            if !(value.is_finite() && value > 0.0 && value <= MAX_DURATION_S) {
                 return Err(format!(
-                    "{name} must be a positive number of seconds, got {value}"
+                    "{name} must be a positive number of seconds (at most {MAX_DURATION_S}), got {value}"
                 ));
             }
         }
-        if !(self.shutdown_delay_s.is_finite() && self.shutdown_delay_s >= 0.0) {
-            return Err(
-                "--shutdown-delay-s must be zero or a positive number of seconds".to_string(),
-            );
+        if !(self.shutdown_delay_s.is_finite()
+            && self.shutdown_delay_s >= 0.0
+            && self.shutdown_delay_s <= MAX_DURATION_S)
+        {
+            return Err(format!(
+                "--shutdown-delay-s must be zero or a positive number of seconds (at most {MAX_DURATION_S})"
+            ));
         }
         if self.batch_limit == 0 || self.body_limit_bytes == 0 {
             return Err("--batch-limit and --body-limit-bytes must be at least 1".to_string());

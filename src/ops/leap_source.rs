@@ -47,11 +47,27 @@ pub async fn fetch_table(client: &reqwest::Client, url: &str) -> Result<LeapTabl
         .map_err(|e| format!("the file at {url} is not valid: {e}"))
 }
 
-/// One refresh: a valid table replaces the one in force; a failure keeps it and is reported
-/// in the log, the metrics and `/readyz`.
+/// Refuses a fetched table that expires before the table in force: it is older data (a stale
+/// mirror, a cached copy), and taking it would drop leap seconds announced since.
+fn not_older(fetched: LeapTable, in_force: &LeapTable, url: &str) -> Result<LeapTable, String> {
+    if fetched.expiry_mjd() < in_force.expiry_mjd() {
+        return Err(format!(
+            "the file at {url} expires on MJD {}, before the table in force (MJD {}); keeping the newer table",
+            fetched.expiry_mjd(),
+            in_force.expiry_mjd()
+        ));
+    }
+    Ok(fetched)
+}
+
+/// One refresh: a valid table, not older than the one in force, replaces it; a failure keeps
+/// the table in force and is reported in the log, the metrics and `/readyz`.
 pub async fn refresh_once(state: &AppState, client: &reqwest::Client, url: &str) {
     let mut status = state.leap_refresh_status();
-    match fetch_table(client, url).await {
+    let fetched = fetch_table(client, url)
+        .await
+        .and_then(|table| not_older(table, &state.leap_table(), url));
+    match fetched {
         Ok(table) => {
             tracing::info!(
                 url,
@@ -72,7 +88,11 @@ pub async fn refresh_once(state: &AppState, client: &reqwest::Client, url: &str)
     state.set_leap_refresh_status(status);
 }
 
-/// Polls the configured URL forever (first poll at once).
+/// Shortest interval between polls (a guard against a zero interval; common practice).
+const MIN_INTERVAL: Duration = Duration::from_millis(10);
+
+/// Polls the configured URL forever (first poll at once); a slow answer delays the next poll
+/// rather than causing a burst of polls.
 pub async fn poll_forever(state: AppState, url: String, interval: Duration) {
     let client = match reqwest::Client::builder()
         .timeout(Duration::from_secs(30))
@@ -84,7 +104,8 @@ pub async fn poll_forever(state: AppState, url: String, interval: Duration) {
             return;
         }
     };
-    let mut ticker = tokio::time::interval(interval);
+    let mut ticker = tokio::time::interval(interval.max(MIN_INTERVAL));
+    ticker.set_missed_tick_behavior(tokio::time::MissedTickBehavior::Delay);
     loop {
         ticker.tick().await;
         refresh_once(&state, &client, &url).await;

@@ -1,6 +1,8 @@
 //! Shared harness: the real server on 127.0.0.1:0, called with reqwest.
 #![allow(dead_code)]
 
+pub mod process;
+
 use eigenzeit::api::state::AppState;
 use eigenzeit::ops::config::Settings;
 use eigenzeit::physics::time::leap_seconds::LeapTable;
@@ -148,4 +150,130 @@ pub fn assert_problem(
         "detail must say what is wrong: {body}"
     );
     body.clone()
+}
+
+/// GETs `path` with extra headers and returns the raw response.
+pub async fn get_with(
+    server: &TestServer,
+    path: &str,
+    headers: &[(&str, &str)],
+) -> reqwest::Response {
+    let mut request = client().get(server.url(path));
+    for (name, value) in headers {
+        request = request.header(*name, *value);
+    }
+    request.send().await.expect("request")
+}
+
+/// A response header as text ("" when absent).
+pub fn header_text(response: &reqwest::Response, name: &str) -> String {
+    response
+        .headers()
+        .get(name)
+        .and_then(|v| v.to_str().ok())
+        .unwrap_or("")
+        .to_string()
+}
+
+/// The text of `/metrics`.
+pub async fn metrics_text(server: &TestServer) -> String {
+    let response = client()
+        .get(server.url("/metrics"))
+        .send()
+        .await
+        .expect("request");
+    assert_eq!(response.status().as_u16(), 200);
+    response.text().await.expect("metrics text")
+}
+
+/// The value of one sample in a Prometheus text exposition: `series` is the metric name with
+/// its labels exactly as rendered (e.g. `name{route="/x",status="200"}`), or the bare name.
+pub fn metric_value(text: &str, series: &str) -> Option<f64> {
+    text.lines()
+        .filter(|line| !line.starts_with('#'))
+        .find_map(|line| {
+            let rest = line.strip_prefix(series)?;
+            rest.strip_prefix(' ')?.trim().parse::<f64>().ok()
+        })
+}
+
+/// A `POST /v1/time/convert` body of `count` UTC epochs (one minute apart from 2026-03-14)
+/// converted to `to`.
+pub fn convert_batch(count: usize, to: &[&str]) -> serde_json::Value {
+    let epochs: Vec<String> = (0..count)
+        .map(|i| {
+            let minute = i % (24 * 60);
+            format!(
+                "2026-03-14T{:02}:{:02}:00.123456789",
+                minute / 60,
+                minute % 60
+            )
+        })
+        .collect();
+    serde_json::json!({"from": "UTC", "to": to, "epochs": epochs})
+}
+
+/// An HTTP/1.1 request written by hand on its own TCP connection, with part of its body held
+/// back: the server counts it in flight until [`HeldRequest::finish`] sends the rest (or the
+/// connection is dropped).
+pub struct HeldRequest {
+    stream: tokio::net::TcpStream,
+    rest: Vec<u8>,
+}
+
+impl HeldRequest {
+    /// Sends the head and the first `sent` bytes of `body` to `POST path` at `host_port`.
+    pub async fn open(
+        host_port: &str,
+        path: &str,
+        body: &[u8],
+        sent: usize,
+        request_id: &str,
+    ) -> Self {
+        use tokio::io::AsyncWriteExt;
+        let mut stream = tokio::net::TcpStream::connect(host_port)
+            .await
+            .expect("connect");
+        let head = format!(
+            "POST {path} HTTP/1.1\r\nHost: {host_port}\r\nContent-Type: application/json\r\n\
+             Content-Length: {}\r\nx-request-id: {request_id}\r\nConnection: close\r\n\r\n",
+            body.len()
+        );
+        stream.write_all(head.as_bytes()).await.expect("write head");
+        stream
+            .write_all(&body[..sent])
+            .await
+            .expect("write body start");
+        stream.flush().await.expect("flush");
+        Self {
+            stream,
+            rest: body[sent..].to_vec(),
+        }
+    }
+
+    /// Sends the rest of the body and reads the whole answer: (status, raw answer text).
+    pub async fn finish(mut self) -> (u16, String) {
+        use tokio::io::{AsyncReadExt, AsyncWriteExt};
+        self.stream
+            .write_all(&self.rest)
+            .await
+            .expect("write body rest");
+        let mut answer = Vec::new();
+        self.stream
+            .read_to_end(&mut answer)
+            .await
+            .expect("read answer");
+        let text = String::from_utf8_lossy(&answer).to_string();
+        let status = text
+            .split_whitespace()
+            .nth(1)
+            .and_then(|code| code.parse::<u16>().ok())
+            .unwrap_or(0);
+        (status, text)
+    }
+}
+
+/// `host:port` of a base URL `http://host:port`.
+pub fn host_port(base: &str) -> &str {
+    base.trim_start_matches("http://")
 }
