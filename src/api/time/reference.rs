@@ -87,11 +87,20 @@ fn with_etag<T: Serialize>(headers: &HeaderMap, tag_basis: &[u8], body: &T) -> R
     let bytes = serde_json::to_vec(body).unwrap_or_default();
     let mut hasher = std::collections::hash_map::DefaultHasher::new();
     tag_basis.hash(&mut hasher);
-    let tag = format!("\"{:016x}\"", hasher.finish());
+    // A weak validator (RFC 9110 8.8.1): the answer may be sent gzip-compressed or not, so the
+    // bytes differ while the representation's meaning does not.
+    let opaque = format!("\"{:016x}\"", hasher.finish());
+    let tag = format!("W/{opaque}");
     let matches = headers
         .get(header::IF_NONE_MATCH)
         .and_then(|value| value.to_str().ok())
-        .is_some_and(|value| value.split(',').any(|t| t.trim() == tag || t.trim() == "*"));
+        .is_some_and(|value| {
+            // If-None-Match uses the weak comparison (RFC 9110 13.1.2): W/ prefixes are ignored.
+            value
+                .split(',')
+                .map(str::trim)
+                .any(|candidate| candidate == "*" || candidate.trim_start_matches("W/") == opaque)
+        });
     let etag = HeaderValue::from_str(&tag).unwrap_or_else(|_| HeaderValue::from_static("\"0\""));
     let cache = HeaderValue::from_static("public, max-age=300");
     if matches {
