@@ -77,3 +77,7 @@ pub const MJD_ZERO_JD: f64 = 2_400_000.5;
 
 /// MJD of J2000.0 (2000-01-01T12:00:00): 51544.5.
 pub const J2000_MJD: f64 = 51_544.5;
+
+/// GRS80 ellipsoid semi-minor (polar) axis b (Moritz, Geodetic Reference System 1980), m.
+/// Used as the lowest geocentric distance an orbiting or ground state may have.
+pub const GRS80_SEMI_MINOR_AXIS_M: f64 = 6_356_752.314_1;

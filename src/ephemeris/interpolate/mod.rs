@@ -1,0 +1,202 @@
+//! Validation and interpolation of one object's track.
+//!
+//! Positions are interpolated by Lagrange polynomials on a centred window of `points` states
+//! (velocity from the derivative of the same polynomial) when the track has no velocities, and
+//! by Hermite polynomials on `points / 2` states (values and velocities) when it has them, so
+//! that both polynomials have degree `points - 1`. Times are TT seconds since the first epoch.
+
+mod basis;
+mod validate;
+
+pub use validate::validate_track;
+
+use super::error::EphemerisError;
+use super::ObjectTrack;
+use crate::physics::time::convert::ConversionContext;
+use basis::{hermite, lagrange, window_weights, MAX_POINTS};
+
+/// How tracks are interpolated and what is accepted.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct InterpolationOptions {
+    /// Lagrange window in states (2 to 16; default 8, degree 7). Hermite uses half as many.
+    pub points: usize,
+    /// Longest accepted time between consecutive states, s (default 3600 s).
+    pub max_gap_s: f64,
+}
+
+impl Default for InterpolationOptions {
+    fn default() -> Self {
+        Self {
+            points: 8,
+            max_gap_s: 3600.0,
+        }
+    }
+}
+
+impl InterpolationOptions {
+    /// Refuses a window outside 2..=16 or a gap limit that is not positive.
+    pub fn check(&self) -> Result<(), EphemerisError> {
+        if !(2..=MAX_POINTS).contains(&self.points) {
+            return Err(EphemerisError::new(
+                "bad_option",
+                format!(
+                    "interpolation points is {}; expected 2 to {MAX_POINTS}",
+                    self.points
+                ),
+            ));
+        }
+        if self.max_gap_s.is_nan() || self.max_gap_s <= 0.0 {
+            return Err(EphemerisError::new(
+                "bad_option",
+                format!(
+                    "max_gap_s is {}; expected a positive number of seconds",
+                    self.max_gap_s
+                ),
+            ));
+        }
+        Ok(())
+    }
+
+    /// States in one window: `points` for Lagrange, `points / 2` (at least 2) for Hermite.
+    pub fn window(&self, hermite: bool) -> usize {
+        if hermite {
+            (self.points / 2).max(2)
+        } else {
+            self.points
+        }
+    }
+}
+
+/// A validated track ready for interpolation at any time inside its span.
+#[derive(Debug, Clone)]
+pub struct Interpolator {
+    times_s: Vec<f64>,
+    positions_m: Vec<[f64; 3]>,
+    velocities_m_s: Option<Vec<[f64; 3]>>,
+    window: usize,
+    /// Barycentric weights, `window` per window start.
+    weights: Vec<f64>,
+    /// Hermite coefficients c_j, `window` per window start.
+    coefficients: Vec<f64>,
+}
+
+impl Interpolator {
+    /// Validates `track` (see [`validate_track`]) and prepares its interpolation.
+    pub fn from_track(
+        track: &ObjectTrack,
+        options: &InterpolationOptions,
+        context: &ConversionContext<'_>,
+    ) -> Result<Self, EphemerisError> {
+        let times_s = validate_track(track, options, context)?;
+        let positions_m = track.states.iter().map(|s| s.position_m).collect();
+        let velocities_m_s = if track.has_velocities() {
+            Some(
+                track
+                    .states
+                    .iter()
+                    .map(|s| s.velocity_m_s.unwrap_or([0.0; 3]))
+                    .collect(),
+            )
+        } else {
+            None
+        };
+        Self::new(times_s, positions_m, velocities_m_s, options.points)
+    }
+
+    /// Prepares interpolation of samples at strictly increasing `times_s` (already validated
+    /// data; lengths must agree and `times_s` must hold at least one window).
+    pub fn new(
+        times_s: Vec<f64>,
+        positions_m: Vec<[f64; 3]>,
+        velocities_m_s: Option<Vec<[f64; 3]>>,
+        points: usize,
+    ) -> Result<Self, EphemerisError> {
+        let options = InterpolationOptions {
+            points,
+            ..InterpolationOptions::default()
+        };
+        options.check()?;
+        let window = options.window(velocities_m_s.is_some());
+        let lengths_agree = positions_m.len() == times_s.len()
+            && velocities_m_s
+                .as_ref()
+                .is_none_or(|v| v.len() == times_s.len());
+        if !lengths_agree || times_s.len() < window {
+            return Err(EphemerisError::new(
+                "too_few_states",
+                format!("{} states for a window of {window}", times_s.len()),
+            ));
+        }
+        if times_s
+            .windows(2)
+            .any(|pair| pair[1].partial_cmp(&pair[0]) != Some(std::cmp::Ordering::Greater))
+        {
+            return Err(EphemerisError::new(
+                "epochs_not_increasing",
+                "sample times must be strictly increasing",
+            ));
+        }
+        let starts = times_s.len() - window + 1;
+        let mut weights = vec![0.0; starts * window];
+        let mut coefficients = vec![0.0; starts * window];
+        for ((nodes, w), c) in times_s
+            .windows(window)
+            .zip(weights.chunks_mut(window))
+            .zip(coefficients.chunks_mut(window))
+        {
+            window_weights(nodes, w, c);
+        }
+        Ok(Self {
+            times_s,
+            positions_m,
+            velocities_m_s,
+            window,
+            weights,
+            coefficients,
+        })
+    }
+
+    /// The sample times, s since the first epoch.
+    pub fn times_s(&self) -> &[f64] {
+        &self.times_s
+    }
+
+    /// True when interpolation is Hermite (velocities given).
+    pub fn is_hermite(&self) -> bool {
+        self.velocities_m_s.is_some()
+    }
+
+    /// First index of the centred window for time `t_s` (clamped at both ends).
+    fn window_start(&self, t_s: f64) -> usize {
+        let after = self.times_s.partition_point(|x| *x <= t_s);
+        let interval = after.saturating_sub(1);
+        let last_start = self.times_s.len() - self.window;
+        (interval + 1)
+            .saturating_sub(self.window / 2)
+            .min(last_start)
+    }
+
+    /// Position (m) and velocity (m/s) at `t_s` seconds since the first epoch. Outside the
+    /// span the end windows extrapolate; callers stay inside [`Self::times_s`].
+    pub fn state_at(&self, t_s: f64) -> ([f64; 3], [f64; 3]) {
+        let start = self.window_start(t_s);
+        let range = start..start + self.window;
+        let (Some(nodes), Some(positions), Some(weights), Some(coefficients)) = (
+            self.times_s.get(range.clone()),
+            self.positions_m.get(range.clone()),
+            self.weights
+                .get(start * self.window..(start + 1) * self.window),
+            self.coefficients
+                .get(start * self.window..(start + 1) * self.window),
+        ) else {
+            return ([f64::NAN; 3], [f64::NAN; 3]);
+        };
+        match self.velocities_m_s.as_ref().and_then(|v| v.get(range)) {
+            Some(velocities) => hermite(nodes, weights, coefficients, positions, velocities, t_s),
+            None => lagrange(nodes, weights, positions, t_s),
+        }
+    }
+}
+
+#[cfg(test)]
+mod tests;
