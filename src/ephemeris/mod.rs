@@ -9,6 +9,8 @@
 //! [`track_proper_time`] connects a track to the proper-time integrator of
 //! [`crate::physics::proper_time`].
 
+#[cfg(test)]
+mod demo_tests;
 pub mod error;
 pub mod interpolate;
 pub mod json;

@@ -15,20 +15,25 @@
 /// Largest window handled (nodes).
 pub const MAX_POINTS: usize = 16;
 
-/// Barycentric weights w_j and Hermite coefficients c_j of one window of nodes.
-pub fn window_weights(nodes: &[f64], weights: &mut [f64], hermite: &mut [f64]) {
-    for (j, (w, c)) in weights.iter_mut().zip(hermite.iter_mut()).enumerate() {
+/// Barycentric weights w_j of one window of nodes, and the Hermite coefficients c_j when
+/// `hermite` is given.
+pub fn window_weights(nodes: &[f64], weights: &mut [f64], mut hermite: Option<&mut [f64]>) {
+    for (j, w) in weights.iter_mut().enumerate() {
+        let t_j = nodes.get(j).copied().unwrap_or(0.0);
         let mut product = 1.0;
         let mut sum = 0.0;
         for (m, t_m) in nodes.iter().enumerate() {
             if m != j {
-                let difference = nodes.get(j).copied().unwrap_or(0.0) - t_m;
-                product *= difference;
-                sum += 1.0 / difference;
+                product *= t_j - t_m;
+                if hermite.is_some() {
+                    sum += 1.0 / (t_j - t_m);
+                }
             }
         }
         *w = 1.0 / product;
-        *c = sum;
+        if let Some(c) = hermite.as_deref_mut().and_then(|c| c.get_mut(j)) {
+            *c = sum;
+        }
     }
 }
 

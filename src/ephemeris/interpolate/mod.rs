@@ -74,6 +74,8 @@ pub struct Interpolator {
     positions_m: Vec<[f64; 3]>,
     velocities_m_s: Option<Vec<[f64; 3]>>,
     window: usize,
+    /// (last - first) / (count - 1): the first guess of the interval of a time.
+    mean_step_s: f64,
     /// Barycentric weights, `window` per window start.
     weights: Vec<f64>,
     /// Hermite coefficients c_j, `window` per window start.
@@ -137,16 +139,44 @@ impl Interpolator {
             ));
         }
         let starts = times_s.len() - window + 1;
+        let hermite = velocities_m_s.is_some();
         let mut weights = vec![0.0; starts * window];
-        let mut coefficients = vec![0.0; starts * window];
-        for ((nodes, w), c) in times_s
-            .windows(window)
-            .zip(weights.chunks_mut(window))
-            .zip(coefficients.chunks_mut(window))
-        {
-            window_weights(nodes, w, c);
+        let mut coefficients = vec![0.0; if hermite { starts * window } else { 0 }];
+        // The weights depend only on the node differences: a window spaced like the previous
+        // one (uniform sampling) copies its weights instead of recomputing them.
+        let mut previous: Option<(usize, [f64; MAX_POINTS])> = None;
+        for (start, nodes) in times_s.windows(window).enumerate() {
+            let mut offsets = [0.0; MAX_POINTS];
+            for (offset, node) in offsets.iter_mut().zip(nodes) {
+                *offset = node - nodes[0];
+            }
+            let range = start * window..(start + 1) * window;
+            match previous {
+                Some((earlier, earlier_offsets)) if earlier_offsets == offsets => {
+                    let from = earlier * window..(earlier + 1) * window;
+                    weights.copy_within(from.clone(), range.start);
+                    if hermite {
+                        coefficients.copy_within(from, range.start);
+                    }
+                }
+                _ => {
+                    let c = if hermite {
+                        coefficients.get_mut(range.clone())
+                    } else {
+                        None
+                    };
+                    if let Some(w) = weights.get_mut(range) {
+                        window_weights(nodes, w, c);
+                    }
+                    previous = Some((start, offsets));
+                }
+            }
         }
+        let first_s = times_s.first().copied().unwrap_or(0.0);
+        let last_s = times_s.last().copied().unwrap_or(0.0);
+        let mean_step_s = (last_s - first_s) / (times_s.len() - 1).max(1) as f64;
         Ok(Self {
+            mean_step_s,
             times_s,
             positions_m,
             velocities_m_s,
@@ -168,12 +198,37 @@ impl Interpolator {
 
     /// First index of the centred window for time `t_s` (clamped at both ends).
     fn window_start(&self, t_s: f64) -> usize {
-        let after = self.times_s.partition_point(|x| *x <= t_s);
-        let interval = after.saturating_sub(1);
+        let interval = self.interval_of(t_s);
         let last_start = self.times_s.len() - self.window;
         (interval + 1)
             .saturating_sub(self.window / 2)
             .min(last_start)
+    }
+
+    /// The index i of the interval t_i <= t < t_(i+1) (0 before the start, the last state
+    /// after the end): a guess from the mean step, then a short walk (binary search if far).
+    fn interval_of(&self, t_s: f64) -> usize {
+        let times = &self.times_s;
+        let last = times.len().saturating_sub(1);
+        let first_s = times.first().copied().unwrap_or(0.0);
+        let guess = ((t_s - first_s) / self.mean_step_s).floor();
+        let mut index = if guess.is_finite() && guess > 0.0 {
+            (guess as usize).min(last)
+        } else {
+            0
+        };
+        for _ in 0..4 {
+            let here = times.get(index).copied().unwrap_or(f64::INFINITY);
+            let next = times.get(index + 1).copied().unwrap_or(f64::INFINITY);
+            if here > t_s && index > 0 {
+                index -= 1;
+            } else if next <= t_s {
+                index += 1;
+            } else {
+                return index;
+            }
+        }
+        times.partition_point(|x| *x <= t_s).saturating_sub(1)
     }
 
     /// Position (m) and velocity (m/s) at `t_s` seconds since the first epoch. Outside the
@@ -187,7 +242,8 @@ impl Interpolator {
             self.weights
                 .get(start * self.window..(start + 1) * self.window),
             self.coefficients
-                .get(start * self.window..(start + 1) * self.window),
+                .get(start * self.window..(start + 1) * self.window)
+                .or(Some(&[])),
         ) else {
             return ([f64::NAN; 3], [f64::NAN; 3]);
         };
