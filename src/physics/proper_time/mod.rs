@@ -167,10 +167,10 @@ where
     let rules = GaussLegendre::new();
     let mut velocity_sum = CompensatedSum::default();
     let mut gravity_sum = CompensatedSum::default();
-    let mut states = Vec::with_capacity(epochs_s.len());
+    let mut periodic_s = Vec::with_capacity(epochs_s.len());
     let mut parts = Vec::with_capacity(epochs_s.len());
     let first = trajectory.state_at(epochs_s.first().copied().unwrap_or(0.0));
-    states.push(first);
+    periodic_s.push(kepler_periodic_term_s(&first.0, &first.1));
     parts.push((0.0, 0.0));
     let mut start_state = first;
     for (index, pair) in epochs_s.windows(2).enumerate() {
@@ -209,10 +209,10 @@ where
         velocity_sum.add(velocity_part);
         gravity_sum.add(gravity_part);
         start_state = trajectory.state_at(end_s);
-        states.push(start_state);
+        periodic_s.push(kepler_periodic_term_s(&start_state.0, &start_state.1));
         parts.push((velocity_sum.value(), gravity_sum.value()));
     }
-    Ok(series::build(epochs_s, &states, &parts))
+    Ok(series::build(epochs_s, periodic_s, &parts))
 }
 
 fn norm(vector: &[f64; 3]) -> f64 {

@@ -77,16 +77,12 @@ fn fit_line(times_s: &[f64], values: &[f64]) -> (f64, f64, f64) {
     (mean_y, slope, mean_t)
 }
 
-/// Assembles the series from epochs, states and accumulated (velocity, gravity) parts.
+/// Assembles the series from epochs, periodic terms and accumulated (velocity, gravity) parts.
 pub(super) fn build(
     epochs_s: &[f64],
-    states: &[([f64; 3], [f64; 3])],
+    periodic: Vec<f64>,
     parts: &[(f64, f64)],
 ) -> ProperTimeSeries {
-    let periodic: Vec<f64> = states
-        .iter()
-        .map(|(p, v)| kepler_periodic_term_s(p, v))
-        .collect();
     let total: Vec<f64> = parts.iter().map(|(v, g)| v + g).collect();
     let detrended: Vec<f64> = total.iter().zip(&periodic).map(|(y, p)| y - p).collect();
     let (intercept, slope, mean_t) = fit_line(epochs_s, &detrended);
