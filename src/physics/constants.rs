@@ -124,3 +124,7 @@ pub const MICROSECONDS_PER_DAY: f64 = 86_400.0e6;
 /// nominal omega_E of IERS Conventions (2010) table 1.1 (Kepler's third law for a period of one
 /// sidereal day), rounded to the metre; the commonly quoted value is 42 164 km (common practice).
 pub const GEOSTATIONARY_RADIUS_M: f64 = 42_164_172.0;
+
+/// GRS80 ellipsoid semi-minor (polar) axis b (Moritz, Geodetic Reference System 1980), m.
+/// Used as the lowest geocentric distance an orbiting or ground state may have.
+pub const GRS80_SEMI_MINOR_AXIS_M: f64 = 6_356_752.314_1;

@@ -1,0 +1,165 @@
+//! One-day ephemerides sampled every second (86 400 states): proper-time integration and OEM
+//! parsing, each beside a baseline measured in the same run.
+
+use std::fmt::Write as _;
+use std::hint::black_box;
+
+use criterion::{criterion_group, criterion_main, Criterion, Throughput};
+use eigenzeit::ephemeris::{
+    proper_time_of_track, read_oem, EphemerisState, Frame, InterpolationOptions, Interpolator,
+    ObjectTrack,
+};
+use eigenzeit::physics::constants::{GM_EARTH_M3_S2, SPEED_OF_LIGHT_SQUARED_M2_S2};
+use eigenzeit::physics::proper_time::kepler::KeplerOrbit;
+use eigenzeit::physics::proper_time::{ProperTimeOptions, Trajectory};
+use eigenzeit::physics::time::convert::ConversionContext;
+use eigenzeit::physics::time::instant::{Instant, ATTOS_PER_SECOND};
+use eigenzeit::physics::time::leap_seconds::LeapTable;
+use eigenzeit::physics::time::scale::Scale;
+
+const STATES: usize = 86_400;
+
+fn orbit() -> KeplerOrbit {
+    KeplerOrbit {
+        gm_m3_s2: GM_EARTH_M3_S2,
+        semi_major_axis_m: 6_828_137.0,
+        eccentricity: 0.002,
+        inclination_rad: 0.9,
+        ascending_node_rad: 0.2,
+        argument_of_perigee_rad: 1.0,
+        mean_anomaly_at_zero_rad: 0.0,
+    }
+}
+
+fn track(velocities: bool) -> ObjectTrack {
+    let orbit = orbit();
+    let start = 832_593_600 * ATTOS_PER_SECOND;
+    ObjectTrack {
+        id: "BENCH".into(),
+        frame: Frame::Inertial,
+        scale: Scale::Tt,
+        states: (0..STATES)
+            .map(|i| {
+                let (position_m, velocity_m_s) = orbit.state_at(i as f64);
+                EphemerisState {
+                    epoch: Instant::from_count_attos(
+                        Scale::Tt,
+                        start + i as i128 * ATTOS_PER_SECOND,
+                    ),
+                    position_m,
+                    velocity_m_s: velocities.then_some(velocity_m_s),
+                }
+            })
+            .collect(),
+    }
+}
+
+fn rate(position_m: &[f64; 3], velocity_m_s: &[f64; 3]) -> (f64, f64) {
+    let v2 = velocity_m_s.iter().map(|x| x * x).sum::<f64>();
+    let r = position_m.iter().map(|x| x * x).sum::<f64>().sqrt();
+    (
+        -0.5 * v2 / SPEED_OF_LIGHT_SQUARED_M2_S2,
+        -GM_EARTH_M3_S2 / (r * SPEED_OF_LIGHT_SQUARED_M2_S2),
+    )
+}
+
+fn oem_text() -> String {
+    let orbit = orbit();
+    let mut text = String::from(
+        "CCSDS_OEM_VERS = 2.0\nCREATION_DATE = 2026-05-19T00:00:00\nORIGINATOR = BENCH\n\nMETA_START\nOBJECT_NAME = BENCH\nOBJECT_ID = 2026-999A\nCENTER_NAME = EARTH\nREF_FRAME = GCRF\nTIME_SYSTEM = UTC\nSTART_TIME = 2026-05-20T00:00:00.000\nSTOP_TIME = 2026-05-20T23:59:59.000\nMETA_STOP\n",
+    );
+    for i in 0..STATES {
+        let (p, v) = orbit.state_at(i as f64);
+        let (h, m, s) = (i / 3600, (i / 60) % 60, i % 60);
+        let _ = writeln!(
+            text,
+            "2026-05-20T{h:02}:{m:02}:{s:02}.000 {:.6} {:.6} {:.6} {:.9} {:.9} {:.9}",
+            p[0] / 1e3,
+            p[1] / 1e3,
+            p[2] / 1e3,
+            v[0] / 1e3,
+            v[1] / 1e3,
+            v[2] / 1e3
+        );
+    }
+    text
+}
+
+fn benches(c: &mut Criterion) {
+    let table = LeapTable::builtin();
+    let context = ConversionContext::geocentric(table);
+    let mut group = c.benchmark_group("proper_time_one_day_1s");
+    group.sample_size(20);
+    for velocities in [true, false] {
+        let track = track(velocities);
+        let name = if velocities { "hermite" } else { "lagrange" };
+        group.bench_function(name, |b| {
+            b.iter(|| {
+                proper_time_of_track(
+                    black_box(&track),
+                    &InterpolationOptions::default(),
+                    &ProperTimeOptions::default(),
+                    &context,
+                    rate,
+                )
+            })
+        });
+    }
+    let hermite_track = track(true);
+    group.bench_function("interpolator_setup_only", |b| {
+        b.iter(|| {
+            Interpolator::from_track(
+                black_box(&hermite_track),
+                &InterpolationOptions::default(),
+                &context,
+            )
+        })
+    });
+    // Baseline: evaluate the rate once at each state (no interpolation, no quadrature).
+    let plain = track(true);
+    group.bench_function("baseline_rate_at_states", |b| {
+        b.iter(|| {
+            black_box(&plain)
+                .states
+                .iter()
+                .map(|s| {
+                    let (sr, gr) = rate(&s.position_m, &s.velocity_m_s.unwrap_or_default());
+                    sr + gr
+                })
+                .sum::<f64>()
+        })
+    });
+    group.finish();
+
+    let text = oem_text();
+    let mut group = c.benchmark_group("oem_parse_one_day_1s");
+    group.sample_size(20);
+    group.throughput(Throughput::Bytes(text.len() as u64));
+    group.bench_function("read_oem", |b| {
+        b.iter(|| read_oem(black_box(&text), &context))
+    });
+    // Baseline: a plain pass over the bytes (count line ends).
+    group.bench_function("baseline_count_lines", |b| {
+        b.iter(|| black_box(&text).bytes().filter(|b| *b == b'\n').count())
+    });
+    // Baseline: split every line into fields and parse the six numbers only (no epochs).
+    group.bench_function("baseline_parse_numbers", |b| {
+        b.iter(|| {
+            black_box(&text)
+                .lines()
+                .filter_map(|l| {
+                    let mut f = l.split_ascii_whitespace().skip(1);
+                    let mut sum = 0.0;
+                    for _ in 0..6 {
+                        sum += f.next()?.parse::<f64>().ok()?;
+                    }
+                    Some(sum)
+                })
+                .sum::<f64>()
+        })
+    });
+    group.finish();
+}
+
+criterion_group!(ephemeris, benches);
+criterion_main!(ephemeris);

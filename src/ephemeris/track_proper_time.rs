@@ -1,0 +1,111 @@
+//! Proper time along an ephemeris track: validation, interpolation, time scales and frames
+//! joined to [`crate::physics::proper_time::integrate_proper_time`].
+//!
+//! Coordinate time is TT: every epoch is converted to TT through the engine, so a UTC track
+//! across a leap second keeps a continuous time axis. The rate function must therefore be
+//! relative to TT (or the caller accepts the L_G rate difference of TCG). Earth-fixed tracks are
+//! given inertial-equivalent velocities v + omega_E x r (see [`crate::physics::proper_time`]).
+
+use super::error::EphemerisError;
+use super::interpolate::{InterpolationOptions, Interpolator};
+use super::{Ephemeris, Frame, ObjectTrack};
+use crate::physics::proper_time::{
+    integrate_proper_time, EarthFixed, ProperTimeError, ProperTimeOptions, ProperTimeSeries,
+    Trajectory,
+};
+use crate::physics::time::convert::ConversionContext;
+use crate::physics::time::instant::Instant;
+
+/// The proper time of one object.
+#[derive(Debug, Clone, PartialEq)]
+pub struct TrackProperTime {
+    /// The object's id.
+    pub id: String,
+    /// First epoch (in the track's scale).
+    pub start: Instant,
+    /// Last epoch.
+    pub end: Instant,
+    /// The output epochs: the track's epochs, in the track's scale.
+    pub epochs: Vec<Instant>,
+    /// The series and summary (times are TT seconds since `start`).
+    pub series: ProperTimeSeries,
+}
+
+impl Trajectory for Interpolator {
+    fn state_at(&self, t_s: f64) -> ([f64; 3], [f64; 3]) {
+        Interpolator::state_at(self, t_s)
+    }
+}
+
+fn from_physics(error: ProperTimeError, object: &str) -> EphemerisError {
+    EphemerisError {
+        code: error.code,
+        message: error.message,
+        line: None,
+        object: Some(object.to_string()),
+        index: error.index,
+    }
+}
+
+/// Integrates the proper time of one track at its own epochs.
+///
+/// `rate(position_m, velocity_m_s)` returns the (velocity, gravity) parts of the fractional
+/// rate offset relative to TT, from an inertial-equivalent state.
+pub fn proper_time_of_track<R>(
+    track: &ObjectTrack,
+    interpolation: &InterpolationOptions,
+    options: &ProperTimeOptions,
+    context: &ConversionContext<'_>,
+    rate: R,
+) -> Result<TrackProperTime, EphemerisError>
+where
+    R: Fn(&[f64; 3], &[f64; 3]) -> (f64, f64),
+{
+    let interpolator = Interpolator::from_track(track, interpolation, context)?;
+    let epochs_s = interpolator.times_s();
+    let series = match track.frame {
+        Frame::Inertial => integrate_proper_time(&interpolator, epochs_s, rate, options),
+        Frame::EarthFixed => {
+            let rotating = EarthFixed(|t_s: f64| interpolator.state_at(t_s));
+            integrate_proper_time(&rotating, epochs_s, rate, options)
+        }
+    }
+    .map_err(|e| from_physics(e, &track.id))?;
+    let (Some(first), Some(last)) = (track.states.first(), track.states.last()) else {
+        return Err(
+            EphemerisError::new("too_few_states", "the track has no states").for_object(&track.id),
+        );
+    };
+    Ok(TrackProperTime {
+        id: track.id.clone(),
+        start: first.epoch,
+        end: last.epoch,
+        epochs: track.states.iter().map(|s| s.epoch).collect(),
+        series,
+    })
+}
+
+/// Integrates every track of an ephemeris (see [`proper_time_of_track`]); stops at the first
+/// error, which names the object.
+pub fn proper_time_of_ephemeris<R>(
+    ephemeris: &Ephemeris,
+    interpolation: &InterpolationOptions,
+    options: &ProperTimeOptions,
+    context: &ConversionContext<'_>,
+    rate: R,
+) -> Result<Vec<TrackProperTime>, EphemerisError>
+where
+    R: Fn(&[f64; 3], &[f64; 3]) -> (f64, f64),
+{
+    if ephemeris.objects.is_empty() {
+        return Err(EphemerisError::new(
+            "no_objects",
+            "the ephemeris has no objects",
+        ));
+    }
+    ephemeris
+        .objects
+        .iter()
+        .map(|track| proper_time_of_track(track, interpolation, options, context, &rate))
+        .collect()
+}

@@ -1,0 +1,223 @@
+//! Proper time accumulated along a trajectory.
+//!
+//! The integrand is the fractional rate offset d(tau)/dt - 1 of the clock, supplied by the
+//! caller as a function of position and velocity (for example, relative to TT,
+//! `-(v^2/2 + U - W0)/c^2`; IERS Conventions (2010) eq. 10.6 at first post-Newtonian order),
+//! split into a velocity part and a gravity part. The coordinate time t is whatever time the
+//! trajectory is parameterized by (TT seconds for the ephemeris readers); the rate function
+//! must be relative to that same time.
+//!
+//! Each interval between consecutive output epochs is integrated by Gauss-Legendre quadrature
+//! whose node count (2 to 8, with halving of the interval if needed) follows from the interval
+//! length times the local angular rate |v|/|r| (see [`quadrature::GaussLegendre::plan`]); the
+//! interval integrals are accumulated with Neumaier's compensated summation.
+//!
+//! For every output epoch the result also gives the Keplerian periodic term `-2 r.v / c^2`
+//! (IS-GPS-200 section 20.3.3.3.3.1; Ashby, Living Rev. Relativity 6 (2003) 1, eq. 52) and the
+//! residual of tau - t after removing that term and a least-squares straight line: for an
+//! unperturbed orbit around a point mass the residual is zero, so its RMS measures how far the
+//! trajectory departs from a Keplerian clock behaviour (J2, drag, manoeuvres, interpolation).
+//!
+//! Earth-fixed trajectories: a rotation about the z axis changes neither |r| nor z nor r.v, so
+//! a potential that depends on |r| and z (point mass, J2) and the periodic term are the same in
+//! the rotating and the inertial frame at the same instant; only the velocity must be made
+//! inertial: v_inertial = v_ecef + omega_E x r. [`EarthFixed`] does this, so no full
+//! ITRF-to-GCRS rotation (precession, nutation, polar motion) is needed for the clock rate.
+
+pub mod kepler;
+mod quadrature;
+mod series;
+
+pub use quadrature::{CompensatedSum, GaussLegendre, MAX_NODES};
+pub use series::{kepler_periodic_term_s, ProperTimeSample, ProperTimeSeries, ProperTimeSummary};
+
+use std::fmt;
+
+use crate::physics::constants::EARTH_ROTATION_RAD_S;
+
+/// A trajectory: inertial-equivalent geocentric position (m) and velocity (m/s) at coordinate
+/// time `t_s` (seconds since the first output epoch).
+pub trait Trajectory {
+    /// The state at `t_s`.
+    fn state_at(&self, t_s: f64) -> ([f64; 3], [f64; 3]);
+}
+
+impl<F> Trajectory for F
+where
+    F: Fn(f64) -> ([f64; 3], [f64; 3]),
+{
+    fn state_at(&self, t_s: f64) -> ([f64; 3], [f64; 3]) {
+        self(t_s)
+    }
+}
+
+/// An Earth-fixed trajectory seen with inertial-equivalent velocity.
+#[derive(Debug, Clone)]
+pub struct EarthFixed<T>(pub T);
+
+impl<T: Trajectory> Trajectory for EarthFixed<T> {
+    fn state_at(&self, t_s: f64) -> ([f64; 3], [f64; 3]) {
+        let (position_m, velocity_m_s) = self.0.state_at(t_s);
+        (
+            position_m,
+            inertial_velocity_m_s(&position_m, &velocity_m_s),
+        )
+    }
+}
+
+/// Inertial velocity of a point given in an Earth-fixed frame: v + omega_E x r with
+/// omega_E = (0, 0, 7.292115e-5 rad/s) (IERS Conventions (2010) table 1.1; kinematics of a
+/// rotating frame). Inputs: position_m (m), velocity_ecef_m_s (m/s) in the Earth-fixed frame.
+/// Result: m/s, along the Earth-fixed axes at that instant. Polar motion and the variation of
+/// the rotation rate (below 1e-8 relative) are neglected.
+pub fn inertial_velocity_m_s(position_m: &[f64; 3], velocity_ecef_m_s: &[f64; 3]) -> [f64; 3] {
+    [
+        velocity_ecef_m_s[0] - EARTH_ROTATION_RAD_S * position_m[1],
+        velocity_ecef_m_s[1] + EARTH_ROTATION_RAD_S * position_m[0],
+        velocity_ecef_m_s[2],
+    ]
+}
+
+/// Settings of the integration.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct ProperTimeOptions {
+    /// Bound on (m-node error constant) * (h |v|/|r|)^(2m) per interval (default 1e-13): the
+    /// quadrature error relative to the variation of the rate.
+    pub relative_tolerance: f64,
+}
+
+impl Default for ProperTimeOptions {
+    fn default() -> Self {
+        Self {
+            relative_tolerance: 1e-13,
+        }
+    }
+}
+
+/// Why an integration was refused.
+#[derive(Debug, Clone, PartialEq)]
+pub struct ProperTimeError {
+    /// Stable code: `too_few_epochs`, `epochs_not_increasing`, `not_finite`, `bad_option`.
+    pub code: &'static str,
+    /// What is wrong.
+    pub message: String,
+    /// The output epoch (or interval start) concerned.
+    pub index: Option<usize>,
+}
+
+impl fmt::Display for ProperTimeError {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        match self.index {
+            Some(index) => write!(f, "epoch {index}: {} ({})", self.message, self.code),
+            None => write!(f, "{} ({})", self.message, self.code),
+        }
+    }
+}
+
+impl std::error::Error for ProperTimeError {}
+
+fn error(code: &'static str, index: Option<usize>, message: impl Into<String>) -> ProperTimeError {
+    ProperTimeError {
+        code,
+        message: message.into(),
+        index,
+    }
+}
+
+/// Integrates d(tau)/dt - 1 along `trajectory` between consecutive `epochs_s`.
+///
+/// Inputs: `epochs_s`, output epochs in coordinate seconds (strictly increasing, at least two;
+/// tau - t is zero at the first); `rate(position_m, velocity_m_s)` returns the fractional rate
+/// offset as (velocity part, gravity part), dimensionless. Result: per epoch tau - t, its two
+/// parts, the periodic term and the residual, plus a summary.
+pub fn integrate_proper_time<T, R>(
+    trajectory: &T,
+    epochs_s: &[f64],
+    rate: R,
+    options: &ProperTimeOptions,
+) -> Result<ProperTimeSeries, ProperTimeError>
+where
+    T: Trajectory + ?Sized,
+    R: Fn(&[f64; 3], &[f64; 3]) -> (f64, f64),
+{
+    if options.relative_tolerance.is_nan() || options.relative_tolerance <= 0.0 {
+        return Err(error(
+            "bad_option",
+            None,
+            "relative_tolerance must be positive",
+        ));
+    }
+    if epochs_s.len() < 2 {
+        return Err(error(
+            "too_few_epochs",
+            None,
+            format!("{} output epochs; at least two are needed", epochs_s.len()),
+        ));
+    }
+    if let Some(index) = epochs_s.iter().position(|t| !t.is_finite()) {
+        return Err(error("not_finite", Some(index), "the epoch is not finite"));
+    }
+    if let Some(index) = epochs_s.windows(2).position(|pair| pair[1] <= pair[0]) {
+        return Err(error(
+            "epochs_not_increasing",
+            Some(index + 1),
+            "output epochs must be strictly increasing",
+        ));
+    }
+    let rules = GaussLegendre::new();
+    let mut velocity_sum = CompensatedSum::default();
+    let mut gravity_sum = CompensatedSum::default();
+    let mut periodic_s = Vec::with_capacity(epochs_s.len());
+    let mut parts = Vec::with_capacity(epochs_s.len());
+    let first = trajectory.state_at(epochs_s.first().copied().unwrap_or(0.0));
+    periodic_s.push(kepler_periodic_term_s(&first.0, &first.1));
+    parts.push((0.0, 0.0));
+    let mut start_state = first;
+    for (index, pair) in epochs_s.windows(2).enumerate() {
+        let (start_s, end_s) = (pair[0], pair[1]);
+        let (position_m, velocity_m_s) = start_state;
+        let angular_rate = norm(&velocity_m_s) / norm(&position_m);
+        let length_s = end_s - start_s;
+        if !(length_s * angular_rate).is_finite() {
+            return Err(error(
+                "not_finite",
+                Some(index),
+                "the state at the start of this interval has a zero or non-finite position or velocity",
+            ));
+        }
+        let (nodes, pieces) = rules.plan(length_s * angular_rate, options.relative_tolerance);
+        let piece_s = length_s / pieces as f64;
+        let (mut velocity_part, mut gravity_part) = (0.0, 0.0);
+        for piece in 0..pieces {
+            let middle_s = start_s + (piece as f64 + 0.5) * piece_s;
+            for (node, weight) in rules.rule(nodes) {
+                let (p, v) = trajectory.state_at(middle_s + 0.5 * piece_s * node);
+                let (sr, gr) = rate(&p, &v);
+                velocity_part += weight * sr;
+                gravity_part += weight * gr;
+            }
+        }
+        velocity_part *= 0.5 * piece_s;
+        gravity_part *= 0.5 * piece_s;
+        if !(velocity_part.is_finite() && gravity_part.is_finite()) {
+            return Err(error(
+                "not_finite",
+                Some(index),
+                "the rate is not finite inside this interval (check the trajectory and the rate function)",
+            ));
+        }
+        velocity_sum.add(velocity_part);
+        gravity_sum.add(gravity_part);
+        start_state = trajectory.state_at(end_s);
+        periodic_s.push(kepler_periodic_term_s(&start_state.0, &start_state.1));
+        parts.push((velocity_sum.value(), gravity_sum.value()));
+    }
+    Ok(series::build(epochs_s, periodic_s, &parts))
+}
+
+fn norm(vector: &[f64; 3]) -> f64 {
+    (vector[0] * vector[0] + vector[1] * vector[1] + vector[2] * vector[2]).sqrt()
+}
+
+#[cfg(test)]
+pub(crate) mod tests;
