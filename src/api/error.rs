@@ -1,9 +1,12 @@
 //! One error type for the whole API, answered as RFC 9457 `application/problem+json`.
 
+use std::collections::BTreeMap;
+
 use axum::http::{header, HeaderValue, StatusCode};
 use axum::response::{IntoResponse, Response};
 use serde::Serialize;
-use utoipa::ToSchema;
+use utoipa::openapi::{ContentBuilder, Ref, RefOr, ResponseBuilder};
+use utoipa::{IntoResponses, ToSchema};
 
 use crate::physics::time::error::TimeError;
 
@@ -158,4 +161,75 @@ pub async fn method_not_allowed(method: axum::http::Method, uri: axum::http::Uri
             uri.path()
         ),
     )
+}
+
+/// One documented problem answer: `description`, body `Problem` as `application/problem+json`.
+pub fn problem_response(description: &str) -> RefOr<utoipa::openapi::Response> {
+    ResponseBuilder::new()
+        .description(description)
+        .content(
+            PROBLEM_JSON,
+            ContentBuilder::new()
+                .schema(Some(Ref::from_schema_name("Problem")))
+                .build(),
+        )
+        .build()
+        .into()
+}
+
+/// The answers every `POST` with a JSON body can give before its own validation: 400 (the body
+/// is not JSON or does not match the schema), 413 (above the body limit), 415 (not sent as
+/// JSON). List it in a handler's `responses(...)` beside its own 200 and 422.
+pub struct JsonBodyProblems;
+
+impl IntoResponses for JsonBodyProblems {
+    fn responses() -> BTreeMap<String, RefOr<utoipa::openapi::Response>> {
+        BTreeMap::from([
+            (
+                "400".to_string(),
+                problem_response(
+                    "The body is not valid JSON or does not match the schema (`invalid_json`, `invalid_body`, `unreadable_body`; e.g. a missing or unknown field, a wrong type, a number beyond the f64 range such as 1e400); `field` names the JSON path",
+                ),
+            ),
+            (
+                "413".to_string(),
+                problem_response("The body is above the configured limit (`body_too_large`; see --body-limit-bytes)"),
+            ),
+            (
+                "415".to_string(),
+                problem_response(
+                    "The body was not sent as JSON (`unsupported_media_type`): send `Content-Type: application/json`",
+                ),
+            ),
+        ])
+    }
+}
+
+/// The answer of a query string that cannot be read (400 `invalid_query`).
+pub struct QueryProblems;
+
+impl IntoResponses for QueryProblems {
+    fn responses() -> BTreeMap<String, RefOr<utoipa::openapi::Response>> {
+        BTreeMap::from([(
+            "400".to_string(),
+            problem_response(
+                "The query string cannot be read (`invalid_query`): a missing `at`, an unknown parameter, a parameter given twice, a malformed `observer_itrf_m`",
+            ),
+        )])
+    }
+}
+
+/// The answer of any operation that does not finish within the configured request timeout
+/// (503 `request_timeout`).
+pub struct TimeoutProblem;
+
+impl IntoResponses for TimeoutProblem {
+    fn responses() -> BTreeMap<String, RefOr<utoipa::openapi::Response>> {
+        BTreeMap::from([(
+            "503".to_string(),
+            problem_response(
+                "The request took longer than the configured timeout (`request_timeout`; see --request-timeout-s): split it into smaller requests",
+            ),
+        )])
+    }
 }

@@ -8,6 +8,7 @@ pub mod clock;
 pub mod docs;
 pub mod error;
 pub mod extract;
+pub mod names;
 pub mod openapi;
 pub mod problem_codes;
 pub mod signal;

@@ -37,7 +37,8 @@ for _ in $(seq 100); do
 done
 
 set +e
-schemathesis run "http://127.0.0.1:$port/openapi.json" \
+schemathesis --config-file tests/contract/schemathesis.toml \
+  run "http://127.0.0.1:$port/openapi.json" \
   --checks all \
   --max-examples "$max_examples" \
   --seed "$seed" \
@@ -52,4 +53,10 @@ if ! kill -0 "$server_pid" 2>/dev/null; then
   echo "contract: the server died during the run (see $report_dir/server.log)"
   exit 1
 fi
+# What the server answered, per operation and status (from its own request counter).
+curl -fsS "http://127.0.0.1:$port/metrics" \
+  | sed -n 's/^eigenzeit_http_requests_total{route="\([^"]*\)",method="\([^"]*\)",status="\([^"]*\)"} \(.*\)$/\2 \1 \3 \4/p' \
+  | sort >"$report_dir/answers-by-status.txt" || true
+echo "== answers by operation and status (method, route, status, count): $report_dir/answers-by-status.txt"
+cat "$report_dir/answers-by-status.txt"
 exit "$status"

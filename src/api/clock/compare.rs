@@ -5,7 +5,7 @@ use axum::Json;
 use super::answer::{CompareAnswer, RateDifferenceAnswer};
 use super::evaluate::{evaluate_item, Defaults};
 use super::types::CompareRequest;
-use crate::api::error::ApiError;
+use crate::api::error::{ApiError, JsonBodyProblems, Problem, TimeoutProblem};
 use crate::api::extract::JsonBody;
 use crate::physics::rate::{
     fractional_to_microseconds_per_day, fractional_to_nanoseconds_per_day, rate_difference,
@@ -17,9 +17,9 @@ use crate::physics::rate::{
     request_body = CompareRequest,
     responses(
         (status = 200, description = "The rate of each clock and how fast A runs relative to B", body = CompareAnswer),
-        (status = 400, description = "The body is not valid JSON or does not match the schema", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 413, description = "Body above the configured limit", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 422, description = "A value cannot be used; `field` names it (e.g. `clock_b.ground_site.latitude_deg`); the codes are those of `POST /v1/clock/rate`, plus reference_mismatch when the two clocks use different references", body = crate::api::error::Problem, content_type = "application/problem+json")))]
+        JsonBodyProblems,
+        (status = 422, description = "A value cannot be used; `field` names it (e.g. `clock_b.ground_site.latitude_deg`); the codes are those of `POST /v1/clock/rate`, plus reference_mismatch when the two clocks use different references", body = Problem, content_type = "application/problem+json"),
+        TimeoutProblem))]
 pub async fn compare(
     JsonBody(request): JsonBody<CompareRequest>,
 ) -> Result<Json<CompareAnswer>, ApiError> {

@@ -5,6 +5,7 @@ use super::answer::{FrequencyAnswer, PeriodicAnswer, RateAnswer, RateSplit};
 use super::notes;
 use super::types::{GroundSiteInput, LunarSiteInput, OrbitInput, RateItem, StateInput};
 use crate::api::error::ApiError;
+use crate::api::names::one_of;
 use crate::physics::rate::{
     frequency_offset, ground_site_rate, lunar_site_rate, orbit_rate, state_rate, Anomaly, Frame,
     GravityModel, GroundHeight, GroundSite, KeplerianOrbit, LunarSite, RateError, RateParts,
@@ -29,6 +30,17 @@ impl Defaults {
         gravity_model: Option<&str>,
         nominal_frequency_hz: Option<f64>,
     ) -> Result<Self, ApiError> {
+        if let Some(nominal_hz) = nominal_frequency_hz {
+            // Checked here even when every item gives its own frequency: a request-level value
+            // that could never be used is still refused.
+            frequency_offset(nominal_hz, 0.0).map_err(|error| {
+                ApiError::unprocessable(
+                    error.code(),
+                    format!("nominal_frequency_hz: {}", error.message),
+                )
+                .with_field("nominal_frequency_hz")
+            })?;
+        }
         Ok(Self {
             reference: reference
                 .map(|text| parse_reference(text, "reference"))
@@ -50,29 +62,38 @@ pub struct Evaluated {
     pub parts: RateParts,
 }
 
-/// Reads `TT` or `TCG` (any letter case).
+/// Reads `TT` or `TCG` (written exactly so).
 pub fn parse_reference(text: &str, field: &str) -> Result<RateReference, ApiError> {
-    match text.trim().to_ascii_uppercase().as_str() {
-        "TT" => Ok(RateReference::Tt),
-        "TCG" => Ok(RateReference::Tcg),
-        _ => Err(ApiError::unprocessable(
+    one_of(
+        text,
+        &[("TT", RateReference::Tt), ("TCG", RateReference::Tcg)],
+    )
+    .ok_or_else(|| {
+        ApiError::unprocessable(
             "unknown_reference",
-            format!("unknown reference `{text}`; expected TT or TCG"),
+            format!("unknown reference `{text}`; expected TT or TCG (written exactly so)"),
         )
-        .with_field(field)),
-    }
+        .with_field(field)
+    })
 }
 
 fn parse_gravity_model(text: &str, field: &str) -> Result<GravityModel, ApiError> {
-    match text.trim().to_ascii_lowercase().as_str() {
-        "point_mass" => Ok(GravityModel::PointMass),
-        "j2" => Ok(GravityModel::J2),
-        _ => Err(ApiError::unprocessable(
+    one_of(
+        text,
+        &[
+            ("point_mass", GravityModel::PointMass),
+            ("j2", GravityModel::J2),
+        ],
+    )
+    .ok_or_else(|| {
+        ApiError::unprocessable(
             "unknown_gravity_model",
-            format!("unknown gravity model `{text}`; expected point_mass or j2"),
+            format!(
+                "unknown gravity model `{text}`; expected point_mass or j2 (written exactly so)"
+            ),
         )
-        .with_field(field)),
-    }
+        .with_field(field)
+    })
 }
 
 fn reference_name(reference: RateReference) -> &'static str {
@@ -276,17 +297,20 @@ fn state_answer(
     path: &str,
     origins: &Origins<'_>,
 ) -> Result<(RateParts, PeriodicAnswer), ApiError> {
-    let frame = match state.frame.trim().to_ascii_uppercase().as_str() {
-        "GCRS" => Frame::Gcrs,
-        "ITRF" => Frame::Itrf,
-        _ => {
-            return Err(ApiError::unprocessable(
-                "unknown_frame",
-                format!("unknown frame `{}`; expected GCRS or ITRF", state.frame),
-            )
-            .with_field(format!("{path}.state.frame")))
-        }
-    };
+    let frame = one_of(
+        &state.frame,
+        &[("GCRS", Frame::Gcrs), ("ITRF", Frame::Itrf)],
+    )
+    .ok_or_else(|| {
+        ApiError::unprocessable(
+            "unknown_frame",
+            format!(
+                "unknown frame `{}`; expected GCRS or ITRF (written exactly so)",
+                state.frame
+            ),
+        )
+        .with_field(format!("{path}.state.frame"))
+    })?;
     let vector = StateVector {
         frame,
         position_m: state.position_m,
@@ -355,21 +379,15 @@ fn ground_answer(
     path: &str,
     origins: &Origins<'_>,
 ) -> Result<(RateParts, &'static str), ApiError> {
-    let above_geoid = match site
-        .height_reference
-        .as_deref()
-        .map(|text| text.trim().to_ascii_lowercase())
-        .as_deref()
-    {
-        None | Some("ellipsoid") => false,
-        Some("geoid") => true,
-        Some(_) => {
-            return Err(ApiError::unprocessable(
+    let above_geoid = match site.height_reference.as_deref() {
+        None => false,
+        Some(text) => one_of(text, &[("ellipsoid", false), ("geoid", true)]).ok_or_else(|| {
+            ApiError::unprocessable(
                 "unknown_height_reference",
-                "unknown height reference; expected ellipsoid or geoid",
+                "unknown height reference; expected ellipsoid or geoid (written exactly so)",
             )
-            .with_field(format!("{path}.ground_site.height_reference")))
-        }
+            .with_field(format!("{path}.ground_site.height_reference"))
+        })?,
     };
     let model = requested_model.unwrap_or(GravityModel::J2);
     let (height, label) = if above_geoid {

@@ -7,7 +7,7 @@ use axum::Json;
 use super::answer::RateBatchAnswer;
 use super::evaluate::{evaluate_item, Defaults};
 use super::types::RateRequest;
-use crate::api::error::ApiError;
+use crate::api::error::{ApiError, JsonBodyProblems, Problem, TimeoutProblem};
 use crate::api::extract::{check_batch_size, JsonBody};
 use crate::api::state::AppState;
 
@@ -18,9 +18,9 @@ use crate::api::state::AppState;
     request_body = RateRequest,
     responses(
         (status = 200, description = "One answer per item, in order", body = RateBatchAnswer),
-        (status = 400, description = "The body is not valid JSON or does not match the schema (e.g. a number beyond the f64 range such as 1e400, a missing or unknown field)", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 413, description = "Body above the configured limit", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 422, description = "A value cannot be used; `field` names it (e.g. `items[3].orbit.eccentricity`) and `code` says why: subject_missing, subject_ambiguous, unknown_reference, unknown_gravity_model, unknown_frame, unknown_height_reference, anomaly_ambiguous, empty_batch, batch_too_large, not_finite, speed_not_below_c, below_surface, beyond_model_range, invalid_semi_major_axis, invalid_eccentricity, latitude_out_of_range, angle_out_of_range, unsupported_gravity_model, invalid_frequency, rate_out_of_range", body = crate::api::error::Problem, content_type = "application/problem+json")))]
+        JsonBodyProblems,
+        (status = 422, description = "A value cannot be used; `field` names it (e.g. `items[3].orbit.eccentricity`) and `code` says why: subject_missing, subject_ambiguous, unknown_reference, unknown_gravity_model, unknown_frame, unknown_height_reference, anomaly_ambiguous, empty_batch, batch_too_large, not_finite, speed_not_below_c, below_surface, beyond_model_range, invalid_semi_major_axis, invalid_eccentricity, latitude_out_of_range, angle_out_of_range, unsupported_gravity_model, invalid_frequency, rate_out_of_range", body = Problem, content_type = "application/problem+json"),
+        TimeoutProblem))]
 pub async fn rate(
     State(state): State<AppState>,
     JsonBody(request): JsonBody<RateRequest>,

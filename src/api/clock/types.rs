@@ -3,6 +3,8 @@
 use serde::Deserialize;
 use utoipa::ToSchema;
 
+use crate::api::names::{FrameName, HeightReferenceName, PositionM, VelocityMS};
+
 /// Names of the reference time scales (documentation of the `reference` strings).
 #[derive(Debug, Clone, Copy, ToSchema)]
 #[allow(clippy::upper_case_acronyms, dead_code)]
@@ -32,11 +34,14 @@ pub enum GravityModelName {
 pub struct StateInput {
     /// `GCRS` (non-rotating, geocentric) or `ITRF` (Earth-fixed, rotating; the velocity is then
     /// relative to the rotating Earth and the rotation omega_E x r is added).
-    #[schema(example = "GCRS")]
+    #[schema(value_type = FrameName)]
     pub frame: String,
-    /// Geocentric position [x, y, z], metres.
+    /// Geocentric position [x, y, z], metres (not more than 11 km inside the Earth, at most
+    /// 1.5e9 m from the geocentre).
+    #[schema(value_type = PositionM)]
     pub position_m: [f64; 3],
-    /// Velocity [vx, vy, vz] in `frame`, metres per second.
+    /// Velocity [vx, vy, vz] in `frame`, metres per second (inertial speed below c).
+    #[schema(value_type = VelocityMS)]
     pub velocity_m_s: [f64; 3],
 }
 
@@ -47,19 +52,27 @@ pub struct StateInput {
 #[schema(example = json!({"semi_major_axis_m": 26561750.0, "eccentricity": 0.01,
     "inclination_deg": 55.0, "mean_anomaly_deg": 30.0}))]
 pub struct OrbitInput {
-    /// Semi-major axis a, metres (periapsis above the Earth, apoapsis inside its Hill sphere,
-    /// 1.5e9 m).
+    /// Semi-major axis a, metres, in [6 345 752.314 (the polar radius less 11 km), 1.5e9 (the
+    /// Earth's Hill sphere)]; the periapsis a(1 - e) must also be above that depth and the
+    /// apoapsis a(1 + e) within 1.5e9 m (422 `invalid_semi_major_axis`, `below_surface`,
+    /// `beyond_model_range` otherwise).
+    #[schema(minimum = 6345752.314140356, maximum = 1.5e9)]
     pub semi_major_axis_m: f64,
     /// Eccentricity e, in [0, 1).
+    #[schema(minimum = 0.0, exclusive_maximum = 1.0)]
     pub eccentricity: f64,
     /// Inclination, degrees in [0, 180]. Accepted and echoed; it does not change the
     /// first-order rate of a point-mass orbit.
+    #[schema(minimum = 0.0, maximum = 180.0)]
     pub inclination_deg: Option<f64>,
     /// True anomaly nu, degrees (|value| <= 1e6).
+    #[schema(minimum = -1.0e6, maximum = 1.0e6)]
     pub true_anomaly_deg: Option<f64>,
     /// Mean anomaly M, degrees (|value| <= 1e6).
+    #[schema(minimum = -1.0e6, maximum = 1.0e6)]
     pub mean_anomaly_deg: Option<f64>,
     /// Eccentric anomaly E, degrees (|value| <= 1e6).
+    #[schema(minimum = -1.0e6, maximum = 1.0e6)]
     pub eccentric_anomaly_deg: Option<f64>,
 }
 
@@ -70,16 +83,19 @@ pub struct OrbitInput {
     "height_reference": "geoid"}))]
 pub struct GroundSiteInput {
     /// Geodetic latitude on GRS80, degrees in [-90, 90].
+    #[schema(minimum = -90.0, maximum = 90.0)]
     pub latitude_deg: f64,
     /// Longitude, degrees east (|value| <= 1e6).
+    #[schema(minimum = -1.0e6, maximum = 1.0e6)]
     pub longitude_deg: f64,
     /// Height above `height_reference`, metres, in [-11 000, 1e8]. Higher clocks run faster
     /// (about +1.09e-16 per metre near the ground).
+    #[schema(minimum = -11000.0, maximum = 1.0e8)]
     pub height_m: f64,
     /// `ellipsoid` (default: height above the GRS80 ellipsoid, the rate comes from the gravity
     /// model) or `geoid` (orthometric height: W0 - W from GRS80 normal gravity, so a clock on
     /// the geoid has rate 0 against TT; the gravity model is not used).
-    #[schema(example = "ellipsoid")]
+    #[schema(value_type = Option<HeightReferenceName>)]
     pub height_reference: Option<String>,
 }
 
@@ -89,11 +105,14 @@ pub struct GroundSiteInput {
 #[schema(example = json!({"latitude_deg": -89.5, "longitude_deg": 0.0, "height_m": 0.0}))]
 pub struct LunarSiteInput {
     /// Selenographic latitude, degrees in [-90, 90] (IAU mean-Earth/polar-axis system).
+    #[schema(minimum = -90.0, maximum = 90.0)]
     pub latitude_deg: f64,
-    /// Selenographic longitude, degrees east; 0 is the mean sub-Earth point.
+    /// Selenographic longitude, degrees east (|value| <= 1e6); 0 is the mean sub-Earth point.
+    #[schema(minimum = -1.0e6, maximum = 1.0e6)]
     pub longitude_deg: f64,
     /// Height above the mean lunar sphere of radius 1737.4 km, metres, in [-11 000, 100 000]
     /// (default 0).
+    #[schema(minimum = -11000.0, maximum = 100000.0)]
     pub height_m: Option<f64>,
 }
 
@@ -119,7 +138,8 @@ pub struct RateItem {
     /// offer only `point_mass`.
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
-    /// Nominal oscillator frequency for this clock, Hz (> 0); overrides the request's.
+    /// Nominal oscillator frequency for this clock, Hz, in (0, 9e15]; overrides the request's.
+    #[schema(exclusive_minimum = 0.0, maximum = 9.0e15)]
     pub nominal_frequency_hz: Option<f64>,
 }
 
@@ -137,7 +157,9 @@ pub struct RateItem {
     "nominal_frequency_hz": 10.23e6
 }))]
 pub struct RateRequest {
-    /// The clocks, at least one and at most the configured batch limit (default 100 000).
+    /// The clocks, at least one and at most the configured batch limit (100 000 by default,
+    /// `--batch-limit`; 422 `batch_too_large` above it).
+    #[schema(min_items = 1, max_items = 100000)]
     pub items: Vec<RateItem>,
     /// Reference scale for every item without its own: `TT` (default) or `TCG`.
     #[schema(value_type = Option<ReferenceName>)]
@@ -149,8 +171,9 @@ pub struct RateRequest {
     /// below 1e-17 of rate at the Moon.
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
-    /// Nominal oscillator frequency for every item without its own, Hz (> 0): adds the
-    /// `frequency` answer.
+    /// Nominal oscillator frequency for every item without its own, Hz, in (0, 9e15]: adds
+    /// the `frequency` answer.
+    #[schema(exclusive_minimum = 0.0, maximum = 9.0e15)]
     pub nominal_frequency_hz: Option<f64>,
 }
 
@@ -174,6 +197,7 @@ pub struct CompareRequest {
     /// Gravity model for a clock without its own (see `POST /v1/clock/rate`).
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
-    /// Nominal oscillator frequency for a clock without its own, Hz (> 0).
+    /// Nominal oscillator frequency for a clock without its own, Hz, in (0, 9e15].
+    #[schema(exclusive_minimum = 0.0, maximum = 9.0e15)]
     pub nominal_frequency_hz: Option<f64>,
 }

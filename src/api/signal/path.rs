@@ -6,15 +6,15 @@ use axum::Json;
 use super::types::{
     Correction, PathEndpointInput, SignalPathAnswer, SignalPathRequest, SignalTerms,
 };
-use crate::api::error::ApiError;
+use crate::api::error::{ApiError, JsonBodyProblems, Problem, TimeoutProblem};
 use crate::api::extract::JsonBody;
+use crate::api::names::{one_of, parse_format, parse_scale};
 use crate::api::state::AppState;
 use crate::api::time::types::InstantForms;
 use crate::physics::constants::SPEED_OF_LIGHT_M_S;
 use crate::physics::geodesy::geodetic_to_ecef_m;
 use crate::physics::signal::{signal_path as solve, Endpoint, Frame, PathGeometry, SignalError};
-use crate::physics::time::formats::{parse_instant, write_instant, InstantFormat};
-use crate::physics::time::scale::Scale;
+use crate::physics::time::formats::{parse_instant, write_instant};
 
 /// The sign convention of the path answer.
 pub const PATH_SIGN_CONVENTION: &str = "Path terms are added to geometric_range_m / c to give light_time_s: light_time_s = geometric_range_m / c + sagnac.s + shapiro.s; total = sagnac + shapiro. The Sagnac term is positive for an eastward signal. clock_periodic is the transmitter clock's reading minus coordinate time (-2 r.v/c^2, IS-GPS-200); it is not in light_time_s or total.";
@@ -31,15 +31,13 @@ fn invalid_endpoint(field: String, detail: &str) -> ApiError {
 }
 
 fn parse_frame(text: &str, field: String) -> Result<Frame, ApiError> {
-    match text.to_ascii_uppercase().as_str() {
-        "GCRS" => Ok(Frame::Gcrs),
-        "ITRF" => Ok(Frame::Itrf),
-        _ => Err(ApiError::unprocessable(
+    one_of(text, &[("GCRS", Frame::Gcrs), ("ITRF", Frame::Itrf)]).ok_or_else(|| {
+        ApiError::unprocessable(
             "unknown_frame",
-            format!("unknown frame `{text}`; expected GCRS or ITRF"),
+            format!("unknown frame `{text}`; expected GCRS or ITRF (written exactly so)"),
         )
-        .with_field(field)),
-    }
+        .with_field(field)
+    })
 }
 
 fn resolve(owner: &str, input: &PathEndpointInput) -> Result<Resolved, ApiError> {
@@ -95,16 +93,8 @@ fn correction(seconds: f64) -> Correction {
 
 /// Parses the reception epoch and writes it back in every form.
 fn epoch_forms(request: &SignalPathRequest, state: &AppState) -> Result<InstantForms, ApiError> {
-    let scale = request
-        .scale
-        .parse::<Scale>()
-        .map_err(|e| ApiError::unprocessable("unknown_scale", e.to_string()).with_field("scale"))?;
-    let format = match request.format.as_deref() {
-        None => InstantFormat::Iso,
-        Some(text) => text
-            .parse::<InstantFormat>()
-            .map_err(|e| ApiError::from_time(&e, "format"))?,
-    };
+    let scale = parse_scale(&request.scale, "scale")?;
+    let format = parse_format(request.format.as_deref(), "format")?;
     let table = state.leap_table();
     let instant = parse_instant(&request.epoch, format, scale, &table)
         .map_err(|e| ApiError::from_time(&e, "epoch"))?;
@@ -118,9 +108,9 @@ fn epoch_forms(request: &SignalPathRequest, state: &AppState) -> Result<InstantF
     request_body = SignalPathRequest,
     responses(
         (status = 200, description = "The light time and its Sagnac, Shapiro and clock terms", body = SignalPathAnswer),
-        (status = 400, description = "The body is not valid JSON or does not match the schema", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 413, description = "Body above the configured limit", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 422, description = "A value cannot be used (position inside the Earth, speed >= c, identical positions, frames that differ, bad epoch, ...); `field` names it", body = crate::api::error::Problem, content_type = "application/problem+json")))]
+        JsonBodyProblems,
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: invalid_endpoint (neither or both of `ground_site` and `frame` + `position_m`), unknown_frame, frames_differ, inside_earth, beyond_range, speed_not_below_c, not_finite, coincident_endpoints, path_through_earth (the receiver cannot see the transmitter), no_convergence, invalid_value (a ground site's latitude, longitude or height), and the epoch codes of `GET /v1/time/convert` (unknown_scale, unknown_format, malformed_instant, impossible_date, ...)", body = Problem, content_type = "application/problem+json"),
+        TimeoutProblem))]
 pub async fn signal_path(
     State(state): State<AppState>,
     JsonBody(request): JsonBody<SignalPathRequest>,

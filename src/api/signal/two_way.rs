@@ -3,7 +3,7 @@
 use axum::Json;
 
 use super::types::{GroundSiteInput, TwoWayAnswer, TwoWayRequest};
-use crate::api::error::ApiError;
+use crate::api::error::{ApiError, JsonBodyProblems, Problem, TimeoutProblem};
 use crate::api::extract::JsonBody;
 use crate::physics::constants::GEOSTATIONARY_RADIUS_M;
 use crate::physics::signal::{two_way_sagnac, Station, TwoWayLink};
@@ -24,9 +24,9 @@ fn station(input: GroundSiteInput) -> Station {
     request_body = TwoWayRequest,
     responses(
         (status = 200, description = "The Sagnac terms of both legs and the two-way correction", body = TwoWayAnswer),
-        (status = 400, description = "The body is not valid JSON or does not match the schema", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 413, description = "Body above the configured limit", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 422, description = "A value cannot be used (latitude out of range, satellite below a station's horizon: `not_visible`, ...); `field` names it", body = crate::api::error::Problem, content_type = "application/problem+json")))]
+        JsonBodyProblems,
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: not_visible (the satellite is below a station's horizon), invalid_value (a latitude, longitude or height out of range, or a satellite radius that puts it inside the Earth)", body = Problem, content_type = "application/problem+json"),
+        TimeoutProblem))]
 pub async fn two_way(
     JsonBody(request): JsonBody<TwoWayRequest>,
 ) -> Result<Json<TwoWayAnswer>, ApiError> {

@@ -3,6 +3,9 @@
 use serde::{Deserialize, Serialize};
 use utoipa::ToSchema;
 
+use crate::api::names::{
+    FrameName, InstantFormatName, InstantString, PositionM, ScaleName, VelocityMS,
+};
 use crate::api::time::types::InstantForms;
 
 /// A place on the Earth: GRS80 geodetic coordinates (fixed in the ITRF).
@@ -11,25 +14,34 @@ use crate::api::time::types::InstantForms;
 #[schema(example = json!({"latitude_deg": 50.1, "longitude_deg": 8.6, "height_m": 150.0}))]
 pub struct GroundSiteInput {
     /// Geodetic latitude on the GRS80 ellipsoid, degrees in [-90, 90] (north positive).
+    #[schema(minimum = -90.0, maximum = 90.0)]
     pub latitude_deg: f64,
-    /// Longitude, degrees east (any finite value; wraps).
+    /// Longitude, degrees east, |value| <= 1e6 (wraps).
+    #[schema(minimum = -1.0e6, maximum = 1.0e6)]
     pub longitude_deg: f64,
     /// Height above the GRS80 ellipsoid, metres, in [-11 000, 1e8].
+    #[schema(minimum = -11000.0, maximum = 1.0e8)]
     pub height_m: f64,
 }
 
-/// One end of a signal path: either `frame` + `position_m` (+ `velocity_m_s`), or `ground_site`.
+/// One end of a signal path: either `frame` + `position_m` (+ `velocity_m_s`), or `ground_site`
+/// (422 `invalid_endpoint` otherwise).
 #[derive(Debug, Clone, Deserialize, ToSchema)]
 #[serde(deny_unknown_fields)]
+#[schema(example = json!({"frame": "ITRF", "position_m": [15600000.0, 7540000.0, 20140000.0],
+    "velocity_m_s": [-2000.0, 2800.0, 500.0]}))]
 pub struct PathEndpointInput {
     /// `GCRS` (geocentric, non-rotating) or `ITRF` (Earth-fixed). Both ends must use the same
     /// frame; a `ground_site` counts as ITRF.
+    #[schema(value_type = Option<FrameName>)]
     pub frame: Option<String>,
     /// Geocentric position at the reception epoch, metres.
+    #[schema(value_type = Option<PositionM>)]
     pub position_m: Option<[f64; 3]>,
     /// Velocity in `frame` at the reception epoch, m/s (ITRF: relative to the rotating Earth).
     /// Absent: at rest in `frame`. The transmitter is moved back along it to the emission time;
     /// the receiver's is only checked (its position at reception is all the light time needs).
+    #[schema(value_type = Option<VelocityMS>)]
     pub velocity_m_s: Option<[f64; 3]>,
     /// A point fixed on the Earth, instead of `frame` and `position_m`.
     pub ground_site: Option<GroundSiteInput>,
@@ -50,10 +62,13 @@ pub struct SignalPathRequest {
     /// The receiver at the reception epoch.
     pub receiver: PathEndpointInput,
     /// The reception instant, as text in `format` and `scale`; echoed in the answer.
+    #[schema(value_type = InstantString)]
     pub epoch: String,
     /// Scale of `epoch`: UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST.
+    #[schema(value_type = ScaleName)]
     pub scale: String,
     /// How `epoch` is written (default `iso`): iso, mjd, jd, j2000_s, unix_s, gnss_week.
+    #[schema(value_type = Option<InstantFormatName>)]
     pub format: Option<String>,
 }
 
@@ -124,10 +139,15 @@ pub struct TwoWayRequest {
     pub station_a: GroundSiteInput,
     /// Station B.
     pub station_b: GroundSiteInput,
-    /// Longitude of the sub-satellite point of the satellite (fixed above the equator), degrees east.
+    /// Longitude of the sub-satellite point of the satellite (fixed above the equator), degrees
+    /// east, |value| <= 1e6 (wraps). The satellite must be above both stations' horizons (422
+    /// `not_visible` otherwise).
+    #[schema(minimum = -1.0e6, maximum = 1.0e6)]
     pub satellite_longitude_deg: f64,
-    /// Geocentric distance of the satellite, m (default: geostationary, 42 164 172 m =
-    /// (GM/omega_E^2)^(1/3) with IERS Conventions (2010) table 1.1 values).
+    /// Geocentric distance of the satellite, m, at most 1.5e9 and above the Earth's surface
+    /// (default: geostationary, 42 164 172 m = (GM/omega_E^2)^(1/3) with IERS Conventions
+    /// (2010) table 1.1 values).
+    #[schema(exclusive_minimum = 0.0, maximum = 1.5e9)]
     pub satellite_radius_m: Option<f64>,
 }
 

@@ -8,8 +8,9 @@ use super::types::{
     Conversion, ConversionBatch, ConvertBatchRequest, ConvertQuery, ConvertedInstant, InstantForms,
     ObserverInput,
 };
-use crate::api::error::ApiError;
+use crate::api::error::{ApiError, JsonBodyProblems, Problem, QueryProblems, TimeoutProblem};
 use crate::api::extract::{check_batch_size, JsonBody, QueryParams};
+use crate::api::names::{parse_format, parse_scale, ALL_SCALES};
 use crate::api::state::AppState;
 use crate::physics::time::calendar::CalendarDate;
 use crate::physics::time::convert::{convert, ConversionContext, TdbEvaluation};
@@ -24,21 +25,7 @@ use crate::physics::time::tdb_series::TopocentricObserver;
 
 /// Distance from the geocentre accepted for an observer, metres (about -15 km to +100 km
 /// around the Earth's surface; the topocentric TDB term is for observers on the ground).
-const OBSERVER_RADIUS_RANGE_M: (f64, f64) = (6_340_000.0, 6_480_000.0);
-
-fn parse_scale(text: &str, field: &str) -> Result<Scale, ApiError> {
-    text.parse::<Scale>()
-        .map_err(|e| ApiError::unprocessable("unknown_scale", e.to_string()).with_field(field))
-}
-
-fn parse_format(text: Option<&str>, field: &str) -> Result<InstantFormat, ApiError> {
-    match text {
-        None => Ok(InstantFormat::Iso),
-        Some(text) => text
-            .parse::<InstantFormat>()
-            .map_err(|e| ApiError::from_time(&e, field)),
-    }
-}
+pub const OBSERVER_RADIUS_RANGE_M: (f64, f64) = (6_340_000.0, 6_480_000.0);
 
 fn parse_targets<'a>(
     names: impl Iterator<Item = &'a str>,
@@ -46,8 +33,7 @@ fn parse_targets<'a>(
 ) -> Result<Vec<Scale>, ApiError> {
     let mut scales = Vec::new();
     for (index, name) in names.enumerate() {
-        let name = name.trim();
-        if name.eq_ignore_ascii_case("all") {
+        if name == ALL_SCALES {
             scales.extend(Scale::ALL);
         } else {
             scales.push(parse_scale(name, &format!("{field}[{index}]"))?);
@@ -115,7 +101,7 @@ fn parse_observer_query(text: &str) -> Result<TopocentricObserver, ApiError> {
     let field = "observer_itrf_m";
     let values: Vec<f64> = text
         .split(',')
-        .map(|part| part.trim().parse::<f64>())
+        .map(str::parse::<f64>)
         .collect::<Result<_, _>>()
         .map_err(|_| {
             ApiError::bad_request("invalid_query", "expected three numbers x,y,z in metres")
@@ -196,8 +182,9 @@ pub fn convert_one(
     params(ConvertQuery),
     responses(
         (status = 200, description = "The instant in each target scale", body = Conversion),
-        (status = 400, description = "The query string cannot be read", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 422, description = "A value cannot be used (unknown scale, impossible date, ...)", body = crate::api::error::Problem, content_type = "application/problem+json")))]
+        QueryProblems,
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format, no_target_scale, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales), not_finite, observer_not_on_ground", body = Problem, content_type = "application/problem+json"),
+        TimeoutProblem))]
 pub async fn convert_get(
     State(state): State<AppState>,
     QueryParams(query): QueryParams<ConvertQuery>,
@@ -224,9 +211,9 @@ pub async fn convert_get(
     request_body = ConvertBatchRequest,
     responses(
         (status = 200, description = "One conversion per epoch, in order", body = ConversionBatch),
-        (status = 400, description = "The body is not valid JSON or does not match the schema", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 413, description = "Body above the configured limit", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 422, description = "A value cannot be used; `field` names it (e.g. `epochs[3]`)", body = crate::api::error::Problem, content_type = "application/problem+json")))]
+        JsonBodyProblems,
+        (status = 422, description = "A value cannot be used; `field` names it (e.g. `epochs[3]`) and `code` says why: the codes of `GET /v1/time/convert`, plus empty_batch, batch_too_large (above the configured limit), invalid_observer", body = Problem, content_type = "application/problem+json"),
+        TimeoutProblem))]
 pub async fn convert_post(
     State(state): State<AppState>,
     JsonBody(request): JsonBody<ConvertBatchRequest>,

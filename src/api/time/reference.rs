@@ -127,8 +127,10 @@ fn with_etag<T: Serialize>(headers: &HeaderMap, tag_basis: &[u8], body: &T) -> R
 /// The time scales, what realizes each and how they relate.
 #[utoipa::path(get, path = "/v1/time/scales", tag = "time",
     responses(
-        (status = 200, description = "The scales (with an ETag)", body = ScaleList),
-        (status = 304, description = "The client's copy (If-None-Match) is current")))]
+        (status = 200, description = "The scales (with an ETag)", body = ScaleList,
+            headers(("ETag" = String, description = "Weak validator of the list"), ("Cache-Control" = String, description = "`public, max-age=300`"))),
+        (status = 304, description = "The client's copy (If-None-Match) is current",
+            headers(("ETag" = String, description = "Weak validator of the list"), ("Cache-Control" = String, description = "`public, max-age=300`")))))]
 pub async fn scales(headers: HeaderMap) -> Response {
     let scales = Scale::ALL
         .into_iter()
@@ -149,8 +151,10 @@ pub async fn scales(headers: HeaderMap) -> Response {
 /// The leap-second table in use, its source and its expiry.
 #[utoipa::path(get, path = "/v1/time/leap-seconds", tag = "time",
     responses(
-        (status = 200, description = "The table (with an ETag)", body = LeapSecondTable),
-        (status = 304, description = "The client's copy (If-None-Match) is current")))]
+        (status = 200, description = "The table (with an ETag)", body = LeapSecondTable,
+            headers(("ETag" = String, description = "Weak validator of the table (not of the countdown)"), ("Cache-Control" = String, description = "`public, max-age=300`"))),
+        (status = 304, description = "The client's copy (If-None-Match) is current",
+            headers(("ETag" = String, description = "Weak validator of the table (not of the countdown)"), ("Cache-Control" = String, description = "`public, max-age=300`")))))]
 pub async fn leap_seconds(State(state): State<AppState>, headers: HeaderMap) -> Response {
     let table = state.leap_table();
     let entries = table
@@ -183,7 +187,9 @@ pub async fn leap_seconds(State(state): State<AppState>, headers: HeaderMap) -> 
 /// The current instant in every scale, from this server's system clock (for dashboards).
 #[utoipa::path(get, path = "/v1/time/now", tag = "time",
     responses(
-        (status = 200, description = "Now, in every scale (never cached)", body = Conversion)))]
+        (status = 200, description = "Now, in every scale (never cached)", body = Conversion,
+            headers(("Cache-Control" = String, description = "`no-store`"))),
+        (status = 503, description = "The server's clock reads before 1970 (`clock_unavailable`), or the request took longer than the configured timeout (`request_timeout`)", body = crate::api::error::Problem, content_type = "application/problem+json")))]
 pub async fn now(State(state): State<AppState>) -> Result<Response, ApiError> {
     let since_epoch = std::time::SystemTime::now()
         .duration_since(std::time::UNIX_EPOCH)

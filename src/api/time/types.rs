@@ -3,6 +3,10 @@
 use serde::{Deserialize, Serialize};
 use utoipa::{IntoParams, ToSchema};
 
+use crate::api::names::{
+    InstantFormatName, InstantString, ObserverPositionM, ScaleName, TargetScaleList,
+    TargetScaleName, ThreeNumbersText,
+};
 use crate::physics::time::formats::InstantText;
 
 /// An instant in every written form.
@@ -78,33 +82,45 @@ pub struct ConversionBatch {
 #[serde(deny_unknown_fields)]
 pub struct ConvertQuery {
     /// The instant, as text in `format` (e.g. `2026-03-14T06:30:00.123456789012`).
-    #[param(example = "2026-03-14T06:30:00.123456789012")]
+    #[param(value_type = InstantString, example = "2026-03-14T06:30:00.123456789012")]
     pub at: String,
-    /// Scale of `at` (default UTC): UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST.
-    #[param(example = "UTC")]
+    /// Scale of `at` (default UTC): UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST, written
+    /// exactly so.
+    #[param(value_type = Option<ScaleName>, example = "UTC")]
     pub from: Option<String>,
-    /// Target scales, comma-separated, or `all` (default `all`).
-    #[param(example = "TAI,TT,TDB")]
+    /// Target scales, comma-separated without spaces, or `all` (default `all`).
+    #[param(value_type = Option<TargetScaleList>, example = "TAI,TT,TDB")]
     pub to: Option<String>,
     /// How `at` is written: iso (default), mjd, jd, j2000_s, unix_s (UTC only), gnss_week (GNSS scales).
-    #[param(example = "iso")]
+    #[param(value_type = Option<InstantFormatName>, example = "iso")]
     pub format: Option<String>,
-    /// Observer for the topocentric part of TDB - TT: ITRF position in metres, `x,y,z`.
-    #[param(example = "4027894.0,307045.0,4919474.9")]
+    /// Observer for the topocentric part of TDB - TT: ITRF position in metres, `x,y,z` (no
+    /// spaces), within 6 340 km to 6 480 km of the geocentre (422 `observer_not_on_ground`
+    /// otherwise).
+    #[param(value_type = Option<ThreeNumbersText>, example = "4027894.0,307045.0,4919474.9")]
     pub observer_itrf_m: Option<String>,
 }
 
-/// Observer on the Earth for the topocentric part of TDB - TT.
+/// Observer on the Earth for the topocentric part of TDB - TT: either `itrf_position_m`, or
+/// `latitude_deg` and `longitude_deg` (and optionally `height_m`); within 6 340 km to 6 480 km
+/// of the geocentre (422 `invalid_observer`, `observer_not_on_ground` otherwise).
 #[derive(Debug, Clone, Deserialize, ToSchema)]
 #[serde(deny_unknown_fields)]
+#[schema(example = json!({"latitude_deg": 50.1, "longitude_deg": 8.6, "height_m": 150.0}))]
 pub struct ObserverInput {
-    /// ITRF position in metres; give this or the geodetic triple.
+    /// ITRF position [x, y, z] in metres (each component within 6 480 km); give this or the
+    /// geodetic pair.
+    #[schema(value_type = Option<ObserverPositionM>)]
     pub itrf_position_m: Option<[f64; 3]>,
-    /// Geodetic latitude on GRS80, degrees.
+    /// Geodetic latitude on GRS80, degrees in [-90, 90].
+    #[schema(minimum = -90.0, maximum = 90.0)]
     pub latitude_deg: Option<f64>,
-    /// Longitude, degrees east.
+    /// Longitude, degrees east, |value| <= 1e6 (wraps).
+    #[schema(minimum = -1.0e6, maximum = 1.0e6)]
     pub longitude_deg: Option<f64>,
-    /// Height above the GRS80 ellipsoid, metres.
+    /// Height above the GRS80 ellipsoid, metres, in [-11 000, 1e8] (and the observer within
+    /// 6 480 km of the geocentre).
+    #[schema(minimum = -11000.0, maximum = 1.0e8)]
     pub height_m: Option<f64>,
 }
 
@@ -117,12 +133,17 @@ pub struct ObserverInput {
 }))]
 pub struct ConvertBatchRequest {
     /// Scale of the epochs.
+    #[schema(value_type = ScaleName)]
     pub from: String,
-    /// Target scales, or `["all"]`.
+    /// Target scales, or `["all"]`; at least one.
+    #[schema(value_type = Vec<TargetScaleName>, min_items = 1)]
     pub to: Vec<String>,
     /// How the epochs are written (default `iso`).
+    #[schema(value_type = Option<InstantFormatName>)]
     pub format: Option<String>,
-    /// The instants, as text.
+    /// The instants, as text in `format`: at least one and at most the batch limit (100 000 by
+    /// default, `--batch-limit`; 422 `batch_too_large` above it).
+    #[schema(value_type = Vec<InstantString>, min_items = 1, max_items = 100000)]
     pub epochs: Vec<String>,
     /// Observer for the topocentric part of TDB - TT (geocentric when absent).
     pub observer: Option<ObserverInput>,

@@ -19,9 +19,15 @@ pub struct FrequencyOffset {
 /// relativistic offset, which is of order 1e-9; common practice).
 pub const MAX_FRACTIONAL_RATE: f64 = 1.0e-3;
 
+/// Largest nominal frequency accepted, Hz: 9e15, above every optical and nuclear-transition
+/// clock (about 4e14 to 2.1e15 Hz; common practice) and below 2^53, so that every whole number
+/// of hertz up to it is exact in binary64. It keeps f0 y and f0 / (1 + y) finite for every
+/// accepted y (without it, f0 near the largest f64 overflowed f0 / (1 + y) to infinity).
+pub const MAX_NOMINAL_FREQUENCY_HZ: f64 = 9.0e15;
+
 /// Offset and factory setting of an oscillator for a fractional rate offset.
 ///
-/// Inputs: `nominal_hz` (finite, > 0), `fractional_rate` (finite, |y| <= 1e-3; use
+/// Inputs: `nominal_hz` (finite, in (0, 9e15]), `fractional_rate` (finite, |y| <= 1e-3; use
 /// [`super::RateParts::total`]). Result: offset_hz = f0 y; factory_setting_hz = f0 / (1 + y).
 ///
 /// Reference: IS-GPS-200 3.3.1.1 (10.23 MHz nominal, 10.22999999543 MHz set on the ground,
@@ -31,11 +37,14 @@ pub fn frequency_offset(
     fractional_rate: f64,
 ) -> Result<FrequencyOffset, RateError> {
     require_finite("nominal_hz", nominal_hz)?;
-    if nominal_hz <= 0.0 {
-        return Err(
-            RateError::new("nominal_hz", format!("must be positive, got {nominal_hz}"))
-                .with_kind(RateErrorKind::InvalidFrequency),
-        );
+    if nominal_hz <= 0.0 || nominal_hz > MAX_NOMINAL_FREQUENCY_HZ {
+        return Err(RateError::new(
+            "nominal_hz",
+            format!(
+                "must be positive and at most {MAX_NOMINAL_FREQUENCY_HZ:e} Hz, got {nominal_hz}"
+            ),
+        )
+        .with_kind(RateErrorKind::InvalidFrequency));
     }
     require_finite("fractional_rate", fractional_rate)?;
     if fractional_rate.abs() > MAX_FRACTIONAL_RATE {
@@ -99,5 +108,18 @@ mod tests {
             frequency_offset(1e7, -1.0).unwrap_err().field,
             "fractional_rate"
         );
+    }
+
+    #[test]
+    fn largest_frequencies_give_finite_answers() {
+        // Regression (found by the contract test): f0 = the largest f64 with y < 0 overflowed
+        // f0 / (1 + y) to infinity, answered as null. Overflow bound of IEEE 754 binary64
+        // (common practice).
+        assert_eq!(
+            frequency_offset(f64::MAX, -1e-10).unwrap_err().field,
+            "nominal_hz"
+        );
+        let frequency = frequency_offset(MAX_NOMINAL_FREQUENCY_HZ, -MAX_FRACTIONAL_RATE).unwrap();
+        assert!(frequency.factory_setting_hz.is_finite() && frequency.offset_hz.is_finite());
     }
 }

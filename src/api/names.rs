@@ -1,0 +1,432 @@
+//! The words and text shapes requests may use, read exactly as the OpenAPI document states
+//! them: one spelling per value (case-sensitive), so that every value the schema admits is
+//! accepted and every value it refuses is refused.
+//!
+//! Each list is taken from the physics library's own names (`Scale::ALL`, the instant
+//! formats), so the document cannot drift from what the code reads.
+
+use std::borrow::Cow;
+
+use utoipa::openapi::schema::{ArrayBuilder, ObjectBuilder, Schema, Type};
+use utoipa::openapi::RefOr;
+use utoipa::{PartialSchema, ToSchema};
+
+use crate::api::error::ApiError;
+use crate::physics::constants::MAX_GEOCENTRIC_DISTANCE_M;
+use crate::physics::time::error::TimeError;
+use crate::physics::time::formats::InstantFormat;
+use crate::physics::time::scale::Scale;
+
+/// Every instant format, in the order the documentation lists them.
+pub const INSTANT_FORMATS: [InstantFormat; 6] = [
+    InstantFormat::Iso,
+    InstantFormat::Mjd,
+    InstantFormat::Jd,
+    InstantFormat::J2000S,
+    InstantFormat::UnixS,
+    InstantFormat::GnssWeek,
+];
+
+/// The word a target-scale list uses for every scale.
+pub const ALL_SCALES: &str = "all";
+
+/// A decimal number as the time engine reads it: optional sign, digits with at most one point.
+const DECIMAL: &str = r"[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)";
+
+/// An ISO 8601 calendar (`YYYY-MM-DD`) or ordinal (`YYYY-DDD`) date with month 01-12, day
+/// 01-31 and day of year 001-366.
+const ISO_DATE: &str = r"[0-9]{4}-(?:(?:0[1-9]|1[0-2])-(?:0[1-9]|[12][0-9]|3[01])|(?:00[1-9]|0[1-9][0-9]|[12][0-9]{2}|3[0-5][0-9]|36[0-6]))";
+
+/// A time of day `hh:mm[:ss[.fraction]]` (hour 00-23, minute 00-59, second 00-59), or the leap
+/// second `23:59:60[.fraction]`.
+const ISO_TIME: &str =
+    r"(?:(?:[01][0-9]|2[0-3]):[0-5][0-9](?::[0-5][0-9](?:\.[0-9]+)?)?|23:59:60(?:\.[0-9]+)?)";
+
+/// The text of an instant in any format: ISO 8601 date with optional time (`T` or a space) and
+/// `Z`; a decimal (`mjd`, `jd`, `j2000_s`, `unix_s`); or `WEEK:SECONDS` (`gnss_week`). Which
+/// of them applies depends on `format`; whether the date exists (2026-02-30), whether a second
+/// 60 is a leap second in the table, whether the year is in range and whether the format fits
+/// the scale are checked by the engine (422).
+pub fn instant_pattern() -> String {
+    format!(
+        r"^(?:{ISO_DATE}(?:[T ]{ISO_TIME})?Z?|{DECIMAL}|[0-9]{{1,7}}:\+?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+))$"
+    )
+}
+
+/// A comma-separated list of scale names or `all`, without spaces.
+pub fn scale_list_pattern() -> String {
+    let names: Vec<&str> = std::iter::once(ALL_SCALES)
+        .chain(Scale::ALL.iter().map(|scale| scale.as_str()))
+        .collect();
+    let one = format!("(?:{})", names.join("|"));
+    format!("^{one}(?:,{one})*$")
+}
+
+/// Three decimal numbers `x,y,z` (exponent allowed), without spaces.
+pub fn three_numbers_pattern() -> String {
+    let number = format!("{DECIMAL}(?:[eE][+-]?[0-9]+)?");
+    format!("^{number},{number},{number}$")
+}
+
+/// The scale written exactly as `text` (canonical upper-case abbreviation).
+pub fn scale_named(text: &str) -> Option<Scale> {
+    Scale::ALL.into_iter().find(|scale| scale.as_str() == text)
+}
+
+/// The instant format written exactly as `text`.
+pub fn format_named(text: &str) -> Option<InstantFormat> {
+    INSTANT_FORMATS
+        .into_iter()
+        .find(|format| format.as_str() == text)
+}
+
+/// Reads a scale name written exactly; 422 `unknown_scale` naming `field` otherwise.
+pub fn parse_scale(text: &str, field: &str) -> Result<Scale, ApiError> {
+    scale_named(text).ok_or_else(|| {
+        let names: Vec<&str> = Scale::ALL.iter().map(|scale| scale.as_str()).collect();
+        ApiError::unprocessable(
+            "unknown_scale",
+            format!(
+                "unknown time scale `{text}`; expected one of {} (written exactly so)",
+                names.join(", ")
+            ),
+        )
+        .with_field(field)
+    })
+}
+
+/// Reads an optional format name written exactly (default `iso`); 422 `unknown_format`
+/// naming `field` otherwise.
+pub fn parse_format(text: Option<&str>, field: &str) -> Result<InstantFormat, ApiError> {
+    match text {
+        None => Ok(InstantFormat::Iso),
+        Some(text) => format_named(text)
+            .ok_or_else(|| ApiError::from_time(&TimeError::UnknownFormat(text.to_string()), field)),
+    }
+}
+
+/// The value of `text` in a list of (exact spelling, value) pairs.
+pub fn one_of<T: Copy>(text: &str, choices: &[(&str, T)]) -> Option<T> {
+    choices
+        .iter()
+        .find(|(name, _)| *name == text)
+        .map(|(_, value)| *value)
+}
+
+fn string_enum<'a>(values: impl IntoIterator<Item = &'a str>, description: &str) -> RefOr<Schema> {
+    ObjectBuilder::new()
+        .schema_type(Type::String)
+        .enum_values(Some(values))
+        .description(Some(description))
+        .into()
+}
+
+/// Schema of a time-scale name.
+pub struct ScaleName;
+
+impl PartialSchema for ScaleName {
+    fn schema() -> RefOr<Schema> {
+        string_enum(
+            Scale::ALL.iter().map(|scale| scale.as_str()),
+            "A time scale, by its abbreviation (exactly as written here; see GET /v1/time/scales).",
+        )
+    }
+}
+
+impl ToSchema for ScaleName {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("ScaleName")
+    }
+}
+
+/// Schema of a target scale: a scale name or `all`.
+pub struct TargetScaleName;
+
+impl PartialSchema for TargetScaleName {
+    fn schema() -> RefOr<Schema> {
+        string_enum(
+            std::iter::once(ALL_SCALES).chain(Scale::ALL.iter().map(|scale| scale.as_str())),
+            "A target time scale, by its abbreviation, or `all` for every scale.",
+        )
+    }
+}
+
+impl ToSchema for TargetScaleName {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("TargetScaleName")
+    }
+}
+
+/// Schema of an instant format name.
+pub struct InstantFormatName;
+
+impl PartialSchema for InstantFormatName {
+    fn schema() -> RefOr<Schema> {
+        string_enum(
+            INSTANT_FORMATS.iter().map(|format| format.as_str()),
+            "How an instant is written: `iso` (ISO 8601 calendar or ordinal date and time; `Z` only for UTC; `23:59:60` only inside a UTC leap second), `mjd`, `jd`, `j2000_s` (seconds since J2000.0 of the scale), `unix_s` (UTC only), `gnss_week` (`WEEK:SECONDS`; GPST, GST, BDT, QZSST only).",
+        )
+    }
+}
+
+impl ToSchema for InstantFormatName {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("InstantFormatName")
+    }
+}
+
+/// Schema of a reference frame name.
+pub struct FrameName;
+
+impl PartialSchema for FrameName {
+    fn schema() -> RefOr<Schema> {
+        string_enum(
+            ["GCRS", "ITRF"],
+            "`GCRS` (geocentric, non-rotating) or `ITRF` (Earth-fixed, rotating).",
+        )
+    }
+}
+
+impl ToSchema for FrameName {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("FrameName")
+    }
+}
+
+/// Schema of a height reference name.
+pub struct HeightReferenceName;
+
+impl PartialSchema for HeightReferenceName {
+    fn schema() -> RefOr<Schema> {
+        string_enum(
+            ["ellipsoid", "geoid"],
+            "`ellipsoid` (height above the GRS80 ellipsoid) or `geoid` (orthometric height).",
+        )
+    }
+}
+
+impl ToSchema for HeightReferenceName {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("HeightReferenceName")
+    }
+}
+
+/// Schema of the text of an instant.
+pub struct InstantString;
+
+impl PartialSchema for InstantString {
+    fn schema() -> RefOr<Schema> {
+        ObjectBuilder::new()
+            .schema_type(Type::String)
+            .pattern(Some(instant_pattern()))
+            .description(Some(
+                "An instant as text in the request's `format`: `2026-03-14T06:30:00.123456789012` or `2026-073T06:30:00` (iso), `61113.27` (mjd), `2461113.77` (jd), `826741800.5` (j2000_s, unix_s), `2409:541818` (gnss_week). Digits are read exactly. The pattern admits every format; a text that does not fit `format`, a date that does not exist (2026-02-30), a second 60 outside a UTC leap second or a year outside 0001-9999 is a 422.",
+            ))
+            .examples(["2026-03-14T06:30:00.123456789012"])
+            .into()
+    }
+}
+
+impl ToSchema for InstantString {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("InstantString")
+    }
+}
+
+fn vector3(bound: f64, unit: &str, description: &str) -> RefOr<Schema> {
+    let component = ObjectBuilder::new()
+        .schema_type(Type::Number)
+        .format(Some(utoipa::openapi::SchemaFormat::KnownFormat(
+            utoipa::openapi::KnownFormat::Double,
+        )))
+        .minimum(Some(-bound))
+        .maximum(Some(bound))
+        .description(Some(format!("{unit}, at most {bound:e} in magnitude")));
+    ArrayBuilder::new()
+        .items(component)
+        .min_items(Some(3))
+        .max_items(Some(3))
+        .description(Some(description))
+        .into()
+}
+
+/// Bound on each velocity component, m/s: above c by more than the Earth's rotation can add
+/// within the geocentric range (omega_E * 1.5e9 m = 1.1e5 m/s), so every larger component is
+/// refused by the speed check; `3e8` is the round value above c + 1.1e5 = 2.999e8.
+pub const VELOCITY_COMPONENT_BOUND_M_S: f64 = 3.0e8;
+
+/// Schema of a geocentric position [x, y, z] in metres.
+pub struct PositionM;
+
+impl PartialSchema for PositionM {
+    fn schema() -> RefOr<Schema> {
+        vector3(
+            MAX_GEOCENTRIC_DISTANCE_M,
+            "metres",
+            "Geocentric position [x, y, z], metres. Each component within the geocentric range (1.5e9 m); the distance from the geocentre must also be at most 1.5e9 m and the point not inside the Earth (422 otherwise).",
+        )
+    }
+}
+
+impl ToSchema for PositionM {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("PositionM")
+    }
+}
+
+/// Schema of a velocity [vx, vy, vz] in metres per second.
+pub struct VelocityMS;
+
+impl PartialSchema for VelocityMS {
+    fn schema() -> RefOr<Schema> {
+        vector3(
+            VELOCITY_COMPONENT_BOUND_M_S,
+            "metres per second",
+            "Velocity [vx, vy, vz] in the frame, metres per second. The inertial speed (for ITRF, with the Earth's rotation added) must be below c = 299 792 458 m/s (422 speed_not_below_c otherwise).",
+        )
+    }
+}
+
+impl ToSchema for VelocityMS {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("VelocityMS")
+    }
+}
+
+/// Schema of a comma-separated list of target scales (a query parameter).
+pub struct TargetScaleList;
+
+impl PartialSchema for TargetScaleList {
+    fn schema() -> RefOr<Schema> {
+        ObjectBuilder::new()
+            .schema_type(Type::String)
+            .pattern(Some(scale_list_pattern()))
+            .description(Some(
+                "Scale abbreviations or `all`, comma-separated, no spaces (e.g. `TAI,TT,TDB`).",
+            ))
+            .into()
+    }
+}
+
+impl ToSchema for TargetScaleList {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("TargetScaleList")
+    }
+}
+
+/// Schema of three comma-separated numbers (a query parameter).
+pub struct ThreeNumbersText;
+
+impl PartialSchema for ThreeNumbersText {
+    fn schema() -> RefOr<Schema> {
+        ObjectBuilder::new()
+            .schema_type(Type::String)
+            .pattern(Some(three_numbers_pattern()))
+            .description(Some(
+                "Three decimal numbers `x,y,z` (exponent allowed), no spaces.",
+            ))
+            .into()
+    }
+}
+
+impl ToSchema for ThreeNumbersText {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("ThreeNumbersText")
+    }
+}
+
+/// Schema of an observer's ITRF position [x, y, z] in metres.
+pub struct ObserverPositionM;
+
+impl PartialSchema for ObserverPositionM {
+    fn schema() -> RefOr<Schema> {
+        vector3(
+            crate::api::time::convert::OBSERVER_RADIUS_RANGE_M.1,
+            "metres",
+            "ITRF position [x, y, z] of an observer near the Earth's surface, metres: its distance from the geocentre must lie in [6 340 000, 6 480 000] m (422 `observer_not_on_ground` otherwise).",
+        )
+    }
+}
+
+impl ToSchema for ObserverPositionM {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("ObserverPositionM")
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::physics::constants::{EARTH_ROTATION_RAD_S, SPEED_OF_LIGHT_M_S};
+
+    #[test]
+    fn names_are_exact() {
+        // The canonical spellings of the DESIGN contract (common practice: one spelling per value).
+        assert_eq!(scale_named("UTC"), Some(Scale::Utc));
+        assert_eq!(scale_named("utc"), None);
+        assert_eq!(scale_named(" UTC"), None);
+        assert_eq!(format_named("gnss_week"), Some(InstantFormat::GnssWeek));
+        assert_eq!(format_named("ISO"), None);
+        assert_eq!(one_of("geoid", &[("geoid", 1), ("ellipsoid", 2)]), Some(1));
+        assert_eq!(one_of("Geoid", &[("geoid", 1), ("ellipsoid", 2)]), None);
+    }
+
+    #[test]
+    fn velocity_bound_is_above_what_the_rotation_can_add() {
+        // IERS Conventions (2010) table 1.1 (omega_E) and the geocentric range of the rate model:
+        // a component above the bound is above c in the inertial frame, hence refused.
+        let most_added_m_s = EARTH_ROTATION_RAD_S * MAX_GEOCENTRIC_DISTANCE_M;
+        assert!(VELOCITY_COMPONENT_BOUND_M_S > SPEED_OF_LIGHT_M_S + most_added_m_s);
+    }
+
+    #[test]
+    fn patterns_match_what_the_engine_reads() {
+        // The instant grammar of DESIGN.md ("An instant in a request is a string"), common practice.
+        let instant = whole_match(&instant_pattern());
+        for text in [
+            "2026-03-14T06:30:00.123456789012",
+            "2026-073T06:30:00",
+            "2026-03-14 06:30",
+            "2026-03-14Z",
+            "61113.5",
+            "-.5",
+            "5.",
+            "2409:541818",
+            "2409:+0.5",
+            "2016-12-31T23:59:60.5",
+            "2024-366T23:59:59",
+        ] {
+            assert!(instant(text), "{text} should match");
+        }
+        for text in [
+            "",
+            "2026-3-14",
+            "2026-03-14T",
+            "2026-13-01",
+            "2026-03-32",
+            "2026-000",
+            "2026-367",
+            "2026-03-14T24:00:00",
+            "2026-03-14T12:59:60",
+            "1e5",
+            "1:-5",
+            "2409:1:2",
+            ".",
+            "+",
+        ] {
+            assert!(!instant(text), "{text} should not match");
+        }
+        let list = whole_match(&scale_list_pattern());
+        assert!(list("TAI,TT,all"));
+        assert!(!list("TAI, TT") && !list("tai") && !list("TAI,"));
+        let numbers = whole_match(&three_numbers_pattern());
+        assert!(numbers("4027894.0,307045.0,4.9e6"));
+        assert!(!numbers("1,2") && !numbers("1, 2, 3"));
+    }
+
+    /// A matcher for `pattern` (its anchors make it a whole-text match).
+    fn whole_match(pattern: &str) -> impl Fn(&str) -> bool {
+        let regex = regex::Regex::new(pattern).unwrap_or_else(|e| panic!("{pattern}: {e}"));
+        move |text| regex.is_match(text)
+    }
+}
