@@ -10,6 +10,7 @@ pub mod error;
 pub mod extract;
 pub mod openapi;
 pub mod problem_codes;
+pub mod proper_time;
 pub mod signal;
 pub mod state;
 pub mod time;
@@ -57,6 +58,7 @@ pub fn app(state: AppState) -> Router {
     Router::new()
         .merge(time::router())
         .merge(clock::router())
+        .merge(proper_time::router())
         .merge(signal::router())
         .merge(docs::router())
         .route("/healthz", get(health::healthz))
