@@ -39,7 +39,13 @@ pin() { # pin CPU COMMAND... : run on one CPU when taskset exists and there are 
 
 port="$(python3 -c 'import socket; s=socket.socket(); s.bind(("127.0.0.1", 0)); print(s.getsockname()[1]); s.close()')"
 base="http://127.0.0.1:$port"
-pin 0 "$binary" --addr "127.0.0.1:$port" --log-level warn >"$work/server.log" 2>&1 &
+# Started directly (not through a shell function, which would fork a subshell) so that $! is
+# the server itself: taskset replaces itself with the program.
+server=("$binary" --addr "127.0.0.1:$port" --log-level warn)
+if command -v taskset >/dev/null 2>&1 && [ "$(nproc)" -ge 2 ]; then
+    server=(taskset -c 0 "${server[@]}")
+fi
+"${server[@]}" >"$work/server.log" 2>&1 &
 server_pid=$!
 cleanup() {
     kill "$server_pid" 2>/dev/null || true
@@ -52,6 +58,10 @@ for _ in $(seq 1 100); do
     curl -fsS -o /dev/null "$base/healthz" 2>/dev/null && break
     sleep 0.1
 done
+[ "$(readlink "/proc/$server_pid/exe")" = "$(readlink -f "$binary")" ] || {
+    echo "process $server_pid is not the server" >&2
+    exit 1
+}
 curl -fsS -o /dev/null "$base/healthz" || {
     echo "server did not start:" >&2
     cat "$work/server.log" >&2
