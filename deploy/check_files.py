@@ -24,6 +24,8 @@ SETTINGS = {
     "EIGENZEIT_REQUEST_TIMEOUT_S": "--request-timeout-s",
     "EIGENZEIT_BATCH_LIMIT": "--batch-limit",
     "EIGENZEIT_DRAIN_TIMEOUT_S": "--drain-timeout-s",
+    "EIGENZEIT_SHUTDOWN_DELAY_S": "--shutdown-delay-s",
+    "EIGENZEIT_MAX_EPHEMERIS_GAP_S": "--max-ephemeris-gap-s",
     "EIGENZEIT_CORS_ORIGINS": "--cors-origins",
     "EIGENZEIT_LEAP_SECONDS_FILE": "--leap-seconds-file",
     "EIGENZEIT_LEAP_SECONDS_URL": "--leap-seconds-url",

@@ -135,3 +135,48 @@ pub fn check_batch_size(
     }
     Ok(())
 }
+
+/// Reads an optional whole number of a JSON body given as an integer or as a number with no
+/// fractional part (`13.0` is an integer in JSON Schema); anything else (a fraction, a negative
+/// number, a string) is an error of the body (400).
+pub fn whole_number<'de, D>(deserializer: D) -> Result<Option<usize>, D::Error>
+where
+    D: serde::Deserializer<'de>,
+{
+    struct Whole;
+
+    impl serde::de::Visitor<'_> for Whole {
+        type Value = Option<usize>;
+
+        fn expecting(&self, formatter: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+            formatter.write_str("a whole number from 0")
+        }
+
+        fn visit_unit<E: serde::de::Error>(self) -> Result<Self::Value, E> {
+            Ok(None)
+        }
+
+        fn visit_u64<E: serde::de::Error>(self, value: u64) -> Result<Self::Value, E> {
+            usize::try_from(value)
+                .map(Some)
+                .map_err(|_| E::custom(format!("{value} is too large")))
+        }
+
+        fn visit_i64<E: serde::de::Error>(self, value: i64) -> Result<Self::Value, E> {
+            u64::try_from(value)
+                .map_err(|_| E::custom(format!("{value} is below 0")))
+                .and_then(|value| self.visit_u64(value))
+        }
+
+        fn visit_f64<E: serde::de::Error>(self, value: f64) -> Result<Self::Value, E> {
+            // Whole numbers up to 2^53 are exact in binary64; above, the text was not exact.
+            if value.fract() == 0.0 && (0.0..=9_007_199_254_740_992.0).contains(&value) {
+                Ok(Some(value as usize))
+            } else {
+                Err(E::custom(format!("{value} is not a whole number from 0")))
+            }
+        }
+    }
+
+    deserializer.deserialize_any(Whole)
+}

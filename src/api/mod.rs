@@ -11,6 +11,7 @@ pub mod extract;
 pub mod names;
 pub mod openapi;
 pub mod problem_codes;
+pub mod proper_time;
 pub mod signal;
 pub mod state;
 pub mod time;
@@ -58,6 +59,7 @@ pub fn app(state: AppState) -> Router {
     Router::new()
         .merge(time::router())
         .merge(clock::router())
+        .merge(proper_time::router())
         .merge(signal::router())
         .merge(docs::router())
         .route("/healthz", get(health::healthz))

@@ -12,7 +12,7 @@ use utoipa::openapi::RefOr;
 use utoipa::{PartialSchema, ToSchema};
 
 use crate::api::error::ApiError;
-use crate::physics::constants::MAX_GEOCENTRIC_DISTANCE_M;
+use crate::physics::constants::{MAX_GEOCENTRIC_DISTANCE_M, SPEED_OF_LIGHT_M_S};
 use crate::physics::time::error::TimeError;
 use crate::physics::time::formats::InstantFormat;
 use crate::physics::time::scale::Scale;
@@ -233,15 +233,27 @@ impl ToSchema for InstantString {
     }
 }
 
-fn vector3(bound: f64, unit: &str, description: &str) -> RefOr<Schema> {
-    let component = ObjectBuilder::new()
-        .schema_type(Type::Number)
-        .format(Some(utoipa::openapi::SchemaFormat::KnownFormat(
-            utoipa::openapi::KnownFormat::Double,
-        )))
-        .minimum(Some(-bound))
-        .maximum(Some(bound))
-        .description(Some(format!("{unit}, at most {bound:e} in magnitude")));
+/// Whether a vector's component bound is inclusive (`at most`) or exclusive (`below`).
+#[derive(Clone, Copy, PartialEq, Eq)]
+enum Bound {
+    AtMost,
+    Below,
+}
+
+fn vector3(bound: f64, kind: Bound, unit: &str, description: &str) -> RefOr<Schema> {
+    let component = ObjectBuilder::new().schema_type(Type::Number).format(Some(
+        utoipa::openapi::SchemaFormat::KnownFormat(utoipa::openapi::KnownFormat::Double),
+    ));
+    let component = match kind {
+        Bound::AtMost => component
+            .minimum(Some(-bound))
+            .maximum(Some(bound))
+            .description(Some(format!("{unit}, at most {bound:e} in magnitude"))),
+        Bound::Below => component
+            .exclusive_minimum(Some(-bound))
+            .exclusive_maximum(Some(bound))
+            .description(Some(format!("{unit}, below {bound:e} in magnitude"))),
+    };
     ArrayBuilder::new()
         .items(component)
         .min_items(Some(3))
@@ -262,6 +274,7 @@ impl PartialSchema for PositionM {
     fn schema() -> RefOr<Schema> {
         vector3(
             MAX_GEOCENTRIC_DISTANCE_M,
+            Bound::AtMost,
             "metres",
             "Geocentric position [x, y, z], metres. Each component within the geocentric range (1.5e9 m); the distance from the geocentre must also be at most 1.5e9 m and the point not inside the Earth (422 otherwise).",
         )
@@ -281,6 +294,7 @@ impl PartialSchema for VelocityMS {
     fn schema() -> RefOr<Schema> {
         vector3(
             VELOCITY_COMPONENT_BOUND_M_S,
+            Bound::AtMost,
             "metres per second",
             "Velocity [vx, vy, vz] in the frame, metres per second. The inertial speed (for ITRF, with the Earth's rotation added) must be below c = 299 792 458 m/s (422 speed_not_below_c otherwise).",
         )
@@ -342,6 +356,7 @@ impl PartialSchema for ObserverPositionM {
     fn schema() -> RefOr<Schema> {
         vector3(
             crate::api::time::convert::OBSERVER_RADIUS_RANGE_M.1,
+            Bound::AtMost,
             "metres",
             "ITRF position [x, y, z] of an observer near the Earth's surface, metres: its distance from the geocentre must lie in [6 340 000, 6 480 000] m (422 `observer_not_on_ground` otherwise).",
         )
@@ -354,10 +369,83 @@ impl ToSchema for ObserverPositionM {
     }
 }
 
+/// Schema of a velocity in an ephemeris (speed checked as given, in the ephemeris' frame).
+pub struct EphemerisVelocityMS;
+
+impl PartialSchema for EphemerisVelocityMS {
+    fn schema() -> RefOr<Schema> {
+        vector3(
+            SPEED_OF_LIGHT_M_S,
+            Bound::Below,
+            "metres per second",
+            "Velocity [vx, vy, vz] in the ephemeris' frame, metres per second; its speed must be below c = 299 792 458 m/s (422 speed_not_below_c otherwise).",
+        )
+    }
+}
+
+impl ToSchema for EphemerisVelocityMS {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("EphemerisVelocityMS")
+    }
+}
+
+/// Exact names of inertial frames in a JSON ephemeris.
+const INERTIAL_FRAMES: [&str; 4] = ["GCRF", "EME2000", "J2000", "ICRF"];
+/// Exact names of Earth-fixed frames in a JSON ephemeris (besides the ITRF and IGS families).
+const EARTH_FIXED_FRAMES: [&str; 3] = ["ECEF", "WGS84", "WGS-84"];
+/// Prefixes of the Earth-fixed frame families (ITRF2014, ITRF2020, IGS20...).
+const EARTH_FIXED_FAMILIES: [&str; 2] = ["ITRF", "IGS"];
+
+/// Whether `text` is a frame name of a JSON ephemeris, written exactly as documented (upper
+/// case, no surrounding spaces; the ITRF and IGS families by their prefix).
+pub fn ephemeris_frame_named(text: &str) -> bool {
+    INERTIAL_FRAMES.contains(&text)
+        || EARTH_FIXED_FRAMES.contains(&text)
+        || EARTH_FIXED_FAMILIES
+            .iter()
+            .any(|prefix| text.starts_with(prefix))
+}
+
+/// The pattern of [`ephemeris_frame_named`].
+pub fn ephemeris_frame_pattern() -> String {
+    let exact: Vec<&str> = INERTIAL_FRAMES
+        .iter()
+        .chain(EARTH_FIXED_FRAMES.iter())
+        .copied()
+        .collect();
+    let families: Vec<String> = EARTH_FIXED_FAMILIES
+        .iter()
+        .map(|prefix| format!(r"{prefix}[\s\S]*"))
+        .collect();
+    format!("^(?:{}|{})$", exact.join("|"), families.join("|"))
+}
+
+/// Schema of a frame name in a JSON ephemeris.
+pub struct EphemerisFrameName;
+
+impl PartialSchema for EphemerisFrameName {
+    fn schema() -> RefOr<Schema> {
+        ObjectBuilder::new()
+            .schema_type(Type::String)
+            .pattern(Some(ephemeris_frame_pattern()))
+            .description(Some(
+                "A frame name in upper case: GCRF, EME2000, J2000, ICRF (inertial); ECEF, WGS84, WGS-84, or any name of the ITRF or IGS families (ITRF2014, IGS20...; Earth-fixed).",
+            ))
+            .examples(["GCRF"])
+            .into()
+    }
+}
+
+impl ToSchema for EphemerisFrameName {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("EphemerisFrameName")
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::physics::constants::{EARTH_ROTATION_RAD_S, SPEED_OF_LIGHT_M_S};
+    use crate::physics::constants::EARTH_ROTATION_RAD_S;
 
     #[test]
     fn names_are_exact() {
@@ -422,6 +510,13 @@ mod tests {
         let numbers = whole_match(&three_numbers_pattern());
         assert!(numbers("4027894.0,307045.0,4.9e6"));
         assert!(!numbers("1,2") && !numbers("1, 2, 3"));
+        let frame = whole_match(&ephemeris_frame_pattern());
+        for text in ["GCRF", "EME2000", "ITRF", "ITRF2020", "IGS20", "WGS-84"] {
+            assert!(frame(text) && ephemeris_frame_named(text), "{text}");
+        }
+        for text in ["gcrf", " GCRF", "TEME", "itrf2014", ""] {
+            assert!(!frame(text) && !ephemeris_frame_named(text), "{text}");
+        }
     }
 
     /// A matcher for `pattern` (its anchors make it a whole-text match).

@@ -23,6 +23,7 @@ use utoipa::{Modify, OpenApi};
         crate::api::time::reference::now,
         crate::api::clock::rate::rate,
         crate::api::clock::compare::compare,
+        crate::api::proper_time::proper_time,
         crate::api::signal::path::signal_path,
         crate::api::signal::two_way::two_way,
         crate::ops::health::healthz,
@@ -142,4 +143,106 @@ pub fn document_json() -> String {
     ApiDoc::openapi()
         .to_pretty_json()
         .unwrap_or_else(|e| format!("{{\"error\": \"{e}\"}}"))
+}
+
+#[cfg(test)]
+mod tests {
+    use std::collections::BTreeMap;
+
+    use utoipa::openapi::schema::Schema;
+    use utoipa::openapi::RefOr;
+    use utoipa::ToSchema;
+
+    use super::*;
+
+    fn collect<T: ToSchema>(found: &mut Vec<(String, RefOr<Schema>)>) {
+        found.push((T::name().into_owned(), T::schema()));
+        T::schemas(found);
+    }
+
+    #[test]
+    fn component_names_are_unique() {
+        // utoipa keeps the last of two schemas with one name: two request types named alike
+        // would silently document one shape for both (common practice: one name, one schema).
+        let mut found = Vec::new();
+        collect::<crate::api::time::types::ConvertBatchRequest>(&mut found);
+        collect::<crate::api::time::types::ConversionBatch>(&mut found);
+        collect::<crate::api::clock::types::RateRequest>(&mut found);
+        collect::<crate::api::clock::types::CompareRequest>(&mut found);
+        collect::<crate::api::clock::answer::RateBatchAnswer>(&mut found);
+        collect::<crate::api::clock::answer::CompareAnswer>(&mut found);
+        collect::<crate::api::signal::types::SignalPathRequest>(&mut found);
+        collect::<crate::api::signal::types::SignalPathAnswer>(&mut found);
+        collect::<crate::api::signal::types::TwoWayRequest>(&mut found);
+        collect::<crate::api::signal::types::TwoWayAnswer>(&mut found);
+        collect::<crate::api::proper_time::types::EphemerisInput>(&mut found);
+        collect::<crate::api::proper_time::types::ProperTimeAnswer>(&mut found);
+        let mut by_name: BTreeMap<String, RefOr<Schema>> = BTreeMap::new();
+        for (name, schema) in found {
+            if let Some(previous) = by_name.insert(name.clone(), schema.clone()) {
+                assert!(previous == schema, "two different schemas are named {name}");
+            }
+        }
+        let document = ApiDoc::openapi();
+        let components = document.components.map(|c| c.schemas).unwrap_or_default();
+        for name in by_name.keys() {
+            assert!(
+                components.contains_key(name),
+                "{name} is not in the document"
+            );
+        }
+    }
+
+    #[test]
+    fn cross_field_rules_are_applied() {
+        // Each rule names a component of the document (common practice).
+        let document = serde_json::to_value(ApiDoc::openapi()).unwrap_or_default();
+        for (name, rule) in cross_field_rules() {
+            let parts = &document["components"]["schemas"][name]["allOf"];
+            assert_eq!(parts.as_array().map(Vec::len), Some(2), "{name}");
+            let keyword = rule.as_object().and_then(|o| o.keys().next().cloned());
+            let keyword = keyword.unwrap_or_default();
+            assert_eq!(parts[1][&keyword], rule[&keyword], "{name}");
+        }
+    }
+
+    #[test]
+    fn bounds_follow_the_code() {
+        // The document's numbers are literals in attributes; they must equal the constants the
+        // handlers check (IERS-based geodesy constants in crate::physics, common practice).
+        let document = serde_json::to_value(ApiDoc::openapi()).unwrap_or_default();
+        let schemas = &document["components"]["schemas"];
+        let orbit = &schemas["OrbitInput"]["allOf"][0]["properties"]["semi_major_axis_m"];
+        assert_eq!(
+            orbit["minimum"].as_f64(),
+            Some(crate::physics::rate::state::MIN_GCRS_DISTANCE_M)
+        );
+        assert_eq!(
+            orbit["maximum"].as_f64(),
+            Some(crate::physics::constants::MAX_GEOCENTRIC_DISTANCE_M)
+        );
+        let frequency = &schemas["RateRequest"]["properties"]["nominal_frequency_hz"];
+        assert_eq!(
+            frequency["maximum"].as_f64(),
+            Some(crate::physics::rate::frequency::MAX_NOMINAL_FREQUENCY_HZ)
+        );
+        let batch_limit = crate::ops::config::Settings::default().batch_limit as u64;
+        let epochs = &schemas["ConvertBatchRequest"]["properties"]["epochs"];
+        assert_eq!(epochs["maxItems"].as_u64(), Some(batch_limit));
+        let items = &schemas["RateRequest"]["properties"]["items"];
+        assert_eq!(items["maxItems"].as_u64(), Some(batch_limit));
+        let states = &schemas["EphemerisObjectInput"]["properties"]["states"];
+        assert_eq!(states["maxItems"].as_u64(), Some(batch_limit));
+        let step = &schemas["ProperTimeOptions"]["properties"]["step_s"];
+        assert_eq!(
+            step["maximum"].as_f64(),
+            Some(crate::api::proper_time::types::MAX_OPTION_SECONDS)
+        );
+        let span_days =
+            crate::physics::time::formats::LAST_MJD - crate::physics::time::formats::FIRST_MJD + 1;
+        assert_eq!(
+            crate::api::proper_time::types::MAX_OPTION_SECONDS,
+            span_days as f64 * 86_400.0
+        );
+    }
 }

@@ -226,6 +226,147 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "not_visible",
         "The satellite is below a station's horizon: no two-way link is possible.",
     ),
+    // Proper time along an ephemeris (JSON, CCSDS OEM, SP3).
+    (
+        "unknown_ephemeris_format",
+        "The body's format cannot be told: send `Content-Type: application/json`, `application/ccsds-oem` or `application/sp3`, or say `?format=json|oem|sp3`.",
+    ),
+    (
+        "integration_failed",
+        "The proper-time integration gave a non-finite result for the object named; check its states.",
+    ),
+    (
+        "json_invalid",
+        "The JSON ephemeris cannot be read; `line` says where.",
+    ),
+    (
+        "bad_epoch",
+        "An epoch cannot be read or converted; `detail` says why, and `line` or `object`/`index` where.",
+    ),
+    (
+        "bad_number",
+        "A number in the file cannot be read; `line` says where.",
+    ),
+    (
+        "bad_option",
+        "An option is out of range (interpolation points 2 to 16, positive gap limit, output step of at least 1 ms and at most 1 000 000 output epochs per object).",
+    ),
+    (
+        "epochs_not_increasing",
+        "Epochs of an object must increase strictly (no duplicates); `object` and `index` name the first offending state.",
+    ),
+    (
+        "gap_too_long",
+        "Two consecutive states are farther apart than the gap limit (`max_gap_s`); `object` and `index` say where.",
+    ),
+    (
+        "mixed_velocity",
+        "Some states of an object have a velocity and others not: give it for all states or none.",
+    ),
+    (
+        "no_objects",
+        "The ephemeris holds no object.",
+    ),
+    (
+        "too_few_states",
+        "An object has fewer states than the interpolation window needs; send more states or lower `interpolation_points`.",
+    ),
+    (
+        "too_few_epochs",
+        "Fewer output epochs than the integration needs.",
+    ),
+    (
+        "unsupported_frame",
+        "The ephemeris frame is not one the service reads (GCRF, EME2000, ICRF inertial; ITRF Earth-fixed).",
+    ),
+    (
+        "oem_unsupported_version",
+        "The OEM's CCSDS_OEM_VERS is not one the reader takes (1.0, 2.0, 3.0).",
+    ),
+    (
+        "oem_missing_keyword",
+        "A mandatory OEM keyword is missing (CCSDS 502.0-B); `detail` names it and `line` the block.",
+    ),
+    (
+        "oem_unknown_keyword",
+        "A keyword the OEM standard does not define in that block; `line` says where.",
+    ),
+    (
+        "oem_bad_metadata_line",
+        "A metadata line is not `KEYWORD = value`; `line` says where.",
+    ),
+    (
+        "oem_bad_data_line",
+        "A data line does not have an epoch and six (or nine) numbers; `line` says where.",
+    ),
+    (
+        "oem_bad_time_range",
+        "START_TIME, STOP_TIME or USEABLE times are inconsistent; `line` says where.",
+    ),
+    (
+        "oem_empty_segment",
+        "A metadata block is followed by no data line.",
+    ),
+    (
+        "oem_epoch_outside_segment",
+        "A data line's epoch lies outside its segment's START_TIME..STOP_TIME.",
+    ),
+    (
+        "oem_inconsistent_segments",
+        "Segments of one object differ in frame family or time system.",
+    ),
+    (
+        "oem_unexpected_line",
+        "A line that does not belong where it stands (e.g. data before META_START); `line` says where.",
+    ),
+    (
+        "oem_unsupported_center",
+        "CENTER_NAME is not EARTH: the service computes geocentric clock rates.",
+    ),
+    (
+        "oem_unsupported_frame",
+        "REF_FRAME is not one the service reads (EME2000, GCRF, ICRF, ITRF family).",
+    ),
+    (
+        "oem_unsupported_time_system",
+        "TIME_SYSTEM is not one the service reads (UTC, TAI, TT, GPS, TDB, TCG, TCB).",
+    ),
+    (
+        "oem_internal",
+        "The OEM reader met a state it cannot continue from; please report the file.",
+    ),
+    (
+        "sp3_unsupported_version",
+        "The SP3 version is not c or d.",
+    ),
+    (
+        "sp3_bad_header",
+        "An SP3 header line does not have its fixed columns; `line` says where.",
+    ),
+    (
+        "sp3_bad_column",
+        "A column of an SP3 record cannot be read; `line` says where.",
+    ),
+    (
+        "sp3_bad_epoch",
+        "An SP3 epoch line cannot be read; `line` says where.",
+    ),
+    (
+        "sp3_missing_eof",
+        "The SP3 file has no EOF line: it is truncated.",
+    ),
+    (
+        "sp3_no_epochs",
+        "The SP3 file holds no epoch.",
+    ),
+    (
+        "sp3_unexpected_line",
+        "A line that does not belong where it stands in the SP3 file; `line` says where.",
+    ),
+    (
+        "sp3_unsupported_time_system",
+        "The SP3 time system is not one the service reads (GPS, GAL, BDT, QZS, TAI, UTC, GLO).",
+    ),
 ];
 
 /// The meaning of `code`, when it is in [`PROBLEM_CODES`].

@@ -13,8 +13,8 @@ use crate::physics::proper_time::{
     integrate_proper_time, EarthFixed, ProperTimeError, ProperTimeOptions, ProperTimeSeries,
     Trajectory,
 };
-use crate::physics::time::convert::ConversionContext;
-use crate::physics::time::instant::Instant;
+use crate::physics::time::convert::{from_tt_attos, to_tt_attos, ConversionContext};
+use crate::physics::time::instant::{seconds_f64_to_attos, Instant};
 
 /// The proper time of one object.
 #[derive(Debug, Clone, PartialEq)]
@@ -62,27 +62,71 @@ where
     R: Fn(&[f64; 3], &[f64; 3]) -> (f64, f64),
 {
     let interpolator = Interpolator::from_track(track, interpolation, context)?;
-    let epochs_s = interpolator.times_s();
-    let series = match track.frame {
-        Frame::Inertial => integrate_proper_time(&interpolator, epochs_s, rate, options),
-        Frame::EarthFixed => {
-            let rotating = EarthFixed(|t_s: f64| interpolator.state_at(t_s));
-            integrate_proper_time(&rotating, epochs_s, rate, options)
-        }
-    }
-    .map_err(|e| from_physics(e, &track.id))?;
     let (Some(first), Some(last)) = (track.states.first(), track.states.last()) else {
         return Err(
             EphemerisError::new("too_few_states", "the track has no states").for_object(&track.id),
         );
     };
+    let (epochs_s, epochs) = match interpolation.output_step_s {
+        None => (
+            interpolator.times_s().to_vec(),
+            track.states.iter().map(|s| s.epoch).collect(),
+        ),
+        Some(step_s) => output_grid(interpolator.times_s(), step_s, first.epoch, track, context)?,
+    };
+    let series = match track.frame {
+        Frame::Inertial => integrate_proper_time(&interpolator, &epochs_s, rate, options),
+        Frame::EarthFixed => {
+            let rotating = EarthFixed(|t_s: f64| interpolator.state_at(t_s));
+            integrate_proper_time(&rotating, &epochs_s, rate, options)
+        }
+    }
+    .map_err(|e| from_physics(e, &track.id))?;
     Ok(TrackProperTime {
         id: track.id.clone(),
         start: first.epoch,
         end: last.epoch,
-        epochs: track.states.iter().map(|s| s.epoch).collect(),
+        epochs,
         series,
     })
+}
+
+/// Most output epochs one track may ask for through a step.
+pub const MAX_OUTPUT_EPOCHS: usize = 1_000_000;
+
+/// The output grid: TT seconds 0, step, 2 step, ... up to the last state (which is always
+/// included), and the same epochs as instants in the track's scale.
+fn output_grid(
+    times_s: &[f64],
+    step_s: f64,
+    start: Instant,
+    track: &ObjectTrack,
+    context: &ConversionContext<'_>,
+) -> Result<(Vec<f64>, Vec<Instant>), EphemerisError> {
+    let end_s = times_s.last().copied().unwrap_or(0.0);
+    let count = (end_s / step_s).floor() as usize + 1;
+    if count > MAX_OUTPUT_EPOCHS {
+        return Err(EphemerisError::new(
+            "bad_option",
+            format!(
+                "an output step of {step_s} s over {end_s} s gives {count} epochs; at most {MAX_OUTPUT_EPOCHS} per object"
+            ),
+        )
+        .for_object(&track.id));
+    }
+    let mut epochs_s: Vec<f64> = (0..count).map(|k| k as f64 * step_s).collect();
+    if epochs_s.last().is_some_and(|t| *t < end_s) {
+        epochs_s.push(end_s);
+    }
+    let start_tt = to_tt_attos(&start, context);
+    let epochs = epochs_s
+        .iter()
+        .map(|t_s| {
+            from_tt_attos(start_tt + seconds_f64_to_attos(*t_s), track.scale, context)
+                .map_err(|e| EphemerisError::new("bad_epoch", e.to_string()).for_object(&track.id))
+        })
+        .collect::<Result<Vec<_>, _>>()?;
+    Ok((epochs_s, epochs))
 }
 
 /// Integrates every track of an ephemeris (see [`proper_time_of_track`]); stops at the first

@@ -1,6 +1,8 @@
 //! Shared harness: the real server on 127.0.0.1:0, called with reqwest.
 #![allow(dead_code)]
 
+pub mod kepler;
+
 pub mod process;
 
 use eigenzeit::api::state::AppState;

@@ -77,7 +77,7 @@ pub fn parse_reference(text: &str, field: &str) -> Result<RateReference, ApiErro
     })
 }
 
-fn parse_gravity_model(text: &str, field: &str) -> Result<GravityModel, ApiError> {
+pub fn parse_gravity_model(text: &str, field: &str) -> Result<GravityModel, ApiError> {
     one_of(
         text,
         &[
@@ -96,14 +96,14 @@ fn parse_gravity_model(text: &str, field: &str) -> Result<GravityModel, ApiError
     })
 }
 
-fn reference_name(reference: RateReference) -> &'static str {
+pub fn reference_name(reference: RateReference) -> &'static str {
     match reference {
         RateReference::Tt => "TT",
         RateReference::Tcg => "TCG",
     }
 }
 
-fn model_name(model: GravityModel) -> &'static str {
+pub fn model_name(model: GravityModel) -> &'static str {
     match model {
         GravityModel::PointMass => "point_mass",
         GravityModel::J2 => "j2",

@@ -10,6 +10,7 @@ use crate::api::time::types::InstantForms;
 
 /// A place on the Earth: GRS80 geodetic coordinates (fixed in the ITRF).
 #[derive(Debug, Clone, Copy, Deserialize, ToSchema)]
+#[schema(as = GeodeticSiteInput)]
 #[serde(deny_unknown_fields)]
 #[schema(example = json!({"latitude_deg": 50.1, "longitude_deg": 8.6, "height_m": 150.0}))]
 pub struct GroundSiteInput {

@@ -22,6 +22,9 @@ pub struct InterpolationOptions {
     pub points: usize,
     /// Longest accepted time between consecutive states, s (default 3600 s).
     pub max_gap_s: f64,
+    /// Output grid: every `output_step_s` seconds of TT from the first epoch (and the last
+    /// epoch); `None` (default) answers at the track's own epochs.
+    pub output_step_s: Option<f64>,
 }
 
 impl Default for InterpolationOptions {
@@ -29,6 +32,7 @@ impl Default for InterpolationOptions {
         Self {
             points: 8,
             max_gap_s: 3600.0,
+            output_step_s: None,
         }
     }
 }
@@ -53,6 +57,14 @@ impl InterpolationOptions {
                     self.max_gap_s
                 ),
             ));
+        }
+        if let Some(step_s) = self.output_step_s {
+            if !(step_s.is_finite() && step_s >= 1e-3) {
+                return Err(EphemerisError::new(
+                    "bad_option",
+                    format!("output step is {step_s} s; expected at least 0.001 s"),
+                ));
+            }
         }
         Ok(())
     }

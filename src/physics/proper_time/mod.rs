@@ -29,7 +29,9 @@ mod quadrature;
 mod series;
 
 pub use quadrature::{CompensatedSum, GaussLegendre, MAX_NODES};
-pub use series::{kepler_periodic_term_s, ProperTimeSample, ProperTimeSeries, ProperTimeSummary};
+pub use series::{
+    kepler_periodic_term_s, relative_to_tcg, ProperTimeSample, ProperTimeSeries, ProperTimeSummary,
+};
 
 use std::fmt;
 

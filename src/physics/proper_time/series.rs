@@ -1,6 +1,6 @@
 //! The per-epoch series and the summary of a proper-time integration.
 
-use crate::physics::constants::{SECONDS_PER_DAY, SPEED_OF_LIGHT_SQUARED_M2_S2};
+use crate::physics::constants::{L_G, SECONDS_PER_DAY, SPEED_OF_LIGHT_SQUARED_M2_S2};
 
 /// One output epoch.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -131,5 +131,59 @@ pub(super) fn build(
             kepler_residual_rms_s: (square_sum / samples.len().max(1) as f64).sqrt(),
         },
         samples,
+    }
+}
+
+/// Re-expresses a series computed against TT as a series against TCG.
+///
+/// tau - TCG = (tau - TT) - (TCG - TT), and since the first epoch TCG - TT grows by
+/// L_G / (1 - L_G) per second of TT (IAU 2000 Resolution B1.9; IERS Conventions (2010)
+/// eq. 10.1). The gravity part carries the change (it is the part that depends on the
+/// reference); elapsed times become TCG seconds.
+pub fn relative_to_tcg(series: &ProperTimeSeries) -> ProperTimeSeries {
+    let rate = L_G / (1.0 - L_G);
+    let epochs_s: Vec<f64> = series
+        .samples
+        .iter()
+        .map(|sample| sample.t_s * (1.0 + rate))
+        .collect();
+    let periodic = series
+        .samples
+        .iter()
+        .map(|sample| sample.periodic_s)
+        .collect();
+    let parts: Vec<(f64, f64)> = series
+        .samples
+        .iter()
+        .map(|sample| {
+            (
+                sample.velocity_part_s,
+                sample.gravity_part_s - rate * sample.t_s,
+            )
+        })
+        .collect();
+    build(&epochs_s, periodic, &parts)
+}
+
+#[cfg(test)]
+mod tcg_tests {
+    use super::*;
+
+    #[test]
+    fn tcg_series_runs_slower_by_l_g() {
+        // A clock that keeps TT exactly (zero rate against TT) runs slow against TCG by
+        // L_G / (1 - L_G) (IAU 2000 Resolution B1.9).
+        let epochs_s: Vec<f64> = (0..=10).map(|k| f64::from(k) * 8_640.0).collect();
+        let parts = vec![(0.0, 0.0); epochs_s.len()];
+        let series = build(&epochs_s, vec![0.0; epochs_s.len()], &parts);
+        let tcg = relative_to_tcg(&series);
+        let expected = -L_G / (1.0 - L_G) / (1.0 + L_G / (1.0 - L_G));
+        assert!(
+            (tcg.summary.mean_rate - expected).abs() < 1e-22,
+            "{}",
+            tcg.summary.mean_rate
+        );
+        assert!((tcg.summary.accumulated_s + L_G / (1.0 - L_G) * 86_400.0).abs() < 1e-18);
+        assert!(tcg.summary.kepler_residual_rms_s < 1e-20);
     }
 }

@@ -283,7 +283,9 @@ pub fn write_instant(instant: &Instant, table: &LeapTable) -> Result<InstantText
     check_mjd_range(reading.mjd)?;
     let day = reading.day_length_attos;
     let mjd_numerator = i128::from(reading.mjd) * day + reading.seconds_of_day_attos;
-    let jd_numerator = mjd_numerator + 2_400_000 * day + day / 2;
+    // JD = MJD + 2 400 000.5 days, over a denominator of two days so that half of an odd day
+    // length (drift-era UTC) stays exact.
+    let jd_numerator_halves = 2 * mjd_numerator + 4_800_001 * day;
     let count = if instant.scale() == Scale::Utc {
         uniform_count_attos(reading.mjd, reading.seconds_of_day_attos)
     } else {
@@ -293,8 +295,27 @@ pub fn write_instant(instant: &Instant, table: &LeapTable) -> Result<InstantText
         scale: instant.scale(),
         iso: write_iso(&reading, ISO_DECIMALS),
         mjd: format_ratio(mjd_numerator, day, DAY_DECIMALS),
-        jd: format_ratio(jd_numerator, day, DAY_DECIMALS),
+        jd: format_ratio(jd_numerator_halves, 2 * day, DAY_DECIMALS),
         j2000_s: format_attos_as_seconds(count),
         gnss_week: gnss_week::write_gnss_week(instant.scale(), count),
     })
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn jd_of_an_odd_length_utc_day_reads_back() {
+        // Found by tests/parsers_proptest.rs: a 1968 UTC day (drift era) whose length in
+        // attoseconds is odd lost half an attosecond in the JD form. The written forms must
+        // read back exactly (DESIGN.md: decimal strings, lossless).
+        let table = LeapTable::builtin();
+        let instant = Instant::from_count_attos(Scale::Utc, -1_007_207_993_907_167_081_988_453_208);
+        let reading = day_reading(&instant, table).map(|r| r.day_length_attos % 2);
+        assert_eq!(reading, Ok(1), "the case needs an odd day length");
+        let written = write_instant(&instant, table);
+        let jd = written.and_then(|w| parse_instant(&w.jd, InstantFormat::Jd, Scale::Utc, table));
+        assert_eq!(jd, Ok(instant));
+    }
 }

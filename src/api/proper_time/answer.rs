@@ -1,0 +1,175 @@
+//! Computing the proper time of every object and shaping the answer (JSON or CSV).
+
+use std::fmt::Write as _;
+
+use super::body::{ephemeris_problem, ProperTimeRequest};
+use super::types::{ObjectOutput, ProperTimeAnswer, SampleOutput, SummaryOutput};
+use crate::api::clock::evaluate::{model_name, reference_name};
+use crate::api::error::ApiError;
+use crate::api::time::types::InstantForms;
+use crate::ephemeris::{proper_time_of_ephemeris, Frame, TrackProperTime};
+use crate::physics::gravity::{dot, earth_potential_m2_s2, GravityModel};
+use crate::physics::proper_time::{relative_to_tcg, ProperTimeOptions};
+use crate::physics::rate::{RateParts, RateReference};
+use crate::physics::time::convert::ConversionContext;
+use crate::physics::time::formats::{day_reading, write_instant, write_iso, ISO_DECIMALS};
+use crate::physics::time::instant::Instant;
+use crate::physics::time::leap_seconds::LeapTable;
+
+/// The fractional rate against TT split into (velocity, gravity) parts at an inertial state
+/// (IERS Conventions (2010) eq. 10.6, through [`RateParts::from_speed_and_potential`]).
+fn rate_against_tt(model: GravityModel) -> impl Fn(&[f64; 3], &[f64; 3]) -> (f64, f64) {
+    move |position_m, velocity_m_s| {
+        let potential = earth_potential_m2_s2(model, *position_m).unwrap_or(f64::NAN);
+        let parts = RateParts::from_speed_and_potential(
+            RateReference::Tt,
+            dot(*velocity_m_s, *velocity_m_s),
+            potential,
+        );
+        (parts.sr, parts.gr)
+    }
+}
+
+fn model_notes(request: &ProperTimeRequest) -> Vec<String> {
+    let mut notes = vec![
+        "d(tau)/dt - 1 = -(v^2/2 + U)/c^2 + L_G against TT (IERS Conventions (2010) eq. 10.6), integrated with Gauss-Legendre quadrature between output epochs and compensated summation".to_string(),
+        "coordinate time is TT from the ephemeris epochs (converted through the leap-second table, so a leap second inside the span is handled); against TCG the TCG - TT drift L_G/(1 - L_G) is removed".to_string(),
+        "Earth-fixed tracks: inertial speed from v + omega_E x r with the nominal omega_E; precession, nutation and polar motion are neglected (they change neither |r|, z nor r.v to first order)".to_string(),
+        "the periodic term is -2 r.v / c^2 (IS-GPS-200 20.3.3.3.3.1); the residual is tau - t minus that term and the least-squares line".to_string(),
+    ];
+    if request.gravity_model == GravityModel::J2 {
+        notes.push("J2 potential with the IERS Conventions (2010) GM, J2 and a_E; the GCRS pole stands in for the Earth's axis for inertial tracks".to_string());
+    }
+    notes
+}
+
+fn instant_forms(instant: &Instant, table: &LeapTable) -> Result<InstantForms, ApiError> {
+    write_instant(instant, table)
+        .map(InstantForms::from)
+        .map_err(|e| ApiError::from_time(&e, "ephemeris"))
+}
+
+fn iso_text(instant: &Instant, table: &LeapTable) -> String {
+    day_reading(instant, table)
+        .map(|reading| write_iso(&reading, ISO_DECIMALS))
+        .unwrap_or_default()
+}
+
+fn object_output(
+    track: TrackProperTime,
+    request: &ProperTimeRequest,
+    table: &LeapTable,
+    frame: Frame,
+    state_count: usize,
+) -> Result<ObjectOutput, ApiError> {
+    let series = match request.reference {
+        RateReference::Tt => track.series,
+        RateReference::Tcg => relative_to_tcg(&track.series),
+    };
+    let summary = series.summary;
+    let finite = [
+        summary.accumulated_s,
+        summary.mean_rate,
+        summary.kepler_residual_rms_s,
+    ];
+    if !finite.iter().all(|v| v.is_finite()) {
+        return Err(ApiError::unprocessable(
+            "integration_failed",
+            "the integration gave a non-finite result; check the positions and velocities of this object",
+        )
+        .with_object(Some(track.id), None));
+    }
+    let samples = request.include_series.then(|| {
+        series
+            .samples
+            .iter()
+            .zip(&track.epochs)
+            .map(|(sample, epoch)| SampleOutput {
+                epoch: iso_text(epoch, table),
+                elapsed_s: sample.t_s,
+                tau_minus_t_s: request.initial_offset_s + sample.tau_minus_t_s,
+                velocity_part_s: sample.velocity_part_s,
+                gravity_part_s: sample.gravity_part_s,
+                periodic_s: sample.periodic_s,
+                residual_s: sample.residual_s,
+            })
+            .collect()
+    });
+    Ok(ObjectOutput {
+        time_scale: track.start.scale().as_str().to_string(),
+        frame: match frame {
+            Frame::Inertial => "inertial",
+            Frame::EarthFixed => "earth_fixed",
+        }
+        .to_string(),
+        state_count,
+        summary: SummaryOutput {
+            start: instant_forms(&track.start, table)?,
+            end: instant_forms(&track.end, table)?,
+            span_s: summary.span_s,
+            accumulated_s: summary.accumulated_s,
+            mean_rate: summary.mean_rate,
+            mean_rate_us_per_day: summary.mean_rate_us_per_day,
+            periodic_amplitude_s: summary.periodic_amplitude_s,
+            kepler_residual_rms_s: summary.kepler_residual_rms_s,
+        },
+        id: track.id,
+        series: samples,
+    })
+}
+
+/// Integrates every object and shapes the answer.
+pub fn compute(
+    request: &ProperTimeRequest,
+    table: &LeapTable,
+) -> Result<ProperTimeAnswer, ApiError> {
+    let context = ConversionContext::geocentric(table);
+    let tracks = proper_time_of_ephemeris(
+        &request.ephemeris,
+        &request.interpolation,
+        &ProperTimeOptions::default(),
+        &context,
+        rate_against_tt(request.gravity_model),
+    )
+    .map_err(ephemeris_problem)?;
+    let objects = tracks
+        .into_iter()
+        .zip(&request.ephemeris.objects)
+        .map(|(track, input)| object_output(track, request, table, input.frame, input.states.len()))
+        .collect::<Result<Vec<_>, _>>()?;
+    Ok(ProperTimeAnswer {
+        reference: reference_name(request.reference).to_string(),
+        gravity_model: model_name(request.gravity_model).to_string(),
+        objects,
+        model_notes: model_notes(request),
+    })
+}
+
+/// The series of every object as CSV: one header line, then one line per sample; numbers in
+/// shortest round-trip form (offsets in scientific notation).
+pub fn to_csv(answer: &ProperTimeAnswer) -> String {
+    let mut out = String::from(
+        "object_id,epoch,elapsed_s,tau_minus_t_s,velocity_part_s,gravity_part_s,periodic_s,residual_s\n",
+    );
+    for object in &answer.objects {
+        let id = if object.id.contains([',', '"', '\n']) {
+            format!("\"{}\"", object.id.replace('"', "\"\""))
+        } else {
+            object.id.clone()
+        };
+        for sample in object.series.iter().flatten() {
+            let _ = writeln!(
+                out,
+                "{id},{},{},{:e},{:e},{:e},{:e},{:e}",
+                sample.epoch,
+                sample.elapsed_s,
+                sample.tau_minus_t_s,
+                sample.velocity_part_s,
+                sample.gravity_part_s,
+                sample.periodic_s,
+                sample.residual_s
+            );
+        }
+    }
+    out
+}

@@ -1,0 +1,303 @@
+//! Reading a proper-time request: the body format, the ephemeris and the options.
+
+use axum::http::{header, HeaderMap, StatusCode};
+
+use super::types::{EphemerisInput, ProperTimeOptionsInput, MAX_OPTION_SECONDS};
+use crate::api::clock::evaluate::{parse_gravity_model, parse_reference};
+use crate::api::error::ApiError;
+use crate::api::extract::{check_batch_size, parse_json};
+use crate::api::names::{ephemeris_frame_named, one_of, parse_format, parse_scale};
+use crate::ephemeris::json::{from_document, JsonEphemeris, JsonObject, JsonState};
+use crate::ephemeris::{read_oem, read_sp3, Ephemeris, EphemerisError, InterpolationOptions};
+use crate::ops::config::Settings;
+use crate::physics::constants::MAX_GEOCENTRIC_DISTANCE_M;
+use crate::physics::gravity::GravityModel;
+use crate::physics::rate::RateReference;
+use crate::physics::time::convert::ConversionContext;
+use crate::physics::time::leap_seconds::LeapTable;
+
+/// The formats the endpoint reads.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+enum BodyFormat {
+    Json,
+    Oem,
+    Sp3,
+}
+
+/// A request, read and checked.
+pub struct ProperTimeRequest {
+    /// The ephemeris.
+    pub ephemeris: Ephemeris,
+    /// TT or TCG.
+    pub reference: RateReference,
+    /// The Earth's potential model.
+    pub gravity_model: GravityModel,
+    /// Interpolation window, gap limit and output grid.
+    pub interpolation: InterpolationOptions,
+    /// tau - t at the first epoch, s.
+    pub initial_offset_s: f64,
+    /// Whether to answer the series.
+    pub include_series: bool,
+}
+
+/// An ephemeris error as a 422 problem naming the line, object and index.
+pub fn ephemeris_problem(error: EphemerisError) -> ApiError {
+    ApiError::unprocessable(error.code, error.message)
+        .with_line(error.line)
+        .with_object(error.object, error.index)
+}
+
+fn format_from_name(name: &str) -> Result<BodyFormat, ApiError> {
+    one_of(
+        name,
+        &[
+            ("json", BodyFormat::Json),
+            ("oem", BodyFormat::Oem),
+            ("sp3", BodyFormat::Sp3),
+        ],
+    )
+    .ok_or_else(|| {
+        ApiError::bad_request(
+            "invalid_query",
+            format!(
+                "unknown ephemeris format `{name}`; expected json, oem or sp3 (written exactly so)"
+            ),
+        )
+        .with_field("format")
+    })
+}
+
+/// Whether the Content-Type declares JSON (then a body that is not the JSON ephemeris is a
+/// 400, as for every JSON body; a JSON text sent as a file type is a 422 like any bad file).
+fn declared_json(headers: &HeaderMap) -> bool {
+    headers
+        .get(header::CONTENT_TYPE)
+        .and_then(|value| value.to_str().ok())
+        .and_then(|value| value.split(';').next())
+        .is_some_and(|media| {
+            let media = media.trim().to_ascii_lowercase();
+            media == "application/json" || media.ends_with("+json")
+        })
+}
+
+/// Checks the names of a JSON ephemeris as the schema states them (exact spellings).
+fn check_json_names(input: &EphemerisInput) -> Result<(), ApiError> {
+    if !ephemeris_frame_named(&input.frame) {
+        return Err(ApiError::unprocessable(
+            "unsupported_frame",
+            format!(
+                "frame {:?} is not supported; expected GCRF, EME2000, J2000, ICRF (inertial), ECEF, WGS84, WGS-84 or a name of the ITRF or IGS families (Earth-fixed), in upper case",
+                input.frame
+            ),
+        )
+        .with_field("frame"));
+    }
+    parse_scale(&input.time_scale, "time_scale")?;
+    parse_format(input.epoch_format.as_deref(), "epoch_format")?;
+    Ok(())
+}
+
+/// Refuses positions beyond the geocentric range of the rate model (the Earth's Hill sphere,
+/// 1.5e9 m), where the Sun's potential, not in the model, dominates.
+fn check_geocentric_range(ephemeris: &Ephemeris) -> Result<(), ApiError> {
+    for object in &ephemeris.objects {
+        for (index, state) in object.states.iter().enumerate() {
+            let p = state.position_m;
+            let radius_m = (p[0] * p[0] + p[1] * p[1] + p[2] * p[2]).sqrt();
+            if radius_m > MAX_GEOCENTRIC_DISTANCE_M {
+                return Err(ApiError::unprocessable(
+                    "beyond_model_range",
+                    format!(
+                        "the geocentric distance is {radius_m:e} m, beyond the Earth's Hill sphere ({MAX_GEOCENTRIC_DISTANCE_M:e} m), where this geocentric model does not apply"
+                    ),
+                )
+                .with_object(Some(object.id.clone()), Some(index)));
+            }
+        }
+    }
+    Ok(())
+}
+
+/// An option in seconds, finite and at most [`MAX_OPTION_SECONDS`] in magnitude.
+fn seconds_option(value: Option<f64>, field: &str) -> Result<Option<f64>, ApiError> {
+    match finite_option(value, field)? {
+        Some(v) if v.abs() > MAX_OPTION_SECONDS => Err(ApiError::unprocessable(
+            "bad_option",
+            format!("{field} is {v} s; at most {MAX_OPTION_SECONDS} s (the supported range of instants) in magnitude"),
+        )
+        .with_field(field)),
+        other => Ok(other),
+    }
+}
+
+fn sniff(body: &str) -> Result<BodyFormat, ApiError> {
+    let start = body.trim_start_matches('\u{feff}').trim_start();
+    if start.starts_with('{') {
+        Ok(BodyFormat::Json)
+    } else if start.starts_with("CCSDS_OEM_VERS") {
+        Ok(BodyFormat::Oem)
+    } else if start.starts_with("#c") || start.starts_with("#d") {
+        Ok(BodyFormat::Sp3)
+    } else {
+        Err(ApiError::unprocessable(
+            "unknown_ephemeris_format",
+            "cannot tell the ephemeris format: expected a JSON object, a CCSDS OEM starting with CCSDS_OEM_VERS, or an SP3-c/d file starting with #c or #d (or say it with ?format=)",
+        )
+        .with_line(Some(1)))
+    }
+}
+
+fn body_format(
+    headers: &HeaderMap,
+    query: Option<&str>,
+    body: &str,
+) -> Result<BodyFormat, ApiError> {
+    if let Some(name) = query {
+        return format_from_name(name);
+    }
+    let media = headers
+        .get(header::CONTENT_TYPE)
+        .and_then(|value| value.to_str().ok())
+        .and_then(|value| value.split(';').next())
+        .map(|media| media.trim().to_ascii_lowercase());
+    match media.as_deref() {
+        Some("application/json") => Ok(BodyFormat::Json),
+        Some(m) if m.ends_with("+json") => Ok(BodyFormat::Json),
+        Some("application/ccsds-oem" | "application/x-ccsds-oem" | "text/x-ccsds-oem") => {
+            Ok(BodyFormat::Oem)
+        }
+        Some("application/sp3" | "application/x-sp3" | "text/x-sp3") => Ok(BodyFormat::Sp3),
+        None | Some("text/plain" | "application/octet-stream") => sniff(body),
+        Some(other) => Err(ApiError::new(
+            StatusCode::UNSUPPORTED_MEDIA_TYPE,
+            "unsupported_media_type",
+            format!("cannot read a body of type {other}; send application/json, application/ccsds-oem, application/sp3 or text/plain"),
+        )),
+    }
+}
+
+fn json_document(input: EphemerisInput) -> (JsonEphemeris, Option<ProperTimeOptionsInput>) {
+    let objects = input
+        .objects
+        .into_iter()
+        .map(|object| JsonObject {
+            id: object.id,
+            states: object
+                .states
+                .into_iter()
+                .map(|state| JsonState {
+                    epoch: state.epoch,
+                    position_m: state.position_m,
+                    velocity_m_s: state.velocity_m_s,
+                })
+                .collect(),
+        })
+        .collect();
+    let document = JsonEphemeris {
+        frame: input.frame,
+        time_scale: input.time_scale,
+        epoch_format: input.epoch_format,
+        objects,
+    };
+    (document, input.options.map(ProperTimeOptionsInput::from))
+}
+
+/// Body options override query options field by field.
+fn merge(
+    query: ProperTimeOptionsInput,
+    body: Option<ProperTimeOptionsInput>,
+) -> ProperTimeOptionsInput {
+    let Some(body) = body else { return query };
+    ProperTimeOptionsInput {
+        format: body.format.or(query.format),
+        reference: body.reference.or(query.reference),
+        gravity_model: body.gravity_model.or(query.gravity_model),
+        step_s: body.step_s.or(query.step_s),
+        initial_offset_s: body.initial_offset_s.or(query.initial_offset_s),
+        interpolation_points: body.interpolation_points.or(query.interpolation_points),
+        max_gap_s: body.max_gap_s.or(query.max_gap_s),
+        include_series: body.include_series.or(query.include_series),
+    }
+}
+
+fn finite_option(value: Option<f64>, field: &str) -> Result<Option<f64>, ApiError> {
+    match value {
+        Some(v) if !v.is_finite() => Err(ApiError::unprocessable(
+            "not_finite",
+            format!("{field} must be a finite number"),
+        )
+        .with_field(field)),
+        other => Ok(other),
+    }
+}
+
+/// Reads the body in its format and resolves the options.
+pub fn read_request(
+    headers: &HeaderMap,
+    query: ProperTimeOptionsInput,
+    body: &[u8],
+    table: &LeapTable,
+    settings: &Settings,
+) -> Result<ProperTimeRequest, ApiError> {
+    let text = std::str::from_utf8(body).map_err(|e| {
+        ApiError::bad_request(
+            "unreadable_body",
+            format!("the body is not UTF-8 text: {e}"),
+        )
+    })?;
+    let context = ConversionContext::geocentric(table);
+    let (ephemeris, options) = match body_format(headers, query.format.as_deref(), text)? {
+        BodyFormat::Json => {
+            let input: EphemerisInput = if declared_json(headers) {
+                parse_json(body)?
+            } else {
+                parse_json(body).map_err(|error| {
+                    ApiError::unprocessable("json_invalid", error.problem().detail.clone())
+                        .with_line(Some(1))
+                })?
+            };
+            check_json_names(&input)?;
+            if let Some(name) = input.options.as_ref().and_then(|o| o.format.as_deref()) {
+                format_from_name(name).map_err(|_| {
+                    ApiError::unprocessable(
+                        "bad_option",
+                        format!("unknown ephemeris format `{name}`; expected json, oem or sp3"),
+                    )
+                    .with_field("options.format")
+                })?;
+            }
+            let (document, body_options) = json_document(input);
+            let ephemeris = from_document(&document, &context).map_err(ephemeris_problem)?;
+            (ephemeris, merge(query, body_options))
+        }
+        BodyFormat::Oem => (read_oem(text, &context).map_err(ephemeris_problem)?, query),
+        BodyFormat::Sp3 => (read_sp3(text, &context).map_err(ephemeris_problem)?, query),
+    };
+    check_geocentric_range(&ephemeris)?;
+    let states: usize = ephemeris.objects.iter().map(|o| o.states.len()).sum();
+    check_batch_size(states, settings.batch_limit, "objects", "ephemeris state")?;
+    let reference = match options.reference.as_deref() {
+        Some(text) => parse_reference(text, "reference")?,
+        None => RateReference::Tt,
+    };
+    let gravity_model = match options.gravity_model.as_deref() {
+        Some(text) => parse_gravity_model(text, "gravity_model")?,
+        None => GravityModel::PointMass,
+    };
+    let interpolation = InterpolationOptions {
+        points: options.interpolation_points.unwrap_or(8),
+        max_gap_s: seconds_option(options.max_gap_s, "max_gap_s")?
+            .unwrap_or(settings.max_ephemeris_gap_s),
+        output_step_s: seconds_option(options.step_s, "step_s")?,
+    };
+    interpolation.check().map_err(ephemeris_problem)?;
+    Ok(ProperTimeRequest {
+        ephemeris,
+        reference,
+        gravity_model,
+        interpolation,
+        initial_offset_s: seconds_option(options.initial_offset_s, "initial_offset_s")?
+            .unwrap_or(0.0),
+        include_series: options.include_series.unwrap_or(true),
+    })
+}

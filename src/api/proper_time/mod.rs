@@ -1,0 +1,91 @@
+//! `POST /v1/clock/proper-time`: proper time accumulated along an uploaded ephemeris
+//! (JSON, CCSDS OEM in KVN form, SP3-c/d), answered as JSON or CSV.
+
+mod answer;
+mod body;
+pub mod types;
+
+use axum::extract::State;
+use axum::http::{header, HeaderMap};
+use axum::response::{IntoResponse, Response};
+use axum::routing::post;
+use axum::{Json, Router};
+
+use super::error::ApiError;
+use super::extract::QueryParams;
+use super::state::AppState;
+use types::ProperTimeOptionsInput;
+
+/// Routes `/v1/clock/proper-time`.
+pub fn router() -> Router<AppState> {
+    Router::new().route("/v1/clock/proper-time", post(proper_time))
+}
+
+fn wants_csv(headers: &HeaderMap) -> bool {
+    headers
+        .get(header::ACCEPT)
+        .and_then(|value| value.to_str().ok())
+        .is_some_and(|accept| {
+            accept.split(',').any(|media| {
+                media
+                    .split(';')
+                    .next()
+                    .is_some_and(|m| m.trim() == "text/csv")
+            })
+        })
+}
+
+/// Proper time accumulated by each object's clock along an uploaded ephemeris.
+#[utoipa::path(post, path = "/v1/clock/proper-time", tag = "clock",
+    params(ProperTimeOptionsInput),
+    request_body(description = "The ephemeris: JSON (application/json), CCSDS OEM KVN (application/ccsds-oem) or SP3-c/d (application/sp3); text/plain with `format`, or sniffed from the first line.",
+        content(
+            (types::EphemerisInput = "application/json"),
+            (String = "application/ccsds-oem"),
+            (String = "application/sp3"),
+            (String = "text/plain"))),
+    responses(
+        (status = 200, description = "Per object: summary and series. `Accept: text/csv` answers the series as CSV (object_id, epoch, elapsed_s, tau_minus_t_s, velocity_part_s, gravity_part_s, periodic_s, residual_s).",
+            content((types::ProperTimeAnswer = "application/json"), (String = "text/csv"))),
+        (status = 400, description = "The query string cannot be read (`invalid_query`: an unknown parameter or `format`, a wrong type), the body is not UTF-8 (`unreadable_body`), or a body sent as application/json is not the JSON ephemeris (`invalid_json`, `invalid_body`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 413, description = "Body above the configured limit (`body_too_large`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 415, description = "A Content-Type the endpoint does not read (`unsupported_media_type`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 422, description = "The ephemeris or an option cannot be used: `code` says why (a file that does not follow its format: unknown_ephemeris_format, json_invalid, the OEM and SP3 reader codes; unsupported_frame, unknown_scale, unknown_format, bad_epoch, mixed_velocity, not_finite, below_surface, beyond_model_range, speed_not_below_c, epochs_not_increasing, gap_too_long, too_few_states, bad_option, empty_batch, batch_too_large, unknown_reference, unknown_gravity_model, integration_failed); `line` (files), `object`, `index` and `field` say where", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        crate::api::error::TimeoutProblem))]
+pub async fn proper_time(
+    State(state): State<AppState>,
+    QueryParams(query): QueryParams<ProperTimeOptionsInput>,
+    headers: HeaderMap,
+    body: Result<axum::body::Bytes, axum::extract::rejection::BytesRejection>,
+) -> Result<Response, ApiError> {
+    let body = body.map_err(|rejection| {
+        if rejection.status() == axum::http::StatusCode::PAYLOAD_TOO_LARGE {
+            super::extract::body_too_large()
+        } else {
+            ApiError::bad_request("unreadable_body", rejection.body_text())
+        }
+    })?;
+    let csv = wants_csv(&headers);
+    let table = state.leap_table();
+    let settings = state.settings().clone();
+    let work = move || -> Result<Response, ApiError> {
+        let request = body::read_request(&headers, query, &body, &table, &settings)?;
+        let answer = answer::compute(&request, &table)?;
+        Ok(if csv {
+            (
+                [(header::CONTENT_TYPE, "text/csv; charset=utf-8")],
+                answer::to_csv(&answer),
+            )
+                .into_response()
+        } else {
+            Json(answer).into_response()
+        })
+    };
+    tokio::task::spawn_blocking(work).await.map_err(|e| {
+        ApiError::new(
+            axum::http::StatusCode::INTERNAL_SERVER_ERROR,
+            "internal",
+            e.to_string(),
+        )
+    })?
+}
