@@ -155,3 +155,21 @@ async fn oversized_body_is_413() {
         "body_too_large",
     );
 }
+
+#[tokio::test]
+async fn near_duplicate_sp3_epochs_are_refused_at_once() {
+    // Found by the ephemeris_sp3 fuzz target: two epochs 40 ns apart made the interpolated
+    // velocity explode and the integration ask for millions of subintervals (the request ran
+    // past its timeout). It must be a prompt 422 naming the object.
+    let server = TestServer::start().await;
+    let file = std::fs::read(concat!(
+        env!("CARGO_MANIFEST_DIR"),
+        "/tests/regressions/sp3_near_duplicate_epochs.sp3"
+    ))
+    .unwrap_or_default();
+    let started = std::time::Instant::now();
+    let answer = post_body(&server, "?include_series=false", "application/sp3", file).await;
+    let body = assert_problem(&answer, 422, "speed_not_below_c");
+    assert_eq!(body["object"], "L01");
+    assert!(started.elapsed().as_secs_f64() < 10.0);
+}

@@ -228,6 +228,10 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     ),
     // Proper time along an ephemeris (JSON, CCSDS OEM, SP3).
     (
+        "sampling_too_coarse",
+        "The states of an object are too far apart for its motion (it sweeps hundreds of radians between two samples); sample the trajectory more densely.",
+    ),
+    (
         "unknown_ephemeris_format",
         "The body's format cannot be told: send `Content-Type: application/json`, `application/ccsds-oem` or `application/sp3`, or say `?format=json|oem|sp3`.",
     ),

@@ -35,7 +35,7 @@ pub use series::{
 
 use std::fmt;
 
-use crate::physics::constants::EARTH_ROTATION_RAD_S;
+use crate::physics::constants::{EARTH_ROTATION_RAD_S, SPEED_OF_LIGHT_SQUARED_M2_S2};
 
 /// A trajectory: inertial-equivalent geocentric position (m) and velocity (m/s) at coordinate
 /// time `t_s` (seconds since the first output epoch).
@@ -187,7 +187,24 @@ where
                 "the state at the start of this interval has a zero or non-finite position or velocity",
             ));
         }
-        let (nodes, pieces) = rules.plan(length_s * angular_rate, options.relative_tolerance);
+        if dot3(&velocity_m_s, &velocity_m_s) >= SPEED_OF_LIGHT_SQUARED_M2_S2 {
+            return Err(error(
+                "speed_not_below_c",
+                Some(index),
+                "the (interpolated) speed at the start of this interval is at or above c; near-duplicate epochs or inconsistent positions make the derived velocity meaningless",
+            ));
+        }
+        let Some((nodes, pieces)) = rules.plan(length_s * angular_rate, options.relative_tolerance)
+        else {
+            return Err(error(
+                "sampling_too_coarse",
+                Some(index),
+                format!(
+                    "the object moves through {:.0} rad of its geocentric direction in this interval of {length_s} s; sample the trajectory more densely",
+                    length_s * angular_rate
+                ),
+            ));
+        };
         let piece_s = length_s / pieces as f64;
         let (mut velocity_part, mut gravity_part) = (0.0, 0.0);
         for piece in 0..pieces {
@@ -215,6 +232,10 @@ where
         parts.push((velocity_sum.value(), gravity_sum.value()));
     }
     Ok(series::build(epochs_s, periodic_s, &parts))
+}
+
+fn dot3(a: &[f64; 3], b: &[f64; 3]) -> f64 {
+    a[0] * b[0] + a[1] * b[1] + a[2] * b[2]
 }
 
 fn norm(vector: &[f64; 3]) -> f64 {

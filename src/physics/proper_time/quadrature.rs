@@ -3,6 +3,10 @@
 /// Most nodes used on one interval.
 pub const MAX_NODES: usize = 8;
 
+/// Most subintervals one interval between output epochs is split into. It bounds the work of
+/// one interval to `MAX_PIECES * MAX_NODES` evaluations, whatever the input.
+pub const MAX_PIECES: usize = 64;
+
 /// Gauss-Legendre rules with 1..=[`MAX_NODES`] nodes on [-1, 1].
 #[derive(Debug, Clone)]
 pub struct GaussLegendre {
@@ -61,20 +65,22 @@ impl GaussLegendre {
     /// frequency is `x` (radians): the fewest nodes m >= 2 with
     /// (m!)^4 / ((2m+1)((2m)!)^3) * x^(2m) <= `tolerance` (the error term of an m-node rule,
     /// Abramowitz & Stegun 25.4.30, for an integrand varying like sin(omega t)), splitting the
-    /// interval in halves until [`MAX_NODES`] suffice.
-    pub fn plan(&self, x: f64, tolerance: f64) -> (usize, usize) {
+    /// interval in halves until [`MAX_NODES`] suffice. `None` when more than [`MAX_PIECES`]
+    /// halves would be needed: the samples are then too far apart for the motion (more than
+    /// about 250 rad of orbit between two samples), and no interpolation of them is meaningful.
+    pub fn plan(&self, x: f64, tolerance: f64) -> Option<(usize, usize)> {
         let mut pieces = 1usize;
-        while pieces < 1 << 20 {
+        while pieces <= MAX_PIECES {
             let piece = x / pieces as f64;
             for m in 2..=MAX_NODES {
                 let constant = self.error_constants.get(m - 1).copied().unwrap_or(0.0);
                 if constant * piece.powi(2 * m as i32) <= tolerance {
-                    return (m, pieces);
+                    return Some((m, pieces));
                 }
             }
             pieces *= 2;
         }
-        (MAX_NODES, pieces)
+        None
     }
 }
 
@@ -134,6 +140,19 @@ impl CompensatedSum {
 
 #[cfg(test)]
 mod tests {
+
+    #[test]
+    fn plan_is_bounded() {
+        // A fuzzed SP3 file once asked for 2^20 subintervals per interval (minutes of work);
+        // the plan now refuses beyond MAX_PIECES (regression: tests/regressions/).
+        let rules = GaussLegendre::new();
+        assert_eq!(rules.plan(1e-6, 1e-13).map(|(_, pieces)| pieces), Some(1));
+        assert!(rules.plan(1e6, 1e-13).is_none());
+        assert!(rules.plan(f64::INFINITY, 1e-13).is_none());
+        let (nodes, pieces) = rules.plan(100.0, 1e-13).unwrap_or((0, 0));
+        assert!(nodes <= MAX_NODES && (1..=MAX_PIECES).contains(&pieces));
+    }
+
     use super::*;
 
     #[test]
