@@ -45,6 +45,7 @@ server=("$binary" --addr "127.0.0.1:$port" --log-level warn)
 if command -v taskset >/dev/null 2>&1 && [ "$(nproc)" -ge 2 ]; then
     server=(taskset -c 0 "${server[@]}")
 fi
+started_ns="$(date +%s%N)"
 "${server[@]}" >"$work/server.log" 2>&1 &
 server_pid=$!
 cleanup() {
@@ -54,10 +55,11 @@ cleanup() {
 }
 trap cleanup EXIT INT TERM
 
-for _ in $(seq 1 100); do
-    curl -fsS -o /dev/null "$base/healthz" 2>/dev/null && break
-    sleep 0.1
+for _ in $(seq 1 1000); do
+    curl -fsS -o /dev/null "$base/readyz" 2>/dev/null && break
+    sleep 0.01
 done
+ready_ms="$(( ($(date +%s%N) - started_ns) / 1000000 ))"
 [ "$(readlink "/proc/$server_pid/exe")" = "$(readlink -f "$binary")" ] || {
     echo "process $server_pid is not the server" >&2
     exit 1
@@ -69,7 +71,6 @@ curl -fsS -o /dev/null "$base/healthz" || {
 }
 
 rss_kib() { awk '/^VmRSS:/ {print $2}' "/proc/$server_pid/status"; }
-rss_before="$(rss_kib)"
 
 rate_body='{"items":[{"orbit":{"semi_major_axis_m":26561750,"eccentricity":0.01}}]}'
 cat >"$work/post_rate.lua" <<EOF
@@ -78,6 +79,19 @@ wrk.body = '$rate_body'
 wrk.headers["Content-Type"] = "application/json"
 EOF
 
+# A batch of 1000 UTC epochs to TDB (epochs/s = requests/s x 1000).
+python3 - "$work/post_batch.lua" "$work/batch_100000.json" <<'PY'
+import json, sys
+def batch(n):
+    return json.dumps({"from": "UTC", "to": ["TDB"], "format": "mjd",
+                       "epochs": ["%.6f" % (61000 + k * 0.001) for k in range(n)]})
+with open(sys.argv[1], "w") as f:
+    body = batch(1000).replace("\\", "\\\\").replace("'", "\\'")
+    f.write("wrk.method = \"POST\"\nwrk.body = '%s'\nwrk.headers[\"Content-Type\"] = \"application/json\"\n" % body)
+with open(sys.argv[2], "w") as f:
+    f.write(batch(100000))
+PY
+
 at="2026-03-14T06:30:00.123456789012"
 # name | method | path | wrk script
 endpoints=(
@@ -85,6 +99,7 @@ endpoints=(
     "GET /v1/time/convert UTC->TDB|GET|/v1/time/convert?at=$at&from=UTC&to=TDB|"
     "GET /v1/time/convert to=all|GET|/v1/time/convert?at=$at&from=UTC&to=all|"
     "POST /v1/clock/rate (1 orbit)|POST|/v1/clock/rate|$work/post_rate.lua"
+    "POST /v1/time/convert 1000 epochs|POST|/v1/time/convert|$work/post_batch.lua"
     "GET /v1/time/scales|GET|/v1/time/scales|"
 )
 
@@ -96,11 +111,25 @@ to_us() {
         printf "%.1f", n * f }'
 }
 
+# Warm-up: one second per endpoint, so that "before" is the steady state (allocator arenas,
+# connection buffers, the lazily built TDB fit) and "after" shows growth, not first use.
+rss_cold="$(rss_kib)"
+for entry in "${endpoints[@]}"; do
+    IFS='|' read -r name method path script <<<"$entry"
+    args=(-t1 "-c$connections" -d1s --timeout 5s)
+    [ -n "$script" ] && args+=(-s "$script")
+    pin 1 wrk "${args[@]}" "$base$path" >/dev/null 2>&1 || true
+done
+rss_before="$(rss_kib)"
+
 printf '%-34s %10s %9s %9s %8s %7s %8s\n' endpoint "req/s" "p50 us" "p99 us" non-2xx errors "x base"
 baseline_rps=""
 for entry in "${endpoints[@]}"; do
     IFS='|' read -r name method path script <<<"$entry"
-    if [ "$method" = POST ]; then
+    if [ "$path" = /v1/time/convert ] && [ "$method" = POST ]; then
+        status="$(curl -s -o /dev/null -w '%{http_code}' -X POST -H 'Content-Type: application/json' \
+            --data '{"from":"UTC","to":["TDB"],"epochs":["2026-01-01"]}' "$base$path")"
+    elif [ "$method" = POST ]; then
         status="$(curl -s -o /dev/null -w '%{http_code}' -X POST -H 'Content-Type: application/json' \
             --data "$rate_body" "$base$path")"
     else
@@ -125,5 +154,10 @@ for entry in "${endpoints[@]}"; do
 done
 
 rss_after="$(rss_kib)"
-echo "server VmRSS: before ${rss_before} KiB, after ${rss_after} KiB"
+echo "server VmRSS: at start ${rss_cold} KiB, after warm-up ${rss_before} KiB, after the run ${rss_after} KiB ($(awk -v a="$rss_after" -v b="$rss_before" 'BEGIN { printf "%+.1f", 100 * (a - b) / b }') % against warm-up)"
+batch_status="$(curl -s -o /dev/null -w '%{http_code} in %{time_total} s' -X POST -H 'Content-Type: application/json' \
+    --data-binary "@$work/batch_100000.json" "$base/v1/time/convert")"
+hwm="$(awk '/^VmHWM:/ {print $2}' "/proc/$server_pid/status")"
+echo "one maximum-size batch (100 000 epochs to TDB): HTTP $batch_status; peak VmHWM ${hwm} KiB"
+echo "start to /readyz 200: ${ready_ms} ms"
 echo "machine: $(nproc) CPUs; server on CPU 0, wrk on CPU 1; ${duration_s} s per endpoint, ${connections} connections"

@@ -180,3 +180,22 @@ where
 
     deserializer.deserialize_any(Whole)
 }
+
+/// Batches up to this many items are computed on the request's own task; larger ones move to
+/// the blocking pool so that they do not hold up the async workers.
+pub const INLINE_BATCH_ITEMS: usize = 64;
+
+/// Runs CPU-bound request work: inline for small batches (a thread hand-off would cost more
+/// than the work), on the blocking pool for large ones.
+pub async fn compute<T, F>(items: usize, work: F) -> Result<T, ApiError>
+where
+    T: Send + 'static,
+    F: FnOnce() -> Result<T, ApiError> + Send + 'static,
+{
+    if items <= INLINE_BATCH_ITEMS {
+        return work();
+    }
+    tokio::task::spawn_blocking(work)
+        .await
+        .map_err(|e| ApiError::new(StatusCode::INTERNAL_SERVER_ERROR, "internal", e.to_string()))?
+}

@@ -1,14 +1,13 @@
 //! `POST /v1/clock/rate`.
 
 use axum::extract::State;
-use axum::http::StatusCode;
 use axum::Json;
 
 use super::answer::RateBatchAnswer;
 use super::evaluate::{evaluate_item, Defaults};
 use super::types::RateRequest;
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, TimeoutProblem};
-use crate::api::extract::{check_batch_size, JsonBody};
+use crate::api::extract::{check_batch_size, compute, JsonBody};
 use crate::api::state::AppState;
 
 /// Rate offsets of clocks (state vectors, orbits, ground sites, lunar sites) relative to TT or
@@ -36,6 +35,7 @@ pub async fn rate(
         request.gravity_model.as_deref(),
         request.nominal_frequency_hz,
     )?;
+    let items = request.items.len();
     let work = move || {
         request
             .items
@@ -47,8 +47,6 @@ pub async fn rate(
             })
             .collect::<Result<Vec<_>, _>>()
     };
-    let results = tokio::task::spawn_blocking(work).await.map_err(|e| {
-        ApiError::new(StatusCode::INTERNAL_SERVER_ERROR, "internal", e.to_string())
-    })??;
+    let results = compute(items, work).await?;
     Ok(Json(RateBatchAnswer { results }))
 }

@@ -1,7 +1,6 @@
 //! `GET` and `POST /v1/time/convert`.
 
 use axum::extract::State;
-use axum::http::StatusCode;
 use axum::Json;
 
 use super::types::{
@@ -9,7 +8,7 @@ use super::types::{
     ObserverInput,
 };
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, QueryProblems, TimeoutProblem};
-use crate::api::extract::{check_batch_size, JsonBody, QueryParams};
+use crate::api::extract::{check_batch_size, compute, JsonBody, QueryParams};
 use crate::api::names::{parse_format, parse_scale, ALL_SCALES};
 use crate::api::state::AppState;
 use crate::physics::time::calendar::CalendarDate;
@@ -233,6 +232,7 @@ pub async fn convert_post(
         .map(|o| observer_from_input(o, "observer"))
         .transpose()?;
     let table = state.leap_table();
+    let items = request.epochs.len();
     let work = move || {
         let context = ConversionContext {
             table: &table,
@@ -255,8 +255,6 @@ pub async fn convert_post(
             })
             .collect::<Result<Vec<_>, _>>()
     };
-    let conversions = tokio::task::spawn_blocking(work).await.map_err(|e| {
-        ApiError::new(StatusCode::INTERNAL_SERVER_ERROR, "internal", e.to_string())
-    })??;
+    let conversions = compute(items, work).await?;
     Ok(Json(ConversionBatch { conversions }))
 }
