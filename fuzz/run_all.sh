@@ -15,14 +15,14 @@ export RUSTC_BOOTSTRAP=1
 export CARGO_TARGET_DIR="${CARGO_TARGET_DIR:-$PWD/target}"
 mkdir -p logs
 for target in "${targets[@]}"; do
-    mkdir -p "corpus/$target" "seeds/$target"
+    mkdir -p "corpus/$target" "starting_inputs/$target"
     dict=()
     case "$target" in
         instant_text) dict=(-dict=instant.dict) ;;
         leap_second_file) dict=(-dict=leap_second_file.dict) ;;
     esac
     status=0
-    cargo fuzz run -O "$target" "corpus/$target" "seeds/$target" -- \
+    cargo fuzz run -O "$target" "corpus/$target" "starting_inputs/$target" -- \
         -max_total_time="$seconds" -max_len=8192 -timeout=10 "${dict[@]}" \
         > "logs/$target.log" 2>&1 || status=$?
     runs=$(grep -Eo 'Done [0-9]+ runs in [0-9]+ second' "logs/$target.log" | tail -1 || true)
