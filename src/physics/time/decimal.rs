@@ -114,6 +114,9 @@ impl ExactDecimal {
             if fraction_e24 == TEN_POW_24 {
                 fraction_e24 = 0;
                 integer_part += 1;
+                if integer_part > MAX_INTEGER_PART {
+                    return Err(DecimalError::OutOfRange);
+                }
             }
         }
         Ok(Self {
@@ -282,6 +285,13 @@ mod tests {
             ExactDecimal::parse("10000000000000000"),
             Err(DecimalError::OutOfRange)
         );
+        // Found by the `decimal` fuzz target: rounding the 25th decimal up carried the integer
+        // part past the limit, so a number was accepted that its own written form was not.
+        assert_eq!(
+            ExactDecimal::parse("1000000000000000.9999999999999999999999999"),
+            Err(DecimalError::OutOfRange)
+        );
+        assert!(ExactDecimal::parse("1000000000000000.999999999999999999999999").is_ok());
     }
 
     #[test]
