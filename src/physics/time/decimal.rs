@@ -37,7 +37,7 @@ pub enum DecimalError {
     NoDigits,
     /// More than one decimal point.
     SecondPoint,
-    /// The integer part is beyond 10^15.
+    /// The magnitude is beyond 10^15.
     OutOfRange,
 }
 
@@ -52,7 +52,7 @@ impl fmt::Display for DecimalError {
             ),
             Self::NoDigits => write!(f, "expected digits in the decimal number"),
             Self::SecondPoint => write!(f, "expected at most one decimal point"),
-            Self::OutOfRange => write!(f, "the number is out of range (integer part above 10^15)"),
+            Self::OutOfRange => write!(f, "the number is out of range (magnitude above 10^15)"),
         }
     }
 }
@@ -114,10 +114,13 @@ impl ExactDecimal {
             if fraction_e24 == TEN_POW_24 {
                 fraction_e24 = 0;
                 integer_part += 1;
-                if integer_part > MAX_INTEGER_PART {
-                    return Err(DecimalError::OutOfRange);
-                }
             }
+        }
+        // The magnitude itself is bounded (not only the digits before the point), so that a
+        // value rounded to the attosecond and written out reads back within the same bound.
+        if integer_part > MAX_INTEGER_PART || (integer_part == MAX_INTEGER_PART && fraction_e24 > 0)
+        {
+            return Err(DecimalError::OutOfRange);
         }
         Ok(Self {
             negative,
@@ -291,7 +294,18 @@ mod tests {
             ExactDecimal::parse("1000000000000000.9999999999999999999999999"),
             Err(DecimalError::OutOfRange)
         );
-        assert!(ExactDecimal::parse("1000000000000000.999999999999999999999999").is_ok());
+        assert_eq!(
+            ExactDecimal::parse("1000000000000000.9999999999999999999999"),
+            Err(DecimalError::OutOfRange)
+        );
+        assert!(ExactDecimal::parse("1000000000000000.0").is_ok());
+        // Just below the bound, it rounds to the bound itself, which reads back.
+        let near = ExactDecimal::parse("999999999999999.9999999999999999999999");
+        let attos = near.map(|d| d.times_attos(SECOND));
+        assert_eq!(attos, Ok(1_000_000_000_000_000 * SECOND));
+        assert!(
+            ExactDecimal::parse(&format_attos_as_seconds(1_000_000_000_000_000 * SECOND)).is_ok()
+        );
     }
 
     #[test]
