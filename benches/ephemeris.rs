@@ -5,10 +5,6 @@ use std::fmt::Write as _;
 use std::hint::black_box;
 
 use criterion::{criterion_group, criterion_main, Criterion, Throughput};
-use eigenzeit::ephemeris::{
-    proper_time_of_track, read_oem, EphemerisState, Frame, InterpolationOptions, Interpolator,
-    ObjectTrack,
-};
 use eigenzeit::physics::constants::{GM_EARTH_M3_S2, SPEED_OF_LIGHT_SQUARED_M2_S2};
 use eigenzeit::physics::proper_time::kepler::KeplerOrbit;
 use eigenzeit::physics::proper_time::{ProperTimeOptions, Trajectory};
@@ -16,6 +12,10 @@ use eigenzeit::physics::time::convert::ConversionContext;
 use eigenzeit::physics::time::instant::{Instant, ATTOS_PER_SECOND};
 use eigenzeit::physics::time::leap_seconds::LeapTable;
 use eigenzeit::physics::time::scale::Scale;
+use eigenzeit::trajectory::{
+    proper_time_of_track, read_oem, Frame, InterpolationOptions, Interpolator, ObjectTrack,
+    TrajectoryState,
+};
 
 const STATES: usize = 86_400;
 
@@ -41,7 +41,7 @@ fn track(velocities: bool) -> ObjectTrack {
         states: (0..STATES)
             .map(|i| {
                 let (position_m, velocity_m_s) = orbit.state_at(i as f64);
-                EphemerisState {
+                TrajectoryState {
                     epoch: Instant::from_count_attos(
                         Scale::Tt,
                         start + i as i128 * ATTOS_PER_SECOND,

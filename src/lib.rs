@@ -1,13 +1,13 @@
 //! eigenzeit: relativistic clock and time-scale answers over HTTP.
 //!
-//! The crate has two halves. [`physics`] and [`ephemeris`] are a pure library (no HTTP, no
-//! async): time scales, clock rates, proper time, signal paths and ephemeris readers. [`api`]
+//! The crate has two halves. [`physics`] and [`trajectory`] are a pure library (no HTTP, no
+//! async): time scales, clock rates, proper time and signal paths; readers of uploaded trajectories (JSON, CCSDS OEM, SP3). [`api`]
 //! and [`ops`] are the thin HTTP service around it; [`app`] builds the whole router.
 #![forbid(unsafe_code)]
 
 pub mod api;
-pub mod ephemeris;
 pub mod ops;
 pub mod physics;
+pub mod trajectory;
 
 pub use api::app;

@@ -7,13 +7,13 @@ mod proptest_support;
 use proptest::prelude::*;
 use proptest_support::{arbitrary_text, config, near_valid};
 
-use eigenzeit::ephemeris::{
-    proper_time_of_ephemeris, read_json, read_oem, read_sp3, Ephemeris, EphemerisError,
-    InterpolationOptions,
-};
 use eigenzeit::physics::proper_time::ProperTimeOptions;
 use eigenzeit::physics::time::convert::ConversionContext;
 use eigenzeit::physics::time::leap_seconds::LeapTable;
+use eigenzeit::trajectory::{
+    proper_time_of_ephemeris, read_json, read_oem, read_sp3, InterpolationOptions, TrajectoryError,
+    TrajectorySet,
+};
 
 const OEM: &str = include_str!("../demo-data/lyra_kestrel.oem");
 const SP3: &str = include_str!("../demo-data/lyra.sp3");
@@ -53,7 +53,7 @@ fn json_samples() -> Vec<String> {
 
 /// Reads, then integrates what was accepted: neither may panic.
 fn read_and_integrate(
-    read: impl FnOnce(&ConversionContext<'_>) -> Result<Ephemeris, EphemerisError>,
+    read: impl FnOnce(&ConversionContext<'_>) -> Result<TrajectorySet, TrajectoryError>,
 ) {
     let table = LeapTable::builtin();
     let context = ConversionContext::geocentric(table);

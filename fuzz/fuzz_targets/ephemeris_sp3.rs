@@ -2,7 +2,7 @@
 //! ephemeris goes on through validation, interpolation and proper-time integration.
 #![no_main]
 
-use eigenzeit::ephemeris::read_sp3;
+use eigenzeit::trajectory::read_sp3;
 use eigenzeit_fuzz::integrate_all;
 use libfuzzer_sys::fuzz_target;
 

@@ -56,9 +56,9 @@ pub fn integrate_all<F>(read: F)
 where
     F: FnOnce(
         &eigenzeit::physics::time::convert::ConversionContext<'_>,
-    ) -> Result<eigenzeit::ephemeris::Ephemeris, eigenzeit::ephemeris::EphemerisError>,
+    ) -> Result<eigenzeit::trajectory::TrajectorySet, eigenzeit::trajectory::TrajectoryError>,
 {
-    use eigenzeit::ephemeris::{proper_time_of_ephemeris, InterpolationOptions};
+    use eigenzeit::trajectory::{proper_time_of_ephemeris, InterpolationOptions};
     use eigenzeit::physics::gravity::{dot, earth_potential_m2_s2, GravityModel};
     use eigenzeit::physics::proper_time::ProperTimeOptions;
     use eigenzeit::physics::rate::{RateParts, RateReference};

@@ -7,7 +7,6 @@ use super::types::{ObjectOutput, ProperTimeAnswer, SampleOutput, SummaryOutput};
 use crate::api::clock::evaluate::{model_name, reference_name};
 use crate::api::error::ApiError;
 use crate::api::time::types::InstantForms;
-use crate::ephemeris::{proper_time_of_ephemeris, Frame, TrackProperTime};
 use crate::physics::gravity::{dot, earth_potential_m2_s2, GravityModel};
 use crate::physics::proper_time::{relative_to_tcg, ProperTimeOptions};
 use crate::physics::rate::{RateParts, RateReference};
@@ -15,6 +14,7 @@ use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::formats::{day_reading, write_instant, write_iso, ISO_DECIMALS};
 use crate::physics::time::instant::Instant;
 use crate::physics::time::leap_seconds::LeapTable;
+use crate::trajectory::{proper_time_of_ephemeris, Frame, TrackProperTime};
 
 /// The fractional rate against TT split into (velocity, gravity) parts at an inertial state
 /// (IERS Conventions (2010) eq. 10.6, through [`RateParts::from_speed_and_potential`]).

@@ -7,14 +7,14 @@ use crate::api::clock::evaluate::{parse_gravity_model, parse_reference};
 use crate::api::error::ApiError;
 use crate::api::extract::{check_batch_size, parse_json};
 use crate::api::names::{ephemeris_frame_named, one_of, parse_format, parse_scale};
-use crate::ephemeris::json::{from_document, JsonEphemeris, JsonObject, JsonState};
-use crate::ephemeris::{read_oem, read_sp3, Ephemeris, EphemerisError, InterpolationOptions};
 use crate::ops::config::Settings;
 use crate::physics::constants::MAX_GEOCENTRIC_DISTANCE_M;
 use crate::physics::gravity::GravityModel;
 use crate::physics::rate::RateReference;
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::leap_seconds::LeapTable;
+use crate::trajectory::json::{from_document, JsonEphemeris, JsonObject, JsonState};
+use crate::trajectory::{read_oem, read_sp3, InterpolationOptions, TrajectoryError, TrajectorySet};
 
 /// The formats the endpoint reads.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -27,7 +27,7 @@ enum BodyFormat {
 /// A request, read and checked.
 pub struct ProperTimeRequest {
     /// The ephemeris.
-    pub ephemeris: Ephemeris,
+    pub ephemeris: TrajectorySet,
     /// TT or TCG.
     pub reference: RateReference,
     /// The Earth's potential model.
@@ -41,7 +41,7 @@ pub struct ProperTimeRequest {
 }
 
 /// An ephemeris error as a 422 problem naming the line, object and index.
-pub fn ephemeris_problem(error: EphemerisError) -> ApiError {
+pub fn ephemeris_problem(error: TrajectoryError) -> ApiError {
     ApiError::unprocessable(error.code, error.message)
         .with_line(error.line)
         .with_object(error.object, error.index)
@@ -99,7 +99,7 @@ fn check_json_names(input: &EphemerisInput) -> Result<(), ApiError> {
 
 /// Refuses positions beyond the geocentric range of the rate model (the Earth's Hill sphere,
 /// 1.5e9 m), where the Sun's potential, not in the model, dominates.
-fn check_geocentric_range(ephemeris: &Ephemeris) -> Result<(), ApiError> {
+fn check_geocentric_range(ephemeris: &TrajectorySet) -> Result<(), ApiError> {
     for object in &ephemeris.objects {
         for (index, state) in object.states.iter().enumerate() {
             let p = state.position_m;

@@ -2,7 +2,7 @@
 //! Hilla 2010, and "(SP3-d)", Hilla 2016): `#c`/`#d` first line, `##`, `+` satellite lists,
 //! `++` accuracies, `%c` time system, `%f`, `%i`, `/*` comments.
 
-use super::super::error::EphemerisError;
+use super::super::error::TrajectoryError;
 use crate::physics::time::scale::Scale;
 
 /// The time system of an SP3 file, from the first `%c` line (columns 10-12).
@@ -33,10 +33,10 @@ pub struct Sp3Header {
 
 impl Sp3Header {
     /// Reads the first line `#cP2026  5 20  0  0  0.00000000      96 ORBIT IGS20 FIT  XYZ`.
-    pub fn from_first_line(line: &str, number: usize) -> Result<Self, EphemerisError> {
+    pub fn from_first_line(line: &str, number: usize) -> Result<Self, TrajectoryError> {
         let bytes = line.as_bytes();
         if bytes.first() != Some(&b'#') || bytes.get(1) == Some(&b'#') {
-            return Err(EphemerisError::at_line(
+            return Err(TrajectoryError::at_line(
                 "sp3_bad_header",
                 number,
                 "expected the SP3 first line `#cP...` or `#dP...` (columns 1-3: #, version, P or V)",
@@ -46,7 +46,7 @@ impl Sp3Header {
             Some(b'c') => 'c',
             Some(b'd') => 'd',
             _ => {
-                return Err(EphemerisError::at_line(
+                return Err(TrajectoryError::at_line(
                     "sp3_unsupported_version",
                     number,
                     "column 2 of the first line must be the version c or d (SP3-c, SP3-d)",
@@ -56,7 +56,7 @@ impl Sp3Header {
         let has_velocities = match bytes.get(2) {
             Some(b'P') => false,
             Some(b'V') => true,
-            _ => return Err(EphemerisError::at_line(
+            _ => return Err(TrajectoryError::at_line(
                 "sp3_bad_column",
                 number,
                 "column 3 of the first line must be P (positions) or V (positions and velocities)",
@@ -74,11 +74,15 @@ impl Sp3Header {
 
     /// Reads a `+` line: number of satellites in columns 4-6 (first line only), then 17 ids of
     /// three characters from column 10. `  0` and blank ids are padding.
-    pub fn take_satellite_line(&mut self, line: &str, number: usize) -> Result<(), EphemerisError> {
+    pub fn take_satellite_line(
+        &mut self,
+        line: &str,
+        number: usize,
+    ) -> Result<(), TrajectoryError> {
         if self.satellites.is_empty() && self.announced == 0 {
             let count_text = line.get(3..6).unwrap_or("").trim();
             self.announced = count_text.parse::<usize>().map_err(|_| {
-                EphemerisError::at_line(
+                TrajectoryError::at_line(
                     "sp3_bad_column",
                     number,
                     format!("expected the number of satellites in columns 4-6 of the first + line, found {count_text:?}"),
@@ -105,7 +109,7 @@ impl Sp3Header {
         &mut self,
         line: &str,
         number: usize,
-    ) -> Result<(), EphemerisError> {
+    ) -> Result<(), TrajectoryError> {
         if self.time_system_seen {
             return Ok(());
         }
@@ -120,7 +124,7 @@ impl Sp3Header {
             "UTC" => Sp3TimeSystem::Scale(Scale::Utc),
             "GLO" => Sp3TimeSystem::Glonass,
             _ => {
-                return Err(EphemerisError::at_line(
+                return Err(TrajectoryError::at_line(
                     "sp3_unsupported_time_system",
                     number,
                     format!("time system {name:?} in columns 10-12 of the first %c line is not supported; expected GPS, GAL, BDT, QZS, TAI, UTC or GLO"),

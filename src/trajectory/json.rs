@@ -12,9 +12,9 @@
 
 use serde::Deserialize;
 
-use super::error::EphemerisError;
+use super::error::TrajectoryError;
 use super::text::to_storage;
-use super::{Ephemeris, EphemerisState, Frame, ObjectTrack};
+use super::{Frame, ObjectTrack, TrajectorySet, TrajectoryState};
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::formats::{parse_instant, InstantFormat};
 use crate::physics::time::scale::Scale;
@@ -57,10 +57,13 @@ pub struct JsonState {
     pub velocity_m_s: Option<[f64; 3]>,
 }
 
-/// Parses JSON text into an [`Ephemeris`].
-pub fn read_json(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeris, EphemerisError> {
+/// Parses JSON text into a [`TrajectorySet`].
+pub fn read_json(
+    text: &str,
+    context: &ConversionContext<'_>,
+) -> Result<TrajectorySet, TrajectoryError> {
     let document: JsonEphemeris = serde_json::from_str(text).map_err(|error| {
-        EphemerisError::at_line(
+        TrajectoryError::at_line(
             "json_invalid",
             error.line(),
             format!("the JSON ephemeris could not be read: {error}"),
@@ -73,9 +76,9 @@ pub fn read_json(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeri
 pub fn from_document(
     document: &JsonEphemeris,
     context: &ConversionContext<'_>,
-) -> Result<Ephemeris, EphemerisError> {
+) -> Result<TrajectorySet, TrajectoryError> {
     let frame = Frame::from_name(&document.frame).ok_or_else(|| {
-        EphemerisError::new(
+        TrajectoryError::new(
             "unsupported_frame",
             format!(
                 "frame {:?} is not supported; expected GCRF, EME2000, ICRF (inertial) or ITRF... (Earth-fixed)",
@@ -86,11 +89,11 @@ pub fn from_document(
     let scale: Scale = document
         .time_scale
         .parse()
-        .map_err(|e| EphemerisError::new("unknown_scale", format!("time_scale: {e}")))?;
+        .map_err(|e| TrajectoryError::new("unknown_scale", format!("time_scale: {e}")))?;
     let format = match &document.epoch_format {
         Some(name) => name
             .parse::<InstantFormat>()
-            .map_err(|e| EphemerisError::new("unknown_format", format!("epoch_format: {e}")))?,
+            .map_err(|e| TrajectoryError::new("unknown_format", format!("epoch_format: {e}")))?,
         None => InstantFormat::Iso,
     };
     let mut objects = Vec::with_capacity(document.objects.len());
@@ -101,7 +104,7 @@ pub fn from_document(
             .filter(|s| s.velocity_m_s.is_some())
             .count();
         if with_velocity != 0 && with_velocity != object.states.len() {
-            return Err(EphemerisError::new(
+            return Err(TrajectoryError::new(
                 "mixed_velocity",
                 format!(
                     "{with_velocity} of {} states carry velocity_m_s; give it for every state of the object or for none",
@@ -113,14 +116,14 @@ pub fn from_document(
         let mut states = Vec::with_capacity(object.states.len());
         for (index, state) in object.states.iter().enumerate() {
             let epoch = parse_instant(&state.epoch, format, scale, context.table).map_err(|e| {
-                EphemerisError::at_state(
+                TrajectoryError::at_state(
                     "bad_epoch",
                     &object.id,
                     index,
                     format!("cannot read the epoch {:?}: {e}", state.epoch),
                 )
             })?;
-            states.push(EphemerisState {
+            states.push(TrajectoryState {
                 epoch: to_storage(epoch, context),
                 position_m: state.position_m,
                 velocity_m_s: state.velocity_m_s,
@@ -133,5 +136,5 @@ pub fn from_document(
             states,
         });
     }
-    Ok(Ephemeris { objects })
+    Ok(TrajectorySet { objects })
 }

@@ -1,9 +1,9 @@
 //! OEM reader tests. Layout of the samples: CCSDS 502.0-B-2 sections 5.2 and 5.3 (KVN).
 
 use super::*;
-use crate::ephemeris::Frame;
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::scale::Scale;
+use crate::trajectory::Frame;
 
 const SAMPLE: &str = "CCSDS_OEM_VERS = 2.0
 COMMENT invented test message
@@ -57,7 +57,7 @@ META_STOP
 2026-05-20T00:15:00.000 1500.0 6800.0 300.0 -7.0 1.0 0.3
 ";
 
-fn read(text: &str) -> Result<Ephemeris, EphemerisError> {
+fn read(text: &str) -> Result<TrajectorySet, TrajectoryError> {
     let table = LeapTable::builtin();
     read_oem(text, &ConversionContext::geocentric(table))
 }

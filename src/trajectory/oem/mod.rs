@@ -13,9 +13,9 @@
 
 mod metadata;
 
-use super::error::EphemerisError;
+use super::error::TrajectoryError;
 use super::text::{epoch_error, parse_epoch, parse_number, storage_scale, to_storage};
-use super::{Ephemeris, EphemerisState, ObjectTrack};
+use super::{ObjectTrack, TrajectorySet, TrajectoryState};
 use crate::physics::time::convert::ConversionContext;
 use metadata::{MetadataBlock, Segment, HEADER_KEYWORDS};
 
@@ -43,9 +43,12 @@ fn key_value(line: &str) -> Option<(&str, &str)> {
 
 /// Reads an OEM in KVN form. `context` supplies the leap-second table (UTC epochs) and the
 /// TDB series (TDB epochs).
-pub fn read_oem(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeris, EphemerisError> {
+pub fn read_oem(
+    text: &str,
+    context: &ConversionContext<'_>,
+) -> Result<TrajectorySet, TrajectoryError> {
     let text = text.strip_prefix('\u{feff}').unwrap_or(text);
-    let mut ephemeris = Ephemeris::default();
+    let mut ephemeris = TrajectorySet::default();
     let mut section = Section::Start;
     let mut header_seen = (false, false);
     let mut last_line = 0;
@@ -65,7 +68,7 @@ pub fn read_oem(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeris
             Section::Start => match key_value(line) {
                 Some(("CCSDS_OEM_VERS", version)) => {
                     if !matches!(version, "1.0" | "2.0" | "3.0") {
-                        return Err(EphemerisError::at_line(
+                        return Err(TrajectoryError::at_line(
                             "oem_unsupported_version",
                             number,
                             format!("CCSDS_OEM_VERS is {version:?}; expected 1.0, 2.0 or 3.0"),
@@ -85,7 +88,7 @@ pub fn read_oem(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeris
                         Some(("ORIGINATOR", _)) => header_seen.1 = true,
                         Some((key, _)) if HEADER_KEYWORDS.contains(&key) => {}
                         _ => {
-                            return Err(EphemerisError::at_line(
+                            return Err(TrajectoryError::at_line(
                                 "oem_unknown_keyword",
                                 number,
                                 format!("expected a header keyword (CREATION_DATE, ORIGINATOR, MESSAGE_ID, COMMENT) or META_START, found {:?}", clip(line)),
@@ -104,7 +107,7 @@ pub fn read_oem(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeris
                     match key_value(line) {
                         Some((key, value)) => block.take(key, value, number)?,
                         None => {
-                            return Err(EphemerisError::at_line(
+                            return Err(TrajectoryError::at_line(
                                 "oem_bad_metadata_line",
                                 number,
                                 format!("expected KEY = VALUE or META_STOP inside the metadata block, found {:?}", clip(line)),
@@ -139,7 +142,7 @@ pub fn read_oem(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeris
                 if line == "META_START" {
                     start_metadata(number)
                 } else {
-                    return Err(EphemerisError::at_line(
+                    return Err(TrajectoryError::at_line(
                         "oem_unexpected_line",
                         number,
                         format!("after COVARIANCE_STOP expected META_START or the end of the message, found {:?}", clip(line)),
@@ -150,12 +153,12 @@ pub fn read_oem(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeris
     }
     match section {
         Section::Start => Err(version_first(last_line.max(1))),
-        Section::Header => Err(EphemerisError::at_line(
+        Section::Header => Err(TrajectoryError::at_line(
             "oem_missing_keyword",
             last_line,
             "the message ends before any META_START; an OEM needs at least one segment",
         )),
-        Section::Metadata(block) => Err(EphemerisError::at_line(
+        Section::Metadata(block) => Err(TrajectoryError::at_line(
             "oem_missing_keyword",
             last_line,
             format!(
@@ -167,7 +170,7 @@ pub fn read_oem(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeris
             check_segment_not_empty(&segment, count, last_line)?;
             Ok(ephemeris)
         }
-        Section::Covariance(start) => Err(EphemerisError::at_line(
+        Section::Covariance(start) => Err(TrajectoryError::at_line(
             "oem_missing_keyword",
             last_line,
             format!("the covariance block starting at line {start} has no COVARIANCE_STOP"),
@@ -191,18 +194,18 @@ fn clip(line: &str) -> &str {
     }
 }
 
-fn version_first(line: usize) -> EphemerisError {
-    EphemerisError::at_line(
+fn version_first(line: usize) -> TrajectoryError {
+    TrajectoryError::at_line(
         "oem_missing_keyword",
         line,
         "expected CCSDS_OEM_VERS = 2.0 (or 1.0, 3.0) as the first keyword of the message",
     )
 }
 
-fn check_header(seen: (bool, bool), line: usize) -> Result<(), EphemerisError> {
+fn check_header(seen: (bool, bool), line: usize) -> Result<(), TrajectoryError> {
     for (present, keyword) in [(seen.0, "CREATION_DATE"), (seen.1, "ORIGINATOR")] {
         if !present {
-            return Err(EphemerisError::at_line(
+            return Err(TrajectoryError::at_line(
                 "oem_missing_keyword",
                 line,
                 format!("the header has no {keyword}; it is required before the first META_START"),
@@ -216,9 +219,9 @@ fn check_segment_not_empty(
     segment: &Segment,
     count: usize,
     line: usize,
-) -> Result<(), EphemerisError> {
+) -> Result<(), TrajectoryError> {
     if count == 0 {
-        return Err(EphemerisError::at_line(
+        return Err(TrajectoryError::at_line(
             "oem_empty_segment",
             line,
             format!(
@@ -232,14 +235,14 @@ fn check_segment_not_empty(
 
 /// Finds or creates the track of a segment's object, checking that segments agree.
 fn open_track(
-    ephemeris: &mut Ephemeris,
+    ephemeris: &mut TrajectorySet,
     segment: &Segment,
     line: usize,
-) -> Result<(), EphemerisError> {
+) -> Result<(), TrajectoryError> {
     let scale = storage_scale(segment.scale);
     match ephemeris.objects.iter().find(|t| t.id == segment.object) {
         Some(track) if track.frame != segment.frame || track.scale != scale => {
-            Err(EphemerisError::at_line(
+            Err(TrajectoryError::at_line(
                 "oem_inconsistent_segments",
                 line,
                 format!(
@@ -269,13 +272,13 @@ fn open_track(
 /// Reads `epoch x y z vx vy vz [ax ay az]` (km, km/s, km/s^2) and appends the state. The
 /// first line of a segment is dropped when it repeats the previous segment's last epoch.
 fn read_data_line(
-    ephemeris: &mut Ephemeris,
+    ephemeris: &mut TrajectorySet,
     segment: &Segment,
     line: &str,
     number: usize,
     first_in_segment: bool,
     context: &ConversionContext<'_>,
-) -> Result<(), EphemerisError> {
+) -> Result<(), TrajectoryError> {
     let mut fields = line.split_ascii_whitespace();
     let epoch_text = fields.next().unwrap_or("");
     let mut values = [0.0_f64; 6];
@@ -289,7 +292,7 @@ fn read_data_line(
         count += 1;
     }
     if count != 6 && count != 9 {
-        return Err(EphemerisError::at_line(
+        return Err(TrajectoryError::at_line(
             "oem_bad_data_line",
             number,
             format!(
@@ -301,7 +304,7 @@ fn read_data_line(
     let epoch = parse_epoch(epoch_text, segment.scale, context)
         .map_err(|e| epoch_error(&e, number, epoch_text))?;
     if epoch < segment.start || epoch > segment.stop {
-        return Err(EphemerisError::at_line(
+        return Err(TrajectoryError::at_line(
             "oem_epoch_outside_segment",
             number,
             format!("the epoch {epoch_text} lies outside the segment's START_TIME..STOP_TIME"),
@@ -315,7 +318,7 @@ fn read_data_line(
         .rev()
         .find(|t| t.id == segment.object)
     else {
-        return Err(EphemerisError::new(
+        return Err(TrajectoryError::new(
             "oem_internal",
             "no track for the segment (a reader defect; please report it)",
         ));
@@ -323,7 +326,7 @@ fn read_data_line(
     if first_in_segment && track.states.last().map(|s| s.epoch) == Some(epoch) {
         return Ok(());
     }
-    track.states.push(EphemerisState {
+    track.states.push(TrajectoryState {
         epoch,
         position_m: [values[0] * 1e3, values[1] * 1e3, values[2] * 1e3],
         velocity_m_s: Some([values[3] * 1e3, values[4] * 1e3, values[5] * 1e3]),

@@ -1,6 +1,6 @@
 //! Small text helpers shared by the line-oriented readers: numbers, epochs, time systems.
 
-use super::error::EphemerisError;
+use super::error::TrajectoryError;
 use crate::physics::time::convert::{to_tt_attos, ConversionContext};
 use crate::physics::time::error::TimeError;
 use crate::physics::time::formats::{instant_from_day_reading, parse_iso};
@@ -10,15 +10,15 @@ use crate::physics::time::scale::Scale;
 /// Reads one decimal number field (`str::parse::<f64>`), refusing NaN and infinities.
 ///
 /// `what` names the field for the message; `line` is 1-based.
-pub fn parse_number(field: &str, what: &str, line: usize) -> Result<f64, EphemerisError> {
+pub fn parse_number(field: &str, what: &str, line: usize) -> Result<f64, TrajectoryError> {
     match field.parse::<f64>() {
         Ok(value) if value.is_finite() => Ok(value),
-        Ok(_) => Err(EphemerisError::at_line(
+        Ok(_) => Err(TrajectoryError::at_line(
             "not_finite",
             line,
             format!("{what} is {field:?}; expected a finite number"),
         )),
-        Err(_) => Err(EphemerisError::at_line(
+        Err(_) => Err(TrajectoryError::at_line(
             "bad_number",
             line,
             format!("expected a decimal number for {what}, found {field:?}"),
@@ -61,8 +61,8 @@ pub fn to_storage(instant: Instant, context: &ConversionContext<'_>) -> Instant 
 }
 
 /// An engine time error at a line, with the code `bad_epoch`.
-pub fn epoch_error(error: &TimeError, line: usize, found: &str) -> EphemerisError {
-    EphemerisError::at_line(
+pub fn epoch_error(error: &TimeError, line: usize, found: &str) -> TrajectoryError {
+    TrajectoryError::at_line(
         "bad_epoch",
         line,
         format!("cannot read the epoch {found:?}: {error}"),

@@ -4,7 +4,7 @@ use std::fmt;
 
 /// Why an ephemeris was refused: a stable `code`, a message a person can act on, and where.
 #[derive(Debug, Clone, PartialEq, Eq)]
-pub struct EphemerisError {
+pub struct TrajectoryError {
     /// Stable machine-readable code, e.g. `oem_missing_keyword`, `sp3_bad_column`,
     /// `epochs_not_increasing`, `too_few_states`, `gap_too_long`, `below_surface`,
     /// `speed_not_below_c`, `not_finite`.
@@ -19,7 +19,7 @@ pub struct EphemerisError {
     pub index: Option<usize>,
 }
 
-impl EphemerisError {
+impl TrajectoryError {
     /// An error with a code and message and no location.
     pub fn new(code: &'static str, message: impl Into<String>) -> Self {
         Self {
@@ -60,7 +60,7 @@ impl EphemerisError {
     }
 }
 
-impl fmt::Display for EphemerisError {
+impl fmt::Display for TrajectoryError {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
         if let Some(line) = self.line {
             write!(f, "line {line}: ")?;
@@ -76,4 +76,4 @@ impl fmt::Display for EphemerisError {
     }
 }
 
-impl std::error::Error for EphemerisError {}
+impl std::error::Error for TrajectoryError {}

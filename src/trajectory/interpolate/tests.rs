@@ -1,5 +1,4 @@
 use super::*;
-use crate::ephemeris::{proper_time_of_track, EphemerisState, Frame};
 use crate::physics::proper_time::kepler::KeplerOrbit;
 use crate::physics::proper_time::tests::{
     closed_form_s, low_orbit, navigation_orbit, point_mass_rate_tcg,
@@ -8,6 +7,7 @@ use crate::physics::proper_time::{ProperTimeOptions, Trajectory};
 use crate::physics::time::instant::{Instant, ATTOS_PER_SECOND};
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::scale::Scale;
+use crate::trajectory::{proper_time_of_track, Frame, TrajectoryState};
 
 /// 2026-05-20T00:00:00 TT as seconds since J2000.0 (9 636.5 days; calendar arithmetic).
 const START_TT_S: i128 = 832_593_600;
@@ -19,7 +19,7 @@ fn sampled_track(orbit: &KeplerOrbit, step_s: f64, days: f64, velocities: bool) 
             let t_s = i as f64 * step_s;
             let (position_m, velocity_m_s) = orbit.state_at(t_s);
             let attos = (START_TT_S + (t_s as i128)) * ATTOS_PER_SECOND;
-            EphemerisState {
+            TrajectoryState {
                 epoch: Instant::from_count_attos(Scale::Tt, attos),
                 position_m,
                 velocity_m_s: velocities.then_some(velocity_m_s),

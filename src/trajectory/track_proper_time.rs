@@ -6,9 +6,9 @@
 //! relative to TT (or the caller accepts the L_G rate difference of TCG). Earth-fixed tracks are
 //! given inertial-equivalent velocities v + omega_E x r (see [`crate::physics::proper_time`]).
 
-use super::error::EphemerisError;
+use super::error::TrajectoryError;
 use super::interpolate::{InterpolationOptions, Interpolator};
-use super::{Ephemeris, Frame, ObjectTrack};
+use super::{Frame, ObjectTrack, TrajectorySet};
 use crate::physics::proper_time::{
     integrate_proper_time, EarthFixed, ProperTimeError, ProperTimeOptions, ProperTimeSeries,
     Trajectory,
@@ -37,8 +37,8 @@ impl Trajectory for Interpolator {
     }
 }
 
-fn from_physics(error: ProperTimeError, object: &str) -> EphemerisError {
-    EphemerisError {
+fn from_physics(error: ProperTimeError, object: &str) -> TrajectoryError {
+    TrajectoryError {
         code: error.code,
         message: error.message,
         line: None,
@@ -57,14 +57,14 @@ pub fn proper_time_of_track<R>(
     options: &ProperTimeOptions,
     context: &ConversionContext<'_>,
     rate: R,
-) -> Result<TrackProperTime, EphemerisError>
+) -> Result<TrackProperTime, TrajectoryError>
 where
     R: Fn(&[f64; 3], &[f64; 3]) -> (f64, f64),
 {
     let interpolator = Interpolator::from_track(track, interpolation, context)?;
     let (Some(first), Some(last)) = (track.states.first(), track.states.last()) else {
         return Err(
-            EphemerisError::new("too_few_states", "the track has no states").for_object(&track.id),
+            TrajectoryError::new("too_few_states", "the track has no states").for_object(&track.id),
         );
     };
     let (epochs_s, epochs) = match interpolation.output_step_s {
@@ -102,11 +102,11 @@ fn output_grid(
     start: Instant,
     track: &ObjectTrack,
     context: &ConversionContext<'_>,
-) -> Result<(Vec<f64>, Vec<Instant>), EphemerisError> {
+) -> Result<(Vec<f64>, Vec<Instant>), TrajectoryError> {
     let end_s = times_s.last().copied().unwrap_or(0.0);
     let count = (end_s / step_s).floor() as usize + 1;
     if count > MAX_OUTPUT_EPOCHS {
-        return Err(EphemerisError::new(
+        return Err(TrajectoryError::new(
             "bad_option",
             format!(
                 "an output step of {step_s} s over {end_s} s gives {count} epochs; at most {MAX_OUTPUT_EPOCHS} per object"
@@ -123,7 +123,7 @@ fn output_grid(
         .iter()
         .map(|t_s| {
             from_tt_attos(start_tt + seconds_f64_to_attos(*t_s), track.scale, context)
-                .map_err(|e| EphemerisError::new("bad_epoch", e.to_string()).for_object(&track.id))
+                .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(&track.id))
         })
         .collect::<Result<Vec<_>, _>>()?;
     Ok((epochs_s, epochs))
@@ -132,17 +132,17 @@ fn output_grid(
 /// Integrates every track of an ephemeris (see [`proper_time_of_track`]); stops at the first
 /// error, which names the object.
 pub fn proper_time_of_ephemeris<R>(
-    ephemeris: &Ephemeris,
+    ephemeris: &TrajectorySet,
     interpolation: &InterpolationOptions,
     options: &ProperTimeOptions,
     context: &ConversionContext<'_>,
     rate: R,
-) -> Result<Vec<TrackProperTime>, EphemerisError>
+) -> Result<Vec<TrackProperTime>, TrajectoryError>
 where
     R: Fn(&[f64; 3], &[f64; 3]) -> (f64, f64),
 {
     if ephemeris.objects.is_empty() {
-        return Err(EphemerisError::new(
+        return Err(TrajectoryError::new(
             "no_objects",
             "the ephemeris has no objects",
         ));

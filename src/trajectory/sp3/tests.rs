@@ -2,10 +2,10 @@
 //! format descriptions.
 
 use super::*;
-use crate::ephemeris::Frame;
 use crate::physics::time::instant::ATTOS_PER_SECOND;
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::scale::Scale;
+use crate::trajectory::Frame;
 
 fn position_line(id: &str, km: [f64; 3]) -> String {
     format!(
@@ -75,7 +75,7 @@ fn sample(version: char, time_system: &str, velocities: bool) -> String {
     lines.join("\n") + "\n"
 }
 
-fn read(text: &str) -> Result<Ephemeris, EphemerisError> {
+fn read(text: &str) -> Result<TrajectorySet, TrajectoryError> {
     let table = LeapTable::builtin();
     read_sp3(text, &ConversionContext::geocentric(table))
 }

@@ -5,7 +5,7 @@ use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::scale::Scale;
 
-fn read(text: &str) -> Result<super::Ephemeris, super::EphemerisError> {
+fn read(text: &str) -> Result<super::TrajectorySet, super::TrajectoryError> {
     read_json(text, &ConversionContext::geocentric(LeapTable::builtin()))
 }
 

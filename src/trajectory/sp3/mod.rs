@@ -17,9 +17,9 @@ pub mod header;
 
 use std::collections::HashMap;
 
-use super::error::EphemerisError;
+use super::error::TrajectoryError;
 use super::text::parse_number;
-use super::{Ephemeris, EphemerisState, Frame, ObjectTrack};
+use super::{Frame, ObjectTrack, TrajectorySet, TrajectoryState};
 use crate::physics::time::calendar::CalendarDate;
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::decimal::ExactDecimal;
@@ -31,7 +31,10 @@ use header::{normalize_id, Sp3Header, Sp3TimeSystem};
 const BAD_COORDINATE_KM: f64 = 999_999.0;
 
 /// Reads an SP3-c or SP3-d file.
-pub fn read_sp3(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeris, EphemerisError> {
+pub fn read_sp3(
+    text: &str,
+    context: &ConversionContext<'_>,
+) -> Result<TrajectorySet, TrajectoryError> {
     let text = text.strip_prefix('\u{feff}').unwrap_or(text);
     let mut lines = text
         .split('\n')
@@ -99,14 +102,14 @@ pub fn read_sp3(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeris
         }
     }
     if epoch.is_none() {
-        return Err(EphemerisError::at_line(
+        return Err(TrajectoryError::at_line(
             "sp3_no_epochs",
             last_line,
             "the file has no epoch line `*  YYYY MM DD hh mm ss.ssssssss`",
         ));
     }
     if !ended {
-        return Err(EphemerisError::at_line(
+        return Err(TrajectoryError::at_line(
             "sp3_missing_eof",
             last_line,
             "the file ends without the EOF line; it may be truncated",
@@ -118,7 +121,7 @@ pub fn read_sp3(text: &str, context: &ConversionContext<'_>) -> Result<Ephemeris
         }
     }
     tracks.retain(|t| !t.states.is_empty());
-    Ok(Ephemeris { objects: tracks })
+    Ok(TrajectorySet { objects: tracks })
 }
 
 fn new_track(id: &str, header: &Sp3Header) -> ObjectTrack {
@@ -130,17 +133,17 @@ fn new_track(id: &str, header: &Sp3Header) -> ObjectTrack {
     }
 }
 
-fn unexpected(line: &str, number: usize, expected: &str) -> EphemerisError {
+fn unexpected(line: &str, number: usize, expected: &str) -> TrajectoryError {
     let shown: String = line.chars().take(40).collect();
-    EphemerisError::at_line(
+    TrajectoryError::at_line(
         "sp3_unexpected_line",
         number,
         format!("expected {expected}, found {shown:?}"),
     )
 }
 
-fn no_epoch(number: usize) -> EphemerisError {
-    EphemerisError::at_line(
+fn no_epoch(number: usize) -> TrajectoryError {
+    TrajectoryError::at_line(
         "sp3_unexpected_line",
         number,
         "a P or V line before the first epoch line",
@@ -153,9 +156,9 @@ fn read_epoch(
     number: usize,
     header: &Sp3Header,
     context: &ConversionContext<'_>,
-) -> Result<Instant, EphemerisError> {
+) -> Result<Instant, TrajectoryError> {
     let bad = |what: &str| {
-        EphemerisError::at_line(
+        TrajectoryError::at_line(
             "sp3_bad_epoch",
             number,
             format!("expected an epoch line `*  YYYY MM DD hh mm ss.ssssssss`: {what}"),
@@ -204,7 +207,7 @@ fn read_epoch(
 }
 
 /// Reads three fixed-width coordinates (columns 5-18, 19-32, 33-46).
-fn read_triple(line: &str, number: usize, unit: &str) -> Result<[f64; 3], EphemerisError> {
+fn read_triple(line: &str, number: usize, unit: &str) -> Result<[f64; 3], TrajectoryError> {
     let mut values = [0.0; 3];
     for (axis, value) in values.iter_mut().enumerate() {
         let (first, last) = (5 + 14 * axis, 18 + 14 * axis);
@@ -214,7 +217,7 @@ fn read_triple(line: &str, number: usize, unit: &str) -> Result<[f64; 3], Epheme
             ["X", "Y", "Z"][axis]
         );
         if field.is_empty() {
-            return Err(EphemerisError::at_line(
+            return Err(TrajectoryError::at_line(
                 "sp3_bad_column",
                 number,
                 format!("expected {what}, found nothing"),
@@ -243,7 +246,7 @@ fn read_position(
     header: &Sp3Header,
     tracks: &mut Vec<ObjectTrack>,
     by_id: &mut HashMap<String, usize>,
-) -> Result<(), EphemerisError> {
+) -> Result<(), TrajectoryError> {
     let id = satellite_id(line);
     let km = read_triple(line, number, "km")?;
     let absent = km.iter().all(|v| *v == 0.0) || km.iter().any(|v| v.abs() >= BAD_COORDINATE_KM);
@@ -259,7 +262,7 @@ fn read_position(
         }
     };
     if let Some(track) = tracks.get_mut(index) {
-        track.states.push(EphemerisState {
+        track.states.push(TrajectoryState {
             epoch,
             position_m: [km[0] * 1e3, km[1] * 1e3, km[2] * 1e3],
             velocity_m_s: None,
@@ -274,7 +277,7 @@ fn read_velocity(
     epoch: Instant,
     tracks: &mut [ObjectTrack],
     by_id: &HashMap<String, usize>,
-) -> Result<(), EphemerisError> {
+) -> Result<(), TrajectoryError> {
     let id = satellite_id(line);
     let dm_s = read_triple(line, number, "dm/s")?;
     let absent =

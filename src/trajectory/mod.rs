@@ -1,9 +1,9 @@
-//! Ephemeris readers (JSON, CCSDS OEM, SP3) and interpolation.
+//! Readers of uploaded trajectories (JSON, CCSDS OEM, SP3) and their interpolation.
 //!
-//! Every reader returns an [`Ephemeris`]: one [`ObjectTrack`] per object, with positions in
+//! Every reader returns a [`TrajectorySet`]: one [`ObjectTrack`] per object, with positions in
 //! metres and velocities in metres per second, epochs as engine [`Instant`]s, and the frame
 //! family the file declared ([`Frame::Inertial`] or [`Frame::EarthFixed`]). Every refusal is an
-//! [`EphemerisError`] with a stable code and, where it helps, the line, object and state index.
+//! [`TrajectoryError`] with a stable code and, where it helps, the line, object and state index.
 //!
 //! [`interpolate`] validates a track and interpolates it (Lagrange or Hermite);
 //! [`track_proper_time`] connects a track to the proper-time integrator of
@@ -21,7 +21,7 @@ pub mod sp3;
 pub mod text;
 pub mod track_proper_time;
 
-pub use error::EphemerisError;
+pub use error::TrajectoryError;
 pub use interpolate::{validate_track, InterpolationOptions, Interpolator};
 pub use json::read_json;
 pub use oem::read_oem;
@@ -65,7 +65,7 @@ impl Frame {
 
 /// One state of an object: epoch, position and (when the file has it) velocity.
 #[derive(Debug, Clone, Copy, PartialEq)]
-pub struct EphemerisState {
+pub struct TrajectoryState {
     /// The epoch, in the track's scale.
     pub epoch: Instant,
     /// Geocentric position in the track's frame, m.
@@ -84,7 +84,7 @@ pub struct ObjectTrack {
     /// The time scale of the epochs.
     pub scale: Scale,
     /// The states, in file order (checked by [`validate_track`]).
-    pub states: Vec<EphemerisState>,
+    pub states: Vec<TrajectoryState>,
 }
 
 impl ObjectTrack {
@@ -96,7 +96,7 @@ impl ObjectTrack {
 
 /// Everything read from one ephemeris file or document.
 #[derive(Debug, Clone, PartialEq, Default)]
-pub struct Ephemeris {
+pub struct TrajectorySet {
     /// One track per object, in order of first appearance.
     pub objects: Vec<ObjectTrack>,
 }

@@ -1,7 +1,7 @@
 //! Checks of a track before interpolation: finite numbers, above the Earth's surface, slower
 //! than light, strictly increasing epochs, enough states, no long gaps.
 
-use super::super::error::EphemerisError;
+use super::super::error::TrajectoryError;
 use super::super::ObjectTrack;
 use super::InterpolationOptions;
 use crate::physics::constants::{GRS80_SEMI_MINOR_AXIS_M, SPEED_OF_LIGHT_M_S};
@@ -27,12 +27,12 @@ pub fn validate_track(
     track: &ObjectTrack,
     options: &InterpolationOptions,
     context: &ConversionContext<'_>,
-) -> Result<Vec<f64>, EphemerisError> {
+) -> Result<Vec<f64>, TrajectoryError> {
     options.check()?;
     let id = track.id.as_str();
     let needed = options.window(track.has_velocities());
     if track.states.len() < needed {
-        return Err(EphemerisError::new(
+        return Err(TrajectoryError::new(
             "too_few_states",
             format!(
                 "{} states; interpolation with a window of {needed} needs at least {needed}",
@@ -56,7 +56,7 @@ pub fn validate_track(
             .chain(velocity.iter())
             .all(|x| x.is_finite())
         {
-            return Err(EphemerisError::at_state(
+            return Err(TrajectoryError::at_state(
                 "not_finite",
                 id,
                 index,
@@ -65,7 +65,7 @@ pub fn validate_track(
         }
         let radius_m = norm(&state.position_m);
         if radius_m < GRS80_SEMI_MINOR_AXIS_M {
-            return Err(EphemerisError::at_state(
+            return Err(TrajectoryError::at_state(
                 "below_surface",
                 id,
                 index,
@@ -74,7 +74,7 @@ pub fn validate_track(
         }
         let speed_m_s = norm(&velocity);
         if speed_m_s >= SPEED_OF_LIGHT_M_S {
-            return Err(EphemerisError::at_state(
+            return Err(TrajectoryError::at_state(
                 "speed_not_below_c",
                 id,
                 index,
@@ -84,7 +84,7 @@ pub fn validate_track(
         let tt = to_tt_attos(&state.epoch, context);
         if let Some(previous) = previous_tt {
             if tt <= previous {
-                return Err(EphemerisError::at_state(
+                return Err(TrajectoryError::at_state(
                     "epochs_not_increasing",
                     id,
                     index,
@@ -93,7 +93,7 @@ pub fn validate_track(
             }
             let gap_s = attos_difference_s(tt - previous);
             if gap_s > options.max_gap_s {
-                return Err(EphemerisError::at_state(
+                return Err(TrajectoryError::at_state(
                     "gap_too_long",
                     id,
                     index,

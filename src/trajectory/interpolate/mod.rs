@@ -10,7 +10,7 @@ mod validate;
 
 pub use validate::validate_track;
 
-use super::error::EphemerisError;
+use super::error::TrajectoryError;
 use super::ObjectTrack;
 use crate::physics::time::convert::ConversionContext;
 use basis::{hermite, lagrange, window_weights, MAX_POINTS};
@@ -39,9 +39,9 @@ impl Default for InterpolationOptions {
 
 impl InterpolationOptions {
     /// Refuses a window outside 2..=16 or a gap limit that is not positive.
-    pub fn check(&self) -> Result<(), EphemerisError> {
+    pub fn check(&self) -> Result<(), TrajectoryError> {
         if !(2..=MAX_POINTS).contains(&self.points) {
-            return Err(EphemerisError::new(
+            return Err(TrajectoryError::new(
                 "bad_option",
                 format!(
                     "interpolation points is {}; expected 2 to {MAX_POINTS}",
@@ -50,7 +50,7 @@ impl InterpolationOptions {
             ));
         }
         if self.max_gap_s.is_nan() || self.max_gap_s <= 0.0 {
-            return Err(EphemerisError::new(
+            return Err(TrajectoryError::new(
                 "bad_option",
                 format!(
                     "max_gap_s is {}; expected a positive number of seconds",
@@ -60,7 +60,7 @@ impl InterpolationOptions {
         }
         if let Some(step_s) = self.output_step_s {
             if !(step_s.is_finite() && step_s >= 1e-3) {
-                return Err(EphemerisError::new(
+                return Err(TrajectoryError::new(
                     "bad_option",
                     format!("output step is {step_s} s; expected at least 0.001 s"),
                 ));
@@ -103,7 +103,7 @@ impl Interpolator {
         track: &ObjectTrack,
         options: &InterpolationOptions,
         context: &ConversionContext<'_>,
-    ) -> Result<Self, EphemerisError> {
+    ) -> Result<Self, TrajectoryError> {
         let times_s = validate_track(track, options, context)?;
         let positions_m = track.states.iter().map(|s| s.position_m).collect();
         let velocities_m_s = if track.has_velocities() {
@@ -127,7 +127,7 @@ impl Interpolator {
         positions_m: Vec<[f64; 3]>,
         velocities_m_s: Option<Vec<[f64; 3]>>,
         points: usize,
-    ) -> Result<Self, EphemerisError> {
+    ) -> Result<Self, TrajectoryError> {
         let options = InterpolationOptions {
             points,
             ..InterpolationOptions::default()
@@ -139,7 +139,7 @@ impl Interpolator {
                 .as_ref()
                 .is_none_or(|v| v.len() == times_s.len());
         if !lengths_agree || times_s.len() < window {
-            return Err(EphemerisError::new(
+            return Err(TrajectoryError::new(
                 "too_few_states",
                 format!("{} states for a window of {window}", times_s.len()),
             ));
@@ -148,7 +148,7 @@ impl Interpolator {
             .windows(2)
             .any(|pair| pair[1].partial_cmp(&pair[0]) != Some(std::cmp::Ordering::Greater))
         {
-            return Err(EphemerisError::new(
+            return Err(TrajectoryError::new(
                 "epochs_not_increasing",
                 "sample times must be strictly increasing",
             ));

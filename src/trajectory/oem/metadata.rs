@@ -1,7 +1,7 @@
 //! OEM header and metadata keywords (CCSDS 502.0-B-2 sections 5.2.2 and 5.2.3; 502.0-B-3
 //! adds MESSAGE_ID to the header and keeps the metadata keywords).
 
-use super::super::error::EphemerisError;
+use super::super::error::TrajectoryError;
 use super::super::text::{epoch_error, parse_epoch};
 use super::super::Frame;
 use crate::physics::time::convert::ConversionContext;
@@ -68,7 +68,7 @@ pub struct Segment {
 
 impl MetadataBlock {
     /// Takes one `KEY = VALUE` line of the metadata block.
-    pub fn take(&mut self, key: &str, value: &str, line: usize) -> Result<(), EphemerisError> {
+    pub fn take(&mut self, key: &str, value: &str, line: usize) -> Result<(), TrajectoryError> {
         let owned = || Some(value.to_string());
         match key {
             "OBJECT_NAME" => self.object_name = owned(),
@@ -84,7 +84,7 @@ impl MetadataBlock {
             | "INTERPOLATION"
             | "INTERPOLATION_DEGREE" => {}
             _ => {
-                return Err(EphemerisError::at_line(
+                return Err(TrajectoryError::at_line(
                     "oem_unknown_keyword",
                     line,
                     format!(
@@ -101,9 +101,9 @@ impl MetadataBlock {
         self,
         stop_line: usize,
         context: &ConversionContext<'_>,
-    ) -> Result<Segment, EphemerisError> {
+    ) -> Result<Segment, TrajectoryError> {
         let missing = |keyword: &str| {
-            EphemerisError::at_line(
+            TrajectoryError::at_line(
                 "oem_missing_keyword",
                 stop_line,
                 format!(
@@ -136,21 +136,21 @@ impl MetadataBlock {
         let (stop_text, stop_time_line) =
             self.stop_time.clone().ok_or_else(|| missing("STOP_TIME"))?;
         if !center.eq_ignore_ascii_case("EARTH") {
-            return Err(EphemerisError::at_line(
+            return Err(TrajectoryError::at_line(
                 "oem_unsupported_center",
                 self.start_line,
                 format!("CENTER_NAME is {center:?}; only EARTH (geocentric states) is supported"),
             ));
         }
         let frame = frame_of_ref_frame(&frame_name).ok_or_else(|| {
-            EphemerisError::at_line(
+            TrajectoryError::at_line(
                 "oem_unsupported_frame",
                 frame_line,
                 format!("REF_FRAME {frame_name:?} is not supported; expected EME2000, GCRF, ICRF (inertial) or ITRF, ITRF-93, ITRF2000, ITRF2014, ITRF2020 (Earth-fixed)"),
             )
         })?;
         let scale = scale_of_time_system(&system).ok_or_else(|| {
-            EphemerisError::at_line(
+            TrajectoryError::at_line(
                 "oem_unsupported_time_system",
                 system_line,
                 format!("TIME_SYSTEM {system:?} is not supported; expected UTC, TAI, TT, GPS, TDB, TCG or TCB"),
@@ -161,7 +161,7 @@ impl MetadataBlock {
         let stop = parse_epoch(&stop_text, scale, context)
             .map_err(|e| epoch_error(&e, stop_time_line, &stop_text))?;
         if stop < start {
-            return Err(EphemerisError::at_line(
+            return Err(TrajectoryError::at_line(
                 "oem_bad_time_range",
                 stop_time_line,
                 format!("STOP_TIME {stop_text} is before START_TIME {start_text}"),
