@@ -50,7 +50,7 @@ fn main() -> ExitCode {
         None => serve(cli.settings),
         Some(Command::Serve(settings)) => serve(settings),
         Some(Command::Openapi) => {
-            println!("{}", eigenzeit::api::openapi::document_json());
+            println!("{}", eigenzeit::ops::openapi::document_json());
             Ok(())
         }
         Some(Command::Healthcheck { url }) => healthcheck(&url),

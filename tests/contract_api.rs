@@ -156,7 +156,7 @@ fn every_operation_documents_its_answers() {
     // to the document: every operation with a body documents 400, 413, 415 and 422; every
     // 4xx/5xx is a problem+json answer.
     let document: Value =
-        serde_json::from_str(&eigenzeit::api::openapi::document_json()).unwrap_or_default();
+        serde_json::from_str(&eigenzeit::ops::openapi::document_json()).unwrap_or_default();
     let paths = document["paths"].as_object().cloned().unwrap_or_default();
     let mut with_body = 0;
     for (path, item) in paths {

@@ -5,7 +5,7 @@ mod common;
 
 #[test]
 fn committed_document_matches_the_code() {
-    let generated = eigenzeit::api::openapi::document_json();
+    let generated = eigenzeit::ops::openapi::document_json();
     let committed =
         std::fs::read_to_string(concat!(env!("CARGO_MANIFEST_DIR"), "/openapi/openapi.json"))
             .unwrap_or_default();
@@ -24,7 +24,7 @@ async fn served_document_and_docs_page() {
     assert_eq!(status, 200);
     assert!(content_type.starts_with("application/json"));
     let generated: serde_json::Value =
-        serde_json::from_str(&eigenzeit::api::openapi::document_json()).unwrap_or_default();
+        serde_json::from_str(&eigenzeit::ops::openapi::document_json()).unwrap_or_default();
     assert_eq!(served, generated);
     let page = common::client()
         .get(server.url("/docs"))

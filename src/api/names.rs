@@ -355,7 +355,7 @@ pub struct ObserverPositionM;
 impl PartialSchema for ObserverPositionM {
     fn schema() -> RefOr<Schema> {
         vector3(
-            crate::api::time::convert::OBSERVER_RADIUS_RANGE_M.1,
+            crate::physics::time::tdb_series::OBSERVER_RADIUS_RANGE_M.1,
             Bound::AtMost,
             "metres",
             "ITRF position [x, y, z] of an observer near the Earth's surface, metres: its distance from the geocentre must lie in [6 340 000, 6 480 000] m (422 `observer_not_on_ground` otherwise).",

@@ -6,8 +6,9 @@ use utoipa::openapi::schema::{AllOfBuilder, Object, Schema};
 use utoipa::openapi::RefOr;
 use utoipa::{Modify, OpenApi};
 
-/// The API description. Every handler and schema is listed here; a test keeps the committed
-/// `openapi/openapi.json` equal to what this produces.
+/// The API description. Every handler and schema of this layer is listed here; the service
+/// adds its own operations (`crate::ops::openapi`), and a test keeps the committed
+/// `openapi/openapi.json` equal to the whole document.
 #[derive(OpenApi)]
 #[openapi(
     info(
@@ -26,9 +27,6 @@ use utoipa::{Modify, OpenApi};
         crate::api::proper_time::proper_time,
         crate::api::signal::path::signal_path,
         crate::api::signal::two_way::two_way,
-        crate::ops::health::healthz,
-        crate::ops::health::readyz,
-        crate::ops::health::metrics,
     ),
     components(schemas(
         crate::api::error::Problem,
@@ -43,8 +41,7 @@ use utoipa::{Modify, OpenApi};
     tags(
         (name = "time", description = "Time scales: conversions, the scales, the leap-second table"),
         (name = "clock", description = "Clock rates against TT or TCG: state vectors, orbits, ground and lunar sites; comparisons between clocks"),
-        (name = "signal", description = "Signal paths: light time with Sagnac, Shapiro and clock terms; two-way time-transfer Sagnac correction"),
-        (name = "operations", description = "Liveness, readiness, metrics")
+        (name = "signal", description = "Signal paths: light time with Sagnac, Shapiro and clock terms; two-way time-transfer Sagnac correction")
     )
 )]
 pub struct ApiDoc;
@@ -138,13 +135,6 @@ impl Modify for CrossFieldRules {
     }
 }
 
-/// The document as pretty-printed JSON (what `/openapi.json` serves and `eigenzeit openapi` prints).
-pub fn document_json() -> String {
-    ApiDoc::openapi()
-        .to_pretty_json()
-        .unwrap_or_else(|e| format!("{{\"error\": \"{e}\"}}"))
-}
-
 #[cfg(test)]
 mod tests {
     use std::collections::BTreeMap;
@@ -226,7 +216,7 @@ mod tests {
             frequency["maximum"].as_f64(),
             Some(crate::physics::rate::frequency::MAX_NOMINAL_FREQUENCY_HZ)
         );
-        let batch_limit = crate::ops::config::Settings::default().batch_limit as u64;
+        let batch_limit = crate::api::state::Limits::default().batch_limit as u64;
         let epochs = &schemas["ConvertBatchRequest"]["properties"]["epochs"];
         assert_eq!(epochs["maxItems"].as_u64(), Some(batch_limit));
         let items = &schemas["RateRequest"]["properties"]["items"];

@@ -1,20 +1,76 @@
-//! The state shared by every handler: settings, the leap-second table in force, readiness and
-//! metrics. Cloning is cheap (one `Arc`).
+//! The state shared by every handler: the limits the handlers check, the leap-second table in
+//! force and the OpenAPI document. The service (`crate::ops`) builds it from its settings and
+//! hands it over as plain values; nothing here reads the service's configuration. Cloning is
+//! cheap (one `Arc`).
 
-use std::sync::atomic::{AtomicBool, Ordering};
-use std::sync::{Arc, Mutex, RwLock};
+use std::sync::{Arc, RwLock};
 
-use crate::ops::config::Settings;
-use crate::ops::metrics::Metrics;
 use crate::physics::time::leap_seconds::LeapTable;
 
-/// How the last refresh of the leap-second table went.
-#[derive(Debug, Clone, Default)]
-pub struct LeapRefreshStatus {
-    /// Unix time of the last successful refresh, if any.
-    pub last_success_unix_s: Option<u64>,
-    /// The last failure's message, cleared by a success.
-    pub last_error: Option<String>,
+/// The default of [`Limits::batch_limit`], and the `maxItems` the OpenAPI document states for
+/// every batch.
+pub const DEFAULT_BATCH_LIMIT: usize = 100_000;
+
+/// The default of [`Limits::max_ephemeris_gap_s`], seconds.
+pub const DEFAULT_MAX_EPHEMERIS_GAP_S: f64 = 3_600.0;
+
+/// What the handlers accept, set by the service.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Limits {
+    /// Most items (epochs, rate subjects, ephemeris states) in one request.
+    pub batch_limit: usize,
+    /// Longest gap between ephemeris states accepted when the request names none, seconds.
+    pub max_ephemeris_gap_s: f64,
+}
+
+impl Default for Limits {
+    fn default() -> Self {
+        Self {
+            batch_limit: DEFAULT_BATCH_LIMIT,
+            max_ephemeris_gap_s: DEFAULT_MAX_EPHEMERIS_GAP_S,
+        }
+    }
+}
+
+/// The leap-second table in force, shared between the handlers (who read it) and whoever
+/// refreshes it. Clones share one table.
+#[derive(Debug, Clone)]
+pub struct LeapTableHandle {
+    table: Arc<RwLock<Arc<LeapTable>>>,
+}
+
+impl LeapTableHandle {
+    /// A handle holding `table`.
+    pub fn new(table: LeapTable) -> Self {
+        Self {
+            table: Arc::new(RwLock::new(Arc::new(table))),
+        }
+    }
+
+    /// The table in force (a snapshot: a refresh does not change it under a request).
+    pub fn current(&self) -> Arc<LeapTable> {
+        match self.table.read() {
+            Ok(guard) => Arc::clone(&guard),
+            Err(poisoned) => Arc::clone(&poisoned.into_inner()),
+        }
+    }
+
+    /// Replaces the table for every clone of the handle.
+    pub fn replace(&self, table: LeapTable) {
+        let table = Arc::new(table);
+        match self.table.write() {
+            Ok(mut guard) => *guard = table,
+            Err(poisoned) => *poisoned.into_inner() = table,
+        }
+    }
+}
+
+/// The current time as Unix seconds (0 when the system clock reads before 1970).
+pub fn unix_now_s() -> f64 {
+    std::time::SystemTime::now()
+        .duration_since(std::time::UNIX_EPOCH)
+        .map(|d| d.as_secs_f64())
+        .unwrap_or(0.0)
 }
 
 /// Shared state; clone freely.
@@ -24,77 +80,36 @@ pub struct AppState {
 }
 
 struct Inner {
-    settings: Settings,
-    leap_table: RwLock<Arc<LeapTable>>,
-    leap_refresh: Mutex<LeapRefreshStatus>,
-    ready: AtomicBool,
-    metrics: Metrics,
+    limits: Limits,
+    leap_table: LeapTableHandle,
+    openapi_json: String,
 }
 
 impl AppState {
-    /// New state with the given settings and leap-second table, ready to serve.
-    pub fn new(settings: Settings, leap_table: LeapTable) -> Self {
+    /// State with the given limits, leap-second table and OpenAPI document (served as
+    /// `/openapi.json`: the service's whole document, which this layer does not assemble).
+    pub fn new(limits: Limits, leap_table: LeapTableHandle, openapi_json: String) -> Self {
         Self {
             inner: Arc::new(Inner {
-                settings,
-                leap_table: RwLock::new(Arc::new(leap_table)),
-                leap_refresh: Mutex::new(LeapRefreshStatus::default()),
-                ready: AtomicBool::new(true),
-                metrics: Metrics::new(),
+                limits,
+                leap_table,
+                openapi_json,
             }),
         }
     }
 
-    /// The settings the service runs with.
-    pub fn settings(&self) -> &Settings {
-        &self.inner.settings
+    /// The limits the handlers check.
+    pub fn limits(&self) -> &Limits {
+        &self.inner.limits
     }
 
     /// The leap-second table in force (a snapshot: a refresh does not change it under a request).
     pub fn leap_table(&self) -> Arc<LeapTable> {
-        match self.inner.leap_table.read() {
-            Ok(guard) => Arc::clone(&guard),
-            Err(poisoned) => Arc::clone(&poisoned.into_inner()),
-        }
+        self.inner.leap_table.current()
     }
 
-    /// Replaces the leap-second table.
-    pub fn set_leap_table(&self, table: LeapTable) {
-        let table = Arc::new(table);
-        match self.inner.leap_table.write() {
-            Ok(mut guard) => *guard = table,
-            Err(poisoned) => *poisoned.into_inner() = table,
-        }
-    }
-
-    /// The status of the leap-second refresh.
-    pub fn leap_refresh_status(&self) -> LeapRefreshStatus {
-        match self.inner.leap_refresh.lock() {
-            Ok(guard) => guard.clone(),
-            Err(poisoned) => poisoned.into_inner().clone(),
-        }
-    }
-
-    /// Records the outcome of a leap-second refresh.
-    pub fn set_leap_refresh_status(&self, status: LeapRefreshStatus) {
-        match self.inner.leap_refresh.lock() {
-            Ok(mut guard) => *guard = status,
-            Err(poisoned) => *poisoned.into_inner() = status,
-        }
-    }
-
-    /// Whether the service takes new work (false while draining).
-    pub fn is_ready(&self) -> bool {
-        self.inner.ready.load(Ordering::SeqCst)
-    }
-
-    /// Marks the service ready or draining.
-    pub fn set_ready(&self, ready: bool) {
-        self.inner.ready.store(ready, Ordering::SeqCst);
-    }
-
-    /// The service's metrics.
-    pub fn metrics(&self) -> &Metrics {
-        &self.inner.metrics
+    /// The OpenAPI document as JSON text.
+    pub fn openapi_json(&self) -> &str {
+        &self.inner.openapi_json
     }
 }

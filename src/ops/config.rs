@@ -6,6 +6,8 @@ use std::time::Duration;
 
 use clap::{Args, Parser, Subcommand, ValueEnum};
 
+use crate::api::state::{Limits, DEFAULT_BATCH_LIMIT, DEFAULT_MAX_EPHEMERIS_GAP_S};
+
 /// Relativistic clock and time-scale service.
 #[derive(Debug, Parser)]
 #[command(
@@ -86,7 +88,7 @@ pub struct Settings {
     #[arg(long, env = "EIGENZEIT_REQUEST_TIMEOUT_S", default_value_t = 30.0)]
     pub request_timeout_s: f64,
     /// Most items (epochs, rate subjects, ephemeris states) in one request.
-    #[arg(long, env = "EIGENZEIT_BATCH_LIMIT", default_value_t = 100_000)]
+    #[arg(long, env = "EIGENZEIT_BATCH_LIMIT", default_value_t = DEFAULT_BATCH_LIMIT)]
     pub batch_limit: usize,
     /// On SIGTERM/SIGINT, how long in-flight requests may take to finish, in seconds.
     #[arg(long, env = "EIGENZEIT_DRAIN_TIMEOUT_S", default_value_t = 20.0)]
@@ -112,7 +114,7 @@ pub struct Settings {
     )]
     pub leap_seconds_refresh_s: f64,
     /// Longest gap between ephemeris states accepted, in seconds.
-    #[arg(long, env = "EIGENZEIT_MAX_EPHEMERIS_GAP_S", default_value_t = 3_600.0)]
+    #[arg(long, env = "EIGENZEIT_MAX_EPHEMERIS_GAP_S", default_value_t = DEFAULT_MAX_EPHEMERIS_GAP_S)]
     pub max_ephemeris_gap_s: f64,
 }
 
@@ -124,19 +126,27 @@ impl Default for Settings {
             log_level: "info".to_string(),
             body_limit_bytes: 64 * 1024 * 1024,
             request_timeout_s: 30.0,
-            batch_limit: 100_000,
+            batch_limit: DEFAULT_BATCH_LIMIT,
             drain_timeout_s: 20.0,
             shutdown_delay_s: 0.0,
             cors_origins: Vec::new(),
             leap_seconds_file: None,
             leap_seconds_url: None,
             leap_seconds_refresh_s: 86_400.0,
-            max_ephemeris_gap_s: 3_600.0,
+            max_ephemeris_gap_s: DEFAULT_MAX_EPHEMERIS_GAP_S,
         }
     }
 }
 
 impl Settings {
+    /// The limits the API's handlers check.
+    pub fn limits(&self) -> Limits {
+        Limits {
+            batch_limit: self.batch_limit,
+            max_ephemeris_gap_s: self.max_ephemeris_gap_s,
+        }
+    }
+
     /// Checks values that clap cannot (positive, finite durations).
     pub fn validate(&self) -> Result<(), String> {
         for (name, value) in [

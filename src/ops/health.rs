@@ -3,12 +3,15 @@
 use axum::extract::State;
 use axum::http::{header, StatusCode};
 use axum::response::{IntoResponse, Response};
-use axum::Json;
+use axum::routing::get;
+use axum::{Json, Router};
 use serde::Serialize;
 use utoipa::ToSchema;
 
-use crate::api::state::AppState;
-use crate::ops::metrics::Gauges;
+use crate::api::state::unix_now_s;
+
+use super::metrics::Gauges;
+use super::state::ServiceState;
 
 /// Liveness answer.
 #[derive(Debug, Serialize, ToSchema)]
@@ -55,27 +58,17 @@ pub async fn healthz() -> Json<Health> {
     })
 }
 
-fn leap_readiness(state: &AppState) -> LeapReadiness {
+fn leap_readiness(state: &ServiceState) -> LeapReadiness {
     let table = state.leap_table();
     let refresh = state.leap_refresh_status();
     let expiry = crate::physics::time::calendar::CalendarDate::from_mjd(table.expiry_mjd());
     LeapReadiness {
         source: table.source().to_string(),
         expires: expiry.to_string(),
-        expires_in_days: days_to_expiry(table.expiry_mjd()),
+        expires_in_days: table.days_to_expiry(unix_now_s()),
         last_refresh_unix_s: refresh.last_success_unix_s,
         last_refresh_error: refresh.last_error,
     }
-}
-
-/// Days from now to the start of `expiry_mjd` (UTC).
-pub fn days_to_expiry(expiry_mjd: i64) -> f64 {
-    let now_s = std::time::SystemTime::now()
-        .duration_since(std::time::UNIX_EPOCH)
-        .map(|d| d.as_secs_f64())
-        .unwrap_or(0.0);
-    let now_mjd = 40_587.0 + now_s / 86_400.0;
-    expiry_mjd as f64 - now_mjd
 }
 
 /// Readiness: 200 while taking work, 503 while draining before shutdown.
@@ -83,7 +76,7 @@ pub fn days_to_expiry(expiry_mjd: i64) -> f64 {
     responses(
         (status = 200, description = "Ready for work", body = Readiness),
         (status = 503, description = "Draining before shutdown", body = Readiness)))]
-pub async fn readyz(State(state): State<AppState>) -> Response {
+pub async fn readyz(State(state): State<ServiceState>) -> Response {
     let ready = state.is_ready();
     let body = Readiness {
         status: if ready { "ready" } else { "draining" }.to_string(),
@@ -100,11 +93,11 @@ pub async fn readyz(State(state): State<AppState>) -> Response {
 /// Prometheus metrics in the text exposition format.
 #[utoipa::path(get, path = "/metrics", tag = "operations",
     responses((status = 200, description = "Prometheus text format 0.0.4", body = String, content_type = "text/plain")))]
-pub async fn metrics(State(state): State<AppState>) -> Response {
+pub async fn metrics(State(state): State<ServiceState>) -> Response {
     let table = state.leap_table();
     let gauges = Gauges {
         leap_source: table.source().to_string(),
-        leap_expiry_days: days_to_expiry(table.expiry_mjd()),
+        leap_expiry_days: table.days_to_expiry(unix_now_s()),
         ready: state.is_ready(),
     };
     (
@@ -115,4 +108,13 @@ pub async fn metrics(State(state): State<AppState>) -> Response {
         state.metrics().render(&gauges),
     )
         .into_response()
+}
+
+/// Routes `/healthz`, `/readyz` and `/metrics`.
+pub fn router(state: ServiceState) -> Router {
+    Router::new()
+        .route("/healthz", get(healthz))
+        .route("/readyz", get(readyz))
+        .route("/metrics", get(metrics))
+        .with_state(state)
 }

@@ -3,10 +3,10 @@
 
 use std::time::Duration;
 
-use crate::api::state::AppState;
 use crate::physics::time::leap_seconds::LeapTable;
 
 use super::config::Settings;
+use super::state::ServiceState;
 
 /// The table to start with: the file named in the settings, or the built-in table. A file that
 /// cannot be read or parsed is an error: the service must not start on wrong data.
@@ -62,7 +62,7 @@ fn not_older(fetched: LeapTable, in_force: &LeapTable, url: &str) -> Result<Leap
 
 /// One refresh: a valid table, not older than the one in force, replaces it; a failure keeps
 /// the table in force and is reported in the log, the metrics and `/readyz`.
-pub async fn refresh_once(state: &AppState, client: &reqwest::Client, url: &str) {
+pub async fn refresh_once(state: &ServiceState, client: &reqwest::Client, url: &str) {
     let mut status = state.leap_refresh_status();
     let fetched = fetch_table(client, url)
         .await
@@ -93,7 +93,7 @@ const MIN_INTERVAL: Duration = Duration::from_millis(10);
 
 /// Polls the configured URL forever (first poll at once); a slow answer delays the next poll
 /// rather than causing a burst of polls.
-pub async fn poll_forever(state: AppState, url: String, interval: Duration) {
+pub async fn poll_forever(state: ServiceState, url: String, interval: Duration) {
     let client = match reqwest::Client::builder()
         .timeout(Duration::from_secs(30))
         .build()

@@ -7,9 +7,9 @@ use axum::http::{HeaderValue, Method, StatusCode};
 use axum::middleware::Next;
 use axum::response::{IntoResponse, Response};
 
+use super::config::duration_from_s;
+use super::state::ServiceState;
 use crate::api::error::ApiError;
-use crate::api::state::AppState;
-use crate::ops::config::duration_from_s;
 
 /// Header carrying the request id, taken from the caller or generated.
 pub const REQUEST_ID_HEADER: &str = "x-request-id";
@@ -39,7 +39,7 @@ fn request_id(request: &Request) -> HeaderValue {
 /// log line) exactly once, when it finishes or when its future is dropped because the client
 /// went away.
 struct InFlight {
-    state: AppState,
+    state: ServiceState,
     started: Instant,
     id: HeaderValue,
     method: Method,
@@ -48,7 +48,7 @@ struct InFlight {
 }
 
 impl InFlight {
-    fn begin(state: AppState, id: HeaderValue, method: Method, route: String) -> Self {
+    fn begin(state: ServiceState, id: HeaderValue, method: Method, route: String) -> Self {
         state.metrics().add_in_flight(1);
         Self {
             state,
@@ -93,7 +93,7 @@ impl Drop for InFlight {
 }
 
 /// Wraps every request: assigns the request id, bounds the time, counts and logs it.
-pub async fn observe(State(state): State<AppState>, request: Request, next: Next) -> Response {
+pub async fn observe(State(state): State<ServiceState>, request: Request, next: Next) -> Response {
     let id = request_id(&request);
     let route = request
         .extensions()
@@ -126,8 +126,12 @@ mod tests {
     use crate::ops::config::Settings;
     use crate::physics::time::leap_seconds::LeapTable;
 
-    fn state() -> AppState {
-        AppState::new(Settings::default(), LeapTable::builtin().clone())
+    fn state() -> ServiceState {
+        ServiceState::new(
+            Settings::default(),
+            LeapTable::builtin().clone(),
+            String::new(),
+        )
     }
 
     #[test]

@@ -5,10 +5,9 @@ use std::future::Future;
 
 use tokio::net::TcpListener;
 
-use crate::api::state::AppState;
-
 use super::config::{duration_from_s, Settings};
 use super::leap_source;
+use super::state::ServiceState;
 
 /// Resolves on SIGTERM or SIGINT.
 pub async fn shutdown_signal() {
@@ -38,7 +37,7 @@ pub async fn shutdown_signal() {
 /// early with the error if the server stops by itself.
 pub async fn serve(
     listener: TcpListener,
-    state: AppState,
+    state: ServiceState,
     shutdown: impl Future<Output = ()> + Send + 'static,
 ) -> std::io::Result<()> {
     let settings = state.settings().clone();
@@ -47,7 +46,7 @@ pub async fn serve(
         tokio::spawn(leap_source::poll_forever(state.clone(), url, interval))
     });
     let (begin_drain, drain_started) = tokio::sync::watch::channel(false);
-    let app = crate::api::app(state.clone());
+    let app = super::app(state.clone());
     let server = axum::serve(listener, app).with_graceful_shutdown(async move {
         let mut receiver = drain_started;
         let _ = receiver.wait_for(|draining| *draining).await;
@@ -100,7 +99,7 @@ pub async fn run(settings: Settings) -> Result<(), String> {
     settings.validate()?;
     super::telemetry::init_logging(&settings);
     let table = leap_source::initial_table(&settings)?;
-    let expires_in_days = super::health::days_to_expiry(table.expiry_mjd());
+    let expires_in_days = table.days_to_expiry(crate::api::state::unix_now_s());
     tracing::info!(
         source = table.source(),
         expiry_mjd = table.expiry_mjd(),
@@ -119,7 +118,7 @@ pub async fn run(settings: Settings) -> Result<(), String> {
         .map_err(|e| format!("cannot listen on {}: {e}", settings.addr))?;
     let local = listener.local_addr().map_err(|e| e.to_string())?;
     tracing::info!(addr = %local, "eigenzeit serving");
-    let state = AppState::new(settings, table);
+    let state = ServiceState::new(settings, table, super::openapi::document_json());
     serve(listener, state, shutdown_signal())
         .await
         .map_err(|e| format!("server error: {e}"))?;

@@ -7,7 +7,7 @@ use crate::physics::constants::{
     EARTH_ROTATION_RAD_S, GRS80_FLATTENING, GRS80_GM_M3_S2, GRS80_NORMAL_GRAVITY_EQUATOR_M_S2,
     GRS80_NORMAL_GRAVITY_POLE_M_S2, GRS80_SEMI_MAJOR_AXIS_M, MAX_DEPTH_BELOW_SURFACE_M,
 };
-use crate::physics::rate::error::{
+use crate::physics::rate_error::{
     require_finite, require_finite_vector, require_latitude_deg, require_longitude_deg, RateError,
     RateErrorKind,
 };

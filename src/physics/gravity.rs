@@ -8,9 +8,7 @@
 use crate::physics::constants::{
     EARTH_ROTATION_RAD_S, EQUATORIAL_RADIUS_EARTH_M, GM_EARTH_M3_S2, GM_MOON_M3_S2, J2_EARTH,
 };
-use crate::physics::rate::error::{
-    require_finite, require_finite_vector, RateError, RateErrorKind,
-};
+use crate::physics::rate_error::{require_finite, require_finite_vector, RateError, RateErrorKind};
 
 /// Smallest distance from a body's centre at which a potential is evaluated, m. Below it the
 /// point-mass potential is meaningless (and 1/r would overflow); callers apply tighter bounds.

@@ -8,5 +8,6 @@ pub mod geodesy;
 pub mod gravity;
 pub mod proper_time;
 pub mod rate;
+pub mod rate_error;
 pub mod signal;
 pub mod time;

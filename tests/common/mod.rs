@@ -5,8 +5,8 @@ pub mod kepler;
 
 pub mod process;
 
-use eigenzeit::api::state::AppState;
 use eigenzeit::ops::config::Settings;
+use eigenzeit::ops::ServiceState;
 use eigenzeit::physics::time::leap_seconds::LeapTable;
 use tokio::net::TcpListener;
 use tokio::sync::oneshot;
@@ -16,7 +16,7 @@ pub struct TestServer {
     /// `http://127.0.0.1:PORT`.
     pub base: String,
     /// The server's state (to inspect readiness, the table in force, ...).
-    pub state: AppState,
+    pub state: ServiceState,
     stop: Option<oneshot::Sender<()>>,
     /// The serve task; resolves after shutdown and drain.
     pub task: Option<tokio::task::JoinHandle<std::io::Result<()>>>,
@@ -41,7 +41,7 @@ impl TestServer {
             .await
             .expect("bind loopback");
         let address = listener.local_addr().expect("local address");
-        let state = AppState::new(settings, table);
+        let state = ServiceState::new(settings, table, eigenzeit::ops::openapi::document_json());
         let (stop, stopped) = oneshot::channel::<()>();
         let shutdown = async move {
             let _ = stopped.await;

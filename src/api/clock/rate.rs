@@ -26,7 +26,7 @@ pub async fn rate(
 ) -> Result<Json<RateBatchAnswer>, ApiError> {
     check_batch_size(
         request.items.len(),
-        state.settings().batch_limit,
+        state.limits().batch_limit,
         "items",
         "item",
     )?;

@@ -8,13 +8,13 @@
 
 use std::sync::OnceLock;
 
+use axum::extract::State;
 use axum::http::header;
 use axum::response::{IntoResponse, Response};
 use axum::routing::get;
 use axum::Router;
 use serde::Serialize;
 
-use super::openapi::document_json;
 use super::problem_codes::PROBLEM_CODES;
 use super::state::AppState;
 
@@ -39,11 +39,6 @@ const PROBLEM_CODES_MARKER: &str = "<!-- problem-codes -->";
 const CONTENT_SECURITY_POLICY: &str = "default-src 'none'; script-src 'unsafe-inline'; \
      style-src 'unsafe-inline'; img-src data:; connect-src 'self'; base-uri 'none'; \
      form-action 'none'; frame-ancestors 'none'";
-
-fn cached_document() -> &'static str {
-    static DOCUMENT: OnceLock<String> = OnceLock::new();
-    DOCUMENT.get_or_init(document_json)
-}
 
 /// `text` escaped for HTML text and attribute values.
 fn escape_html(text: &str) -> String {
@@ -101,10 +96,10 @@ fn page_html() -> &'static str {
     })
 }
 
-async fn openapi_json() -> Response {
+async fn openapi_json(State(state): State<AppState>) -> Response {
     (
         [(header::CONTENT_TYPE, "application/json")],
-        cached_document(),
+        state.openapi_json().to_string(),
     )
         .into_response()
 }

@@ -7,7 +7,7 @@ use crate::api::clock::evaluate::{parse_gravity_model, parse_reference};
 use crate::api::error::ApiError;
 use crate::api::extract::{check_batch_size, parse_json};
 use crate::api::names::{ephemeris_frame_named, one_of, parse_format, parse_scale};
-use crate::ops::config::Settings;
+use crate::api::state::Limits;
 use crate::physics::constants::MAX_GEOCENTRIC_DISTANCE_M;
 use crate::physics::gravity::GravityModel;
 use crate::physics::rate::RateReference;
@@ -237,7 +237,7 @@ pub fn read_request(
     query: ProperTimeOptionsInput,
     body: &[u8],
     table: &LeapTable,
-    settings: &Settings,
+    settings: &Limits,
 ) -> Result<ProperTimeRequest, ApiError> {
     let text = std::str::from_utf8(body).map_err(|e| {
         ApiError::bad_request(

@@ -67,7 +67,7 @@ pub async fn proper_time(
     })?;
     let csv = wants_csv(&headers);
     let table = state.leap_table();
-    let settings = state.settings().clone();
+    let settings = state.limits().clone();
     let work = move || -> Result<Response, ApiError> {
         let request = body::read_request(&headers, query, &body, &table, &settings)?;
         let answer = answer::compute(&request, &table)?;

@@ -20,11 +20,7 @@ use crate::physics::time::formats::{
 use crate::physics::time::instant::{attos_to_seconds_f64, Instant};
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::scale::Scale;
-use crate::physics::time::tdb_series::TopocentricObserver;
-
-/// Distance from the geocentre accepted for an observer, metres (about -15 km to +100 km
-/// around the Earth's surface; the topocentric TDB term is for observers on the ground).
-pub const OBSERVER_RADIUS_RANGE_M: (f64, f64) = (6_340_000.0, 6_480_000.0);
+use crate::physics::time::tdb_series::{TopocentricObserver, OBSERVER_RADIUS_RANGE_M};
 
 fn parse_targets<'a>(
     names: impl Iterator<Item = &'a str>,
@@ -222,7 +218,7 @@ pub async fn convert_post(
     let format = parse_format(request.format.as_deref(), "format")?;
     check_batch_size(
         request.epochs.len(),
-        state.settings().batch_limit,
+        state.limits().batch_limit,
         "epochs",
         "epoch",
     )?;

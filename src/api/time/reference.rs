@@ -12,8 +12,8 @@ use utoipa::ToSchema;
 use super::convert::convert_one;
 use super::types::Conversion;
 use crate::api::error::ApiError;
+use crate::api::state::unix_now_s;
 use crate::api::state::AppState;
-use crate::ops::health::days_to_expiry;
 use crate::physics::time::calendar::CalendarDate;
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::formats::{gnss_week_origin_mjd, InstantFormat};
@@ -175,7 +175,7 @@ pub async fn leap_seconds(State(state): State<AppState>, headers: HeaderMap) -> 
         source: table.source().to_string(),
         expires: iso_date(table.expiry_mjd()),
         expires_mjd: table.expiry_mjd(),
-        expires_in_days: (days_to_expiry(table.expiry_mjd()) * 1000.0).round() / 1000.0,
+        expires_in_days: (table.days_to_expiry(unix_now_s()) * 1000.0).round() / 1000.0,
         entries,
     };
     // The countdown changes with every request; the ETag covers the table itself.

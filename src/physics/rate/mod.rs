@@ -28,7 +28,7 @@
 //! [`ground`] (a site fixed on the rotating Earth), [`lunar`] (a site on the Moon's surface),
 //! [`frequency`] (nominal frequency to offset and factory setting).
 
-pub mod error;
+pub use super::rate_error as error;
 pub mod frequency;
 pub mod ground;
 pub mod lunar;

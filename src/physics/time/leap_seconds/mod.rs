@@ -132,6 +132,14 @@ impl LeapTable {
         self.expiry_mjd
     }
 
+    /// Days from the instant `unix_s` (seconds since 1970-01-01 0h UTC, leap seconds not
+    /// counted, as POSIX time) to the start of the expiry day; negative once expired. MJD of
+    /// 1970-01-01 is 40587 (Explanatory Supplement to the Astronomical Almanac, common practice).
+    pub fn days_to_expiry(&self, unix_s: f64) -> f64 {
+        let now_mjd = crate::physics::time::calendar::UNIX_EPOCH_MJD as f64 + unix_s / 86_400.0;
+        self.expiry_mjd as f64 - now_mjd
+    }
+
     /// True when UTC day `utc_mjd` is on or after the expiry date, where answers need a
     /// warning that the table may be out of date.
     pub fn is_beyond_expiry(&self, utc_mjd: i64) -> bool {

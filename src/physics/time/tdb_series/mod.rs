@@ -36,6 +36,11 @@ mod tests;
 
 use crate::physics::constants::{DAYS_PER_JULIAN_MILLENNIUM, SECONDS_PER_DAY};
 
+/// Distance from the geocentre where the topocentric term is valid, metres (about -15 km to
+/// +100 km around the Earth's surface: the term of ERFA `eraDtdb` is for observers on the
+/// ground; common practice for its range).
+pub const OBSERVER_RADIUS_RANGE_M: (f64, f64) = (6_340_000.0, 6_480_000.0);
+
 /// Observer location for the topocentric part (as ERFA `eraDtdb`'s `elong`, `u`, `v`).
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct TopocentricObserver {
