@@ -101,10 +101,7 @@ pub async fn metrics(State(state): State<ServiceState>) -> Response {
         ready: state.is_ready(),
     };
     (
-        [(
-            header::CONTENT_TYPE,
-            "text/plain; version=0.0.4; charset=utf-8",
-        )],
+        [(header::CONTENT_TYPE, super::metrics::CONTENT_TYPE)],
         state.metrics().render(&gauges),
     )
         .into_response()

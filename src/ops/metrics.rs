@@ -1,29 +1,46 @@
-//! Prometheus metrics, kept in-process and rendered in the text exposition format (0.0.4).
+//! Prometheus metrics, kept in-process with the `prometheus-client` crate and rendered in the
+//! Prometheus text exposition format (0.0.4). Names, types and labels are the service's
+//! contract with its dashboards: change none without saying so in the README.
 
-use std::collections::BTreeMap;
-use std::fmt::Write as _;
-use std::sync::atomic::{AtomicI64, AtomicU64, Ordering};
-use std::sync::Mutex;
+use prometheus_client::encoding::prometheus_text::encode;
+use prometheus_client::encoding::EncodeLabelSet;
+use prometheus_client::metrics::counter::Counter;
+use prometheus_client::metrics::family::Family;
+use prometheus_client::metrics::gauge::{ConstGauge, Gauge};
+use prometheus_client::metrics::histogram::Histogram;
+use prometheus_client::metrics::info::Info;
+use prometheus_client::registry::Registry;
+
+/// The media type of [`Metrics::render`]'s text (Prometheus text format 0.0.4).
+pub const CONTENT_TYPE: &str = prometheus_client::encoding::prometheus_text::CONTENT_TYPE;
 
 /// Upper bounds of the latency histogram buckets, in seconds.
 const LATENCY_BUCKETS_S: [f64; 14] = [
     0.0001, 0.00025, 0.0005, 0.001, 0.0025, 0.005, 0.01, 0.025, 0.05, 0.1, 0.25, 1.0, 5.0, 30.0,
 ];
 
-#[derive(Debug, Default, Clone)]
-struct RouteStats {
-    count: u64,
-    sum_s: f64,
-    buckets: [u64; LATENCY_BUCKETS_S.len()],
+/// The labels of the request counter and histogram, in this order.
+#[derive(Debug, Clone, Hash, PartialEq, Eq, EncodeLabelSet)]
+struct RequestLabels {
+    route: String,
+    method: String,
+    status: u16,
 }
 
-/// Counters and histograms of the service.
-#[derive(Debug, Default)]
+fn latency_histogram() -> Histogram {
+    Histogram::new(LATENCY_BUCKETS_S)
+}
+
+/// Counters and histograms of the service. (`prometheus-client` adds `_total` to counter
+/// names and `_info` to info names, and a `.` to each help text.)
+#[derive(Debug)]
 pub struct Metrics {
-    requests: Mutex<BTreeMap<(String, String, u16), RouteStats>>,
-    in_flight: AtomicI64,
-    leap_refresh_failures: AtomicU64,
-    leap_refresh_successes: AtomicU64,
+    registry: Registry,
+    requests: Family<RequestLabels, Counter>,
+    durations: Family<RequestLabels, Histogram, fn() -> Histogram>,
+    in_flight: Gauge,
+    leap_refresh_failures: Counter,
+    leap_refresh_successes: Counter,
 }
 
 /// Values read at render time from elsewhere in the service.
@@ -37,174 +54,119 @@ pub struct Gauges {
     pub ready: bool,
 }
 
-fn escape_label(value: &str) -> String {
-    value
-        .replace('\\', "\\\\")
-        .replace('"', "\\\"")
-        .replace('\n', "\\n")
+impl Default for Metrics {
+    fn default() -> Self {
+        Self::new()
+    }
 }
 
 impl Metrics {
     /// Empty metrics.
     pub fn new() -> Self {
-        Self::default()
+        let requests = Family::<RequestLabels, Counter>::default();
+        let durations: Family<RequestLabels, Histogram, fn() -> Histogram> =
+            Family::new_with_constructor(latency_histogram);
+        let in_flight = Gauge::default();
+        let leap_refresh_failures = Counter::default();
+        let leap_refresh_successes = Counter::default();
+        let mut registry = Registry::default();
+        registry.register(
+            "eigenzeit_build",
+            "Build information",
+            Info::new([("version", env!("CARGO_PKG_VERSION"))]),
+        );
+        registry.register(
+            "eigenzeit_http_requests_in_flight",
+            "Requests being served",
+            in_flight.clone(),
+        );
+        registry.register(
+            "eigenzeit_http_requests",
+            "Requests answered, by route, method and status",
+            requests.clone(),
+        );
+        registry.register(
+            "eigenzeit_http_request_duration_seconds",
+            "Time to answer, by route, method and status",
+            durations.clone(),
+        );
+        registry.register(
+            "eigenzeit_leap_seconds_refresh_failures",
+            "Failed refreshes of the leap-second table",
+            leap_refresh_failures.clone(),
+        );
+        registry.register(
+            "eigenzeit_leap_seconds_refresh_successes",
+            "Successful refreshes of the leap-second table",
+            leap_refresh_successes.clone(),
+        );
+        Self {
+            registry,
+            requests,
+            durations,
+            in_flight,
+            leap_refresh_failures,
+            leap_refresh_successes,
+        }
     }
 
     /// Records one finished request.
     pub fn observe_request(&self, route: &str, method: &str, status: u16, latency_s: f64) {
-        let mut requests = match self.requests.lock() {
-            Ok(guard) => guard,
-            Err(poisoned) => poisoned.into_inner(),
+        let labels = RequestLabels {
+            route: route.to_string(),
+            method: method.to_string(),
+            status,
         };
-        let stats = requests
-            .entry((route.to_string(), method.to_string(), status))
-            .or_default();
-        stats.count += 1;
-        stats.sum_s += latency_s;
-        for (bucket, bound) in stats.buckets.iter_mut().zip(LATENCY_BUCKETS_S) {
-            if latency_s <= bound {
-                *bucket += 1;
-            }
-        }
+        self.requests.get_or_create(&labels).inc();
+        self.durations.get_or_create(&labels).observe(latency_s);
     }
 
     /// A request started (+1) or finished (-1).
     pub fn add_in_flight(&self, delta: i64) {
-        self.in_flight.fetch_add(delta, Ordering::SeqCst);
+        self.in_flight.inc_by(delta);
     }
 
     /// Requests being served now.
     pub fn in_flight(&self) -> i64 {
-        self.in_flight.load(Ordering::SeqCst)
+        self.in_flight.get()
     }
 
     /// Counts a failed leap-second refresh.
     pub fn leap_refresh_failed(&self) {
-        self.leap_refresh_failures.fetch_add(1, Ordering::SeqCst);
+        self.leap_refresh_failures.inc();
     }
 
     /// Counts a successful leap-second refresh.
     pub fn leap_refresh_succeeded(&self) {
-        self.leap_refresh_successes.fetch_add(1, Ordering::SeqCst);
+        self.leap_refresh_successes.inc();
     }
 
-    /// Renders every metric in the Prometheus text format.
+    /// Renders every metric in the Prometheus text format (0.0.4), the values of `gauges`
+    /// included.
     pub fn render(&self, gauges: &Gauges) -> String {
         let mut out = String::with_capacity(4096);
-        let _ = writeln!(out, "# HELP eigenzeit_build_info Build information.");
-        let _ = writeln!(out, "# TYPE eigenzeit_build_info gauge");
-        let _ = writeln!(
-            out,
-            "eigenzeit_build_info{{version=\"{}\"}} 1",
-            env!("CARGO_PKG_VERSION")
+        // Writing to a String cannot fail.
+        let _ = encode(&mut out, &self.registry);
+        let mut scrape = Registry::default();
+        scrape.register(
+            "eigenzeit_ready",
+            "1 when the service takes new work, 0 while draining",
+            ConstGauge::new(i64::from(gauges.ready)),
         );
-        let _ = writeln!(
-            out,
-            "# HELP eigenzeit_http_requests_in_flight Requests being served."
+        scrape.register(
+            "eigenzeit_leap_seconds_table",
+            "The leap-second table in force",
+            Info::new([("source", gauges.leap_source.clone())]),
         );
-        let _ = writeln!(out, "# TYPE eigenzeit_http_requests_in_flight gauge");
-        let _ = writeln!(
-            out,
-            "eigenzeit_http_requests_in_flight {}",
-            self.in_flight()
+        // Three decimals (about 90 s), as before the move to prometheus-client.
+        let days = (gauges.leap_expiry_days * 1000.0).round() / 1000.0;
+        scrape.register(
+            "eigenzeit_leap_seconds_expiry_days",
+            "Days until the leap-second table expires (negative: expired)",
+            ConstGauge::new(days),
         );
-        let _ = writeln!(
-            out,
-            "# HELP eigenzeit_ready 1 when the service takes new work, 0 while draining."
-        );
-        let _ = writeln!(out, "# TYPE eigenzeit_ready gauge");
-        let _ = writeln!(out, "eigenzeit_ready {}", u8::from(gauges.ready));
-        let _ = writeln!(
-            out,
-            "# HELP eigenzeit_leap_seconds_table_info The leap-second table in force."
-        );
-        let _ = writeln!(out, "# TYPE eigenzeit_leap_seconds_table_info gauge");
-        let _ = writeln!(
-            out,
-            "eigenzeit_leap_seconds_table_info{{source=\"{}\"}} 1",
-            escape_label(&gauges.leap_source)
-        );
-        let _ = writeln!(out, "# HELP eigenzeit_leap_seconds_expiry_days Days until the leap-second table expires (negative: expired).");
-        let _ = writeln!(out, "# TYPE eigenzeit_leap_seconds_expiry_days gauge");
-        let _ = writeln!(
-            out,
-            "eigenzeit_leap_seconds_expiry_days {:.3}",
-            gauges.leap_expiry_days
-        );
-        let _ = writeln!(out, "# HELP eigenzeit_leap_seconds_refresh_failures_total Failed refreshes of the leap-second table.");
-        let _ = writeln!(
-            out,
-            "# TYPE eigenzeit_leap_seconds_refresh_failures_total counter"
-        );
-        let _ = writeln!(
-            out,
-            "eigenzeit_leap_seconds_refresh_failures_total {}",
-            self.leap_refresh_failures.load(Ordering::SeqCst)
-        );
-        let _ = writeln!(out, "# HELP eigenzeit_leap_seconds_refresh_successes_total Successful refreshes of the leap-second table.");
-        let _ = writeln!(
-            out,
-            "# TYPE eigenzeit_leap_seconds_refresh_successes_total counter"
-        );
-        let _ = writeln!(
-            out,
-            "eigenzeit_leap_seconds_refresh_successes_total {}",
-            self.leap_refresh_successes.load(Ordering::SeqCst)
-        );
-        self.render_requests(&mut out);
+        let _ = encode(&mut out, &scrape);
         out
-    }
-
-    fn render_requests(&self, out: &mut String) {
-        let requests = match self.requests.lock() {
-            Ok(guard) => guard.clone(),
-            Err(poisoned) => poisoned.into_inner().clone(),
-        };
-        let _ = writeln!(
-            out,
-            "# HELP eigenzeit_http_requests_total Requests answered, by route, method and status."
-        );
-        let _ = writeln!(out, "# TYPE eigenzeit_http_requests_total counter");
-        for ((route, method, status), stats) in &requests {
-            let _ = writeln!(
-                out,
-                "eigenzeit_http_requests_total{{route=\"{}\",method=\"{method}\",status=\"{status}\"}} {}",
-                escape_label(route),
-                stats.count
-            );
-        }
-        let _ = writeln!(out, "# HELP eigenzeit_http_request_duration_seconds Time to answer, by route, method and status.");
-        let _ = writeln!(
-            out,
-            "# TYPE eigenzeit_http_request_duration_seconds histogram"
-        );
-        for ((route, method, status), stats) in &requests {
-            let labels = format!(
-                "route=\"{}\",method=\"{method}\",status=\"{status}\"",
-                escape_label(route)
-            );
-            for (bound, count) in LATENCY_BUCKETS_S.iter().zip(stats.buckets) {
-                let _ = writeln!(
-                    out,
-                    "eigenzeit_http_request_duration_seconds_bucket{{{labels},le=\"{bound}\"}} {count}"
-                );
-            }
-            let _ = writeln!(
-                out,
-                "eigenzeit_http_request_duration_seconds_bucket{{{labels},le=\"+Inf\"}} {}",
-                stats.count
-            );
-            let _ = writeln!(
-                out,
-                "eigenzeit_http_request_duration_seconds_sum{{{labels}}} {}",
-                stats.sum_s
-            );
-            let _ = writeln!(
-                out,
-                "eigenzeit_http_request_duration_seconds_count{{{labels}}} {}",
-                stats.count
-            );
-        }
     }
 }
 
