@@ -7,15 +7,9 @@ use eigenzeit::physics::time::instant::Instant;
 use eigenzeit::physics::time::leap_seconds::LeapTable;
 use eigenzeit::physics::time::scale::Scale;
 
-/// Every instant format, in a fixed order (the fuzzer picks one by index).
-pub const FORMATS: [InstantFormat; 6] = [
-    InstantFormat::Iso,
-    InstantFormat::Mjd,
-    InstantFormat::Jd,
-    InstantFormat::J2000S,
-    InstantFormat::UnixS,
-    InstantFormat::GnssWeek,
-];
+/// Every instant format, in the fixed order of the engine's vocabulary (the fuzzer picks one
+/// by index).
+pub const FORMATS: [InstantFormat; InstantFormat::ALL.len()] = InstantFormat::ALL;
 
 /// Splits fuzzer bytes into a selector byte and the rest read as (lossy) UTF-8 text.
 pub fn selector_and_text(data: &[u8]) -> Option<(u8, String)> {

@@ -10,3 +10,4 @@ pub mod proper_time;
 pub mod rate;
 pub mod signal;
 pub mod time;
+pub mod vocabulary;

@@ -4,7 +4,6 @@ use std::fmt::Write as _;
 
 use super::body::{ephemeris_problem, ProperTimeRequest};
 use super::types::{ObjectOutput, ProperTimeAnswer, SampleOutput, SummaryOutput};
-use crate::api::clock::evaluate::{model_name, reference_name};
 use crate::api::error::ApiError;
 use crate::api::time::types::InstantForms;
 use crate::physics::gravity::{dot, earth_potential_m2_s2, GravityModel};
@@ -97,11 +96,7 @@ fn object_output(
     });
     Ok(ObjectOutput {
         time_scale: track.start.scale().as_str().to_string(),
-        frame: match frame {
-            Frame::Inertial => "inertial",
-            Frame::EarthFixed => "earth_fixed",
-        }
-        .to_string(),
+        frame: frame.as_str().to_string(),
         state_count,
         summary: SummaryOutput {
             start: instant_forms(&track.start, table)?,
@@ -138,8 +133,8 @@ pub fn compute(
         .map(|(track, input)| object_output(track, request, table, input.frame, input.states.len()))
         .collect::<Result<Vec<_>, _>>()?;
     Ok(ProperTimeAnswer {
-        reference: reference_name(request.reference).to_string(),
-        gravity_model: model_name(request.gravity_model).to_string(),
+        reference: request.reference.as_str().to_string(),
+        gravity_model: request.gravity_model.as_str().to_string(),
         objects,
         model_notes: model_notes(request),
     })

@@ -5,6 +5,7 @@ use crate::physics::geodesy::{geodetic_to_ecef_m, normal_potential_drop_m2_s2};
 use crate::physics::gravity::{centrifugal_potential_m2_s2, earth_potential_m2_s2, GravityModel};
 use crate::physics::rate::error::RateError;
 use crate::physics::rate::{RateParts, RateReference};
+use crate::physics::vocabulary::vocabulary;
 
 /// How the height of a ground site is given.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -14,6 +15,27 @@ pub enum GroundHeight {
     /// Height above the geoid (orthometric height), m: W0 - W = integral of GRS80 normal gravity
     /// over the height; the gravity model is not used.
     AboveGeoidM(f64),
+}
+
+vocabulary! {
+    /// What the height of a ground site is measured from.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum HeightReference {
+        /// The GRS80 ellipsoid ([`GroundHeight::EllipsoidalM`]).
+        Ellipsoid = "ellipsoid",
+        /// The geoid, i.e. orthometric height ([`GroundHeight::AboveGeoidM`]).
+        Geoid = "geoid",
+    }
+}
+
+impl HeightReference {
+    /// A height of `height_m` metres above this reference.
+    pub fn height(self, height_m: f64) -> GroundHeight {
+        match self {
+            Self::Ellipsoid => GroundHeight::EllipsoidalM(height_m),
+            Self::Geoid => GroundHeight::AboveGeoidM(height_m),
+        }
+    }
 }
 
 /// A clock at rest on the rotating Earth.

@@ -41,20 +41,23 @@ mod robustness_tests;
 pub use crate::physics::gravity::GravityModel;
 pub use error::{RateError, RateErrorKind};
 pub use frequency::{frequency_offset, FrequencyOffset};
-pub use ground::{ground_site_rate, GroundHeight, GroundSite};
+pub use ground::{ground_site_rate, GroundHeight, GroundSite, HeightReference};
 pub use lunar::{lunar_site_rate, LunarSite};
 pub use orbit::{orbit_rate, Anomaly, KeplerianOrbit, OrbitRate, PeriodicTerm};
 pub use state::{state_rate, Frame, StateRate, StateVector};
 
 use crate::physics::constants::{L_G, MICROSECONDS_PER_DAY, SPEED_OF_LIGHT_SQUARED_M2_S2};
+use crate::physics::vocabulary::vocabulary;
 
-/// The coordinate time a rate is measured against.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum RateReference {
-    /// Terrestrial Time: a clock on the geoid has rate 0.
-    Tt,
-    /// Geocentric Coordinate Time.
-    Tcg,
+vocabulary! {
+    /// The coordinate time a rate is measured against.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum RateReference {
+        /// Terrestrial Time: a clock on the geoid has rate 0.
+        Tt = "TT",
+        /// Geocentric Coordinate Time.
+        Tcg = "TCG",
+    }
 }
 
 /// A fractional rate offset d(tau)/d(t) - 1 split into its velocity and gravity parts.

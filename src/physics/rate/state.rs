@@ -10,14 +10,17 @@ use crate::physics::geodesy::{
 use crate::physics::gravity::{dot, earth_potential_m2_s2, norm, GravityModel};
 use crate::physics::rate::error::{require_finite_vector, RateError, RateErrorKind};
 use crate::physics::rate::{RateParts, RateReference};
+use crate::physics::vocabulary::vocabulary;
 
-/// Coordinate frame of a state vector.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum Frame {
-    /// Geocentric Celestial Reference System (non-rotating).
-    Gcrs,
-    /// International Terrestrial Reference Frame (rotating with the Earth).
-    Itrf,
+vocabulary! {
+    /// Coordinate frame of a state vector.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum Frame {
+        /// Geocentric Celestial Reference System (non-rotating).
+        Gcrs = "GCRS",
+        /// International Terrestrial Reference Frame (rotating with the Earth).
+        Itrf = "ITRF",
+    }
 }
 
 /// A geocentric state: position (m) and velocity (m/s) in `frame`.

@@ -2,6 +2,9 @@
 
 use std::fmt;
 
+use super::formats::InstantFormat;
+use super::scale::Scale;
+
 /// An error of the time engine. Each variant has a stable machine-readable [`TimeError::code`]
 /// and a message a person can act on.
 #[derive(Debug, Clone, PartialEq, Eq)]
@@ -65,13 +68,17 @@ impl fmt::Display for TimeError {
         match self {
             Self::UnknownScale(name) => write!(
                 f,
-                "unknown time scale {name:?}; expected one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST"
+                "unknown time scale {name:?}; expected one of {}",
+                Scale::NAMES.join(", ")
             ),
             Self::UnknownFormat(name) => write!(
                 f,
-                "unknown instant format {name:?}; expected one of iso, mjd, jd, j2000_s, unix_s, gnss_week"
+                "unknown instant format {name:?}; expected one of {}",
+                InstantFormat::NAMES.join(", ")
             ),
-            Self::Malformed { expected, found } => write!(f, "expected {expected}, found {found:?}"),
+            Self::Malformed { expected, found } => {
+                write!(f, "expected {expected}, found {found:?}")
+            }
             Self::ImpossibleDate(message)
             | Self::InvalidLeapSecond(message)
             | Self::BeforeUtc(message)
