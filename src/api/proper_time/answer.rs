@@ -6,28 +6,14 @@ use super::body::{ephemeris_problem, ProperTimeRequest};
 use super::types::{ObjectOutput, ProperTimeAnswer, SampleOutput, SummaryOutput};
 use crate::api::error::ApiError;
 use crate::api::time::types::InstantForms;
-use crate::physics::gravity::{dot, earth_potential_m2_s2, GravityModel};
+use crate::physics::gravity::GravityModel;
 use crate::physics::proper_time::{relative_to_tcg, ProperTimeOptions};
-use crate::physics::rate::{RateParts, RateReference};
+use crate::physics::rate::{inertial_rate_function, RateReference};
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::formats::{day_reading, write_instant, write_iso, ISO_DECIMALS};
 use crate::physics::time::instant::Instant;
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::trajectory::{proper_time_of_ephemeris, Frame, TrackProperTime};
-
-/// The fractional rate against TT split into (velocity, gravity) parts at an inertial state
-/// (IERS Conventions (2010) eq. 10.6, through [`RateParts::from_speed_and_potential`]).
-fn rate_against_tt(model: GravityModel) -> impl Fn(&[f64; 3], &[f64; 3]) -> (f64, f64) {
-    move |position_m, velocity_m_s| {
-        let potential = earth_potential_m2_s2(model, *position_m).unwrap_or(f64::NAN);
-        let parts = RateParts::from_speed_and_potential(
-            RateReference::Tt,
-            dot(*velocity_m_s, *velocity_m_s),
-            potential,
-        );
-        (parts.sr, parts.gr)
-    }
-}
 
 fn model_notes(request: &ProperTimeRequest) -> Vec<String> {
     let mut notes = vec![
@@ -124,7 +110,7 @@ pub fn compute(
         &request.interpolation,
         &ProperTimeOptions::default(),
         &context,
-        rate_against_tt(request.gravity_model),
+        inertial_rate_function(RateReference::Tt, request.gravity_model),
     )
     .map_err(ephemeris_problem)?;
     let objects = tracks

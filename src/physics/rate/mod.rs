@@ -47,6 +47,7 @@ pub use orbit::{orbit_rate, Anomaly, KeplerianOrbit, OrbitRate, PeriodicTerm};
 pub use state::{state_rate, Frame, StateRate, StateVector};
 
 use crate::physics::constants::{L_G, MICROSECONDS_PER_DAY, SPEED_OF_LIGHT_SQUARED_M2_S2};
+use crate::physics::gravity::{dot, earth_potential_m2_s2};
 use crate::physics::vocabulary::vocabulary;
 
 vocabulary! {
@@ -121,6 +122,27 @@ pub struct MicrosecondsPerDay {
     pub gr: f64,
     /// Total, us/day.
     pub total: f64,
+}
+
+/// The rate function of a clock at an inertial geocentric state, for `reference` and `model`:
+/// `rate(position_m, velocity_m_s)` gives the (velocity, gravity) parts of d(tau)/dt - 1, i.e.
+/// `-v^2/(2c^2)` and `-U/c^2` (+ L_G against TT), IERS Conventions (2010) eq. 10.6 through
+/// [`RateParts::from_speed_and_potential`]. A position where the potential is undefined (not
+/// finite, at the geocentre) gives a NaN gravity part, which the integrator's callers refuse.
+/// What the proper-time integrators take.
+pub fn inertial_rate_function(
+    reference: RateReference,
+    model: GravityModel,
+) -> impl Fn(&[f64; 3], &[f64; 3]) -> (f64, f64) + Copy {
+    move |position_m, velocity_m_s| {
+        let potential_m2_s2 = earth_potential_m2_s2(model, *position_m).unwrap_or(f64::NAN);
+        let parts = RateParts::from_speed_and_potential(
+            reference,
+            dot(*velocity_m_s, *velocity_m_s),
+            potential_m2_s2,
+        );
+        (parts.sr, parts.gr)
+    }
 }
 
 /// Converts a fractional rate to microseconds per day (86 400 s/day, 1e6 us/s).
