@@ -144,9 +144,8 @@ pub fn relativistic_correction_constant_s_per_sqrt_m(gm_m3_s2: f64) -> f64 {
 
 /// Eccentric anomaly E (rad) from a true, mean or eccentric anomaly, for 0 <= e < 1.
 ///
-/// True: E = 2 atan2(sqrt(1 - e) sin(nu/2), sqrt(1 + e) cos(nu/2)). Mean: Kepler's equation
-/// E - e sin E = M by Newton's method (start E = M, or pi for e > 0.8; at most 50 steps,
-/// stop below 1e-15 rad). References: Vallado, Fundamentals of Astrodynamics and
+/// True: E = 2 atan2(sqrt(1 - e) sin(nu/2), sqrt(1 + e) cos(nu/2)). Mean: Kepler's equation,
+/// by [`solve_kepler_equation_rad`]. References: Vallado, Fundamentals of Astrodynamics and
 /// Applications, algorithms 2 and 5 (from memory); Kepler's equation.
 pub fn eccentric_anomaly_rad(anomaly: Anomaly, eccentricity: f64) -> Result<f64, RateError> {
     let (field, angle_deg) = match anomaly {
@@ -170,18 +169,28 @@ pub fn eccentric_anomaly_rad(anomaly: Anomaly, eccentricity: f64) -> Result<f64,
             let half = 0.5 * angle_rad;
             2.0 * ((1.0 - e).sqrt() * half.sin()).atan2((1.0 + e).sqrt() * half.cos())
         }
-        Anomaly::MeanDeg(_) => {
-            let mut ecc = if e > 0.8 { PI } else { angle_rad };
-            for _ in 0..50 {
-                let step = (ecc - e * ecc.sin() - angle_rad) / (1.0 - e * ecc.cos());
-                ecc -= step;
-                if step.abs() < 1e-15 {
-                    break;
-                }
-            }
-            ecc
-        }
+        Anomaly::MeanDeg(_) => solve_kepler_equation_rad(angle_rad, e),
     })
+}
+
+/// Eccentric anomaly E in [0, 2 pi) (up to the last Newton step) of the mean anomaly `mean_rad`
+/// (any finite value; reduced to [0, 2 pi) first, so a large M loses no accuracy) for
+/// 0 <= e < 1: Kepler's equation E - e sin E = M by Newton's method, starting at E = M, or at
+/// pi for e > 0.8 (which converges for every M), at most 50 steps, stopping below 1e-15 rad.
+/// References: Kepler's equation; Vallado, Fundamentals of Astrodynamics and Applications,
+/// algorithm 2 (from memory). The one solver of the crate.
+pub fn solve_kepler_equation_rad(mean_rad: f64, eccentricity: f64) -> f64 {
+    let e = eccentricity;
+    let mean_rad = mean_rad.rem_euclid(2.0 * PI);
+    let mut ecc = if e > 0.8 { PI } else { mean_rad };
+    for _ in 0..50 {
+        let step = (ecc - e * ecc.sin() - mean_rad) / (1.0 - e * ecc.cos());
+        ecc -= step;
+        if step.abs() < 1e-15 {
+            break;
+        }
+    }
+    ecc
 }
 
 fn validate_orbit(orbit: &KeplerianOrbit) -> Result<f64, RateError> {
