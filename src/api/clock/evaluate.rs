@@ -204,8 +204,9 @@ pub fn evaluate_item(
             (parts, model.as_str(), Some(periodic), inclination)
         }
         Subject::Ground(site) => {
-            let (parts, label) = ground_answer(site, reference, requested_model, path, &origins)?;
-            notes.extend(notes::ground(label));
+            let (parts, label, ground_notes) =
+                ground_answer(site, reference, requested_model, path, &origins)?;
+            notes.extend(ground_notes);
             (parts, label, None, None)
         }
         Subject::Lunar(site) => {
@@ -332,7 +333,7 @@ fn ground_answer(
     requested_model: Option<GravityModel>,
     path: &str,
     origins: &Origins<'_>,
-) -> Result<(RateParts, &'static str), ApiError> {
+) -> Result<(RateParts, &'static str, Vec<String>), ApiError> {
     let height_reference = match site.height_reference.as_deref() {
         None => HeightReference::Ellipsoid,
         Some(text) => parse_named(
@@ -354,5 +355,5 @@ fn ground_answer(
         height,
     };
     let parts = ground_site_rate(&ground, reference, model).map_err(|e| origins.error(e))?;
-    Ok((parts, label))
+    Ok((parts, label, notes::ground(height_reference, model)))
 }

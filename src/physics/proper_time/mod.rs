@@ -31,6 +31,7 @@ mod series;
 pub use quadrature::{CompensatedSum, GaussLegendre, MAX_NODES};
 pub use series::{
     kepler_periodic_term_s, relative_to_tcg, ProperTimeSample, ProperTimeSeries, ProperTimeSummary,
+    PERIODIC_NOTE,
 };
 
 use std::fmt;
@@ -52,6 +53,9 @@ where
         self(t_s)
     }
 }
+
+/// The model note of [`EarthFixed`] trajectories.
+pub const EARTH_FIXED_NOTE: &str = "Earth-fixed tracks: inertial speed from v + omega_E x r with the nominal omega_E; precession, nutation and polar motion are neglected (they change neither |r|, z nor r.v to first order)";
 
 /// An Earth-fixed trajectory seen with inertial-equivalent velocity.
 #[derive(Debug, Clone)]
@@ -125,6 +129,9 @@ fn error(code: &'static str, index: Option<usize>, message: impl Into<String>) -
         index,
     }
 }
+
+/// The model note of [`integrate_proper_time`] with the rate against TT.
+pub const INTEGRATION_NOTE: &str = "d(tau)/dt - 1 = -(v^2/2 + U)/c^2 + L_G against TT (IERS Conventions (2010) eq. 10.6), integrated with Gauss-Legendre quadrature between output epochs and compensated summation";
 
 /// Integrates d(tau)/dt - 1 along `trajectory` between consecutive `epochs_s`.
 ///

@@ -61,6 +61,10 @@ vocabulary! {
     }
 }
 
+/// The model note of every rate answer: the order of the model and what [`RateParts::total`]
+/// leaves out (see the module notes).
+pub const FIRST_ORDER_NOTE: &str = "first post-Newtonian order, d(tau)/dt - 1 = -(v^2/2 + U)/c^2 (+ L_G against TT), IERS Conventions (2010) eq. 10.6; total = sr + gr, the 1/(1 - L_G) factor and 1/c^4 terms (about 1e-18) are not included";
+
 /// A fractional rate offset d(tau)/d(t) - 1 split into its velocity and gravity parts.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct RateParts {
@@ -123,6 +127,9 @@ pub struct MicrosecondsPerDay {
     /// Total, us/day.
     pub total: f64,
 }
+
+/// The model note of [`inertial_rate_function`] with [`GravityModel::J2`].
+pub const INERTIAL_J2_NOTE: &str = "J2 potential with the IERS Conventions (2010) GM, J2 and a_E; the GCRS pole stands in for the Earth's axis for inertial tracks";
 
 /// The rate function of a clock at an inertial geocentric state, for `reference` and `model`:
 /// `rate(position_m, velocity_m_s)` gives the (velocity, gravity) parts of d(tau)/dt - 1, i.e.

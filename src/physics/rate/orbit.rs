@@ -54,6 +54,16 @@ pub struct OrbitRate {
 /// Largest |angle| accepted for an anomaly, degrees (beyond it f64 loses the fraction of a turn).
 pub const MAX_ANGLE_DEG: f64 = 1.0e6;
 
+/// The model notes of [`orbit_rate`] (Ashby (2003) Living Rev. Relativity 6, 1).
+pub const ORBIT_NOTES: [&str; 3] = [
+    "mean rate over one revolution of a point-mass Keplerian orbit: sr = -GM/(2ac^2), gr = (W0 - GM/a)/c^2 against TT (Ashby (2003) Living Rev. Relativity 6, 1)",
+    "GM = 3.986004418e14 m^3/s^2 (IERS Conventions (2010), TCG-compatible); the IS-GPS-200 value 3.986005e14 changes the total by less than 1e-16 and the periodic amplitude by about 7e-8 of itself",
+    "inclination, node and argument of perigee do not change the first-order rate or the periodic term",
+];
+/// The model note of an orbit when J2 was asked for at a level that also covers other subjects:
+/// [`orbit_rate`] has no J2 mean rate.
+pub const ORBIT_J2_NOT_APPLIED_NOTE: &str = "the request-level gravity_model j2 does not apply to orbit mean rates (the J2 average depends on the definition of a and e at the level of the J2 effect); point_mass used: give a state vector for J2";
+
 /// Mean rate and periodic term of a clock on a Keplerian orbit (GM of IERS Conventions (2010)
 /// table 1.1, TCG-compatible).
 ///
