@@ -36,6 +36,8 @@ pub use series::{
 
 use std::fmt;
 
+use crate::physics::vocabulary::vocabulary;
+
 use crate::physics::constants::{EARTH_ROTATION_RAD_S, SPEED_OF_LIGHT_SQUARED_M2_S2};
 
 /// A trajectory: inertial-equivalent geocentric position (m) and velocity (m/s) at coordinate
@@ -100,6 +102,25 @@ impl Default for ProperTimeOptions {
     }
 }
 
+vocabulary! {
+    /// The stable codes of [`ProperTimeError`], written only here.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum ProperTimeErrorKind {
+        /// An option out of range.
+        BadOption = "bad_option",
+        /// Fewer than two output epochs.
+        TooFewEpochs = "too_few_epochs",
+        /// A value that is not finite.
+        NotFinite = "not_finite",
+        /// Epochs that do not increase strictly.
+        EpochsNotIncreasing = "epochs_not_increasing",
+        /// A speed at or above c along the trajectory.
+        SpeedNotBelowC = "speed_not_below_c",
+        /// Samples too far apart for the motion.
+        SamplingTooCoarse = "sampling_too_coarse",
+    }
+}
+
 /// Why an integration was refused.
 #[derive(Debug, Clone, PartialEq)]
 pub struct ProperTimeError {
@@ -122,9 +143,13 @@ impl fmt::Display for ProperTimeError {
 
 impl std::error::Error for ProperTimeError {}
 
-fn error(code: &'static str, index: Option<usize>, message: impl Into<String>) -> ProperTimeError {
+fn error(
+    kind: ProperTimeErrorKind,
+    index: Option<usize>,
+    message: impl Into<String>,
+) -> ProperTimeError {
     ProperTimeError {
-        code,
+        code: kind.as_str(),
         message: message.into(),
         index,
     }
@@ -151,24 +176,28 @@ where
 {
     if options.relative_tolerance.is_nan() || options.relative_tolerance <= 0.0 {
         return Err(error(
-            "bad_option",
+            ProperTimeErrorKind::BadOption,
             None,
             "relative_tolerance must be positive",
         ));
     }
     if epochs_s.len() < 2 {
         return Err(error(
-            "too_few_epochs",
+            ProperTimeErrorKind::TooFewEpochs,
             None,
             format!("{} output epochs; at least two are needed", epochs_s.len()),
         ));
     }
     if let Some(index) = epochs_s.iter().position(|t| !t.is_finite()) {
-        return Err(error("not_finite", Some(index), "the epoch is not finite"));
+        return Err(error(
+            ProperTimeErrorKind::NotFinite,
+            Some(index),
+            "the epoch is not finite",
+        ));
     }
     if let Some(index) = epochs_s.windows(2).position(|pair| pair[1] <= pair[0]) {
         return Err(error(
-            "epochs_not_increasing",
+            ProperTimeErrorKind::EpochsNotIncreasing,
             Some(index + 1),
             "output epochs must be strictly increasing",
         ));
@@ -189,14 +218,14 @@ where
         let length_s = end_s - start_s;
         if !(length_s * angular_rate).is_finite() {
             return Err(error(
-                "not_finite",
+                ProperTimeErrorKind::NotFinite,
                 Some(index),
                 "the state at the start of this interval has a zero or non-finite position or velocity",
             ));
         }
         if dot3(&velocity_m_s, &velocity_m_s) >= SPEED_OF_LIGHT_SQUARED_M2_S2 {
             return Err(error(
-                "speed_not_below_c",
+                ProperTimeErrorKind::SpeedNotBelowC,
                 Some(index),
                 "the (interpolated) speed at the start of this interval is at or above c; near-duplicate epochs or inconsistent positions make the derived velocity meaningless",
             ));
@@ -204,7 +233,7 @@ where
         let Some((nodes, pieces)) = rules.plan(length_s * angular_rate, options.relative_tolerance)
         else {
             return Err(error(
-                "sampling_too_coarse",
+                ProperTimeErrorKind::SamplingTooCoarse,
                 Some(index),
                 format!(
                     "the object moves through {:.0} rad of its geocentric direction in this interval of {length_s} s; sample the trajectory more densely",
@@ -227,7 +256,7 @@ where
         gravity_part *= 0.5 * piece_s;
         if !(velocity_part.is_finite() && gravity_part.is_finite()) {
             return Err(error(
-                "not_finite",
+                ProperTimeErrorKind::NotFinite,
                 Some(index),
                 "the rate is not finite inside this interval (check the trajectory and the rate function)",
             ));
