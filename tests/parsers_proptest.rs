@@ -27,14 +27,8 @@ use eigenzeit::physics::time::instant::{
 use eigenzeit::physics::time::leap_seconds::{LeapTable, FIRST_LEAP_STEP_MJD};
 use eigenzeit::physics::time::scale::Scale;
 
-const FORMATS: [InstantFormat; 6] = [
-    InstantFormat::Iso,
-    InstantFormat::Mjd,
-    InstantFormat::Jd,
-    InstantFormat::J2000S,
-    InstantFormat::UnixS,
-    InstantFormat::GnssWeek,
-];
+/// Every instant format, from the engine's own vocabulary.
+const FORMATS: [InstantFormat; InstantFormat::ALL.len()] = InstantFormat::ALL;
 /// Attoseconds below the 12th decimal of a second (the `iso` form's last digit).
 const ISO_RESOLUTION_ATTOS: i128 = 1_000_000;
 /// The IERS and IETF leap-second files committed as reference data.
@@ -154,6 +148,13 @@ proptest! {
         let _ = parse_iso(&text);
         let _ = text.parse::<InstantFormat>();
         let _ = text.parse::<Scale>();
+        // The exact readers of the request vocabulary: a value only for a listed spelling.
+        if let Some(format) = InstantFormat::from_name(&text) {
+            prop_assert_eq!(format.as_str(), text.as_str());
+        }
+        if let Some(scale) = Scale::from_name(&text) {
+            prop_assert_eq!(scale.as_str(), text.as_str());
+        }
     }
 
     #[test]

@@ -7,15 +7,9 @@ use eigenzeit::physics::time::instant::Instant;
 use eigenzeit::physics::time::leap_seconds::LeapTable;
 use eigenzeit::physics::time::scale::Scale;
 
-/// Every instant format, in a fixed order (the fuzzer picks one by index).
-pub const FORMATS: [InstantFormat; 6] = [
-    InstantFormat::Iso,
-    InstantFormat::Mjd,
-    InstantFormat::Jd,
-    InstantFormat::J2000S,
-    InstantFormat::UnixS,
-    InstantFormat::GnssWeek,
-];
+/// Every instant format, in the fixed order of the engine's vocabulary (the fuzzer picks one
+/// by index).
+pub const FORMATS: [InstantFormat; InstantFormat::ALL.len()] = InstantFormat::ALL;
 
 /// Splits fuzzer bytes into a selector byte and the rest read as (lossy) UTF-8 text.
 pub fn selector_and_text(data: &[u8]) -> Option<(u8, String)> {
@@ -51,7 +45,7 @@ pub fn check_written_forms_read_back(instant: &Instant, text: &str, table: &Leap
 }
 
 /// Reads an ephemeris with `read` and, when it is accepted, integrates the proper time of
-/// every object (point-mass rate against TT): the whole path of the proper-time endpoint.
+/// every object (J2 rate against TT): the whole path of the proper-time endpoint.
 pub fn integrate_all<F>(read: F)
 where
     F: FnOnce(
@@ -59,19 +53,15 @@ where
     ) -> Result<eigenzeit::trajectory::TrajectorySet, eigenzeit::trajectory::TrajectoryError>,
 {
     use eigenzeit::trajectory::{proper_time_of_ephemeris, InterpolationOptions};
-    use eigenzeit::physics::gravity::{dot, earth_potential_m2_s2, GravityModel};
+    use eigenzeit::physics::gravity::GravityModel;
     use eigenzeit::physics::proper_time::ProperTimeOptions;
-    use eigenzeit::physics::rate::{RateParts, RateReference};
+    use eigenzeit::physics::rate::{inertial_rate_function, RateReference};
     let table = LeapTable::builtin();
     let context = eigenzeit::physics::time::convert::ConversionContext::geocentric(table);
     let Ok(ephemeris) = read(&context) else {
         return;
     };
-    let rate = |r: &[f64; 3], v: &[f64; 3]| {
-        let potential = earth_potential_m2_s2(GravityModel::J2, *r).unwrap_or(f64::NAN);
-        let parts = RateParts::from_speed_and_potential(RateReference::Tt, dot(*v, *v), potential);
-        (parts.sr, parts.gr)
-    };
+    let rate = inertial_rate_function(RateReference::Tt, GravityModel::J2);
     let _ = proper_time_of_ephemeris(
         &ephemeris,
         &InterpolationOptions::default(),

@@ -13,19 +13,15 @@ use utoipa::{PartialSchema, ToSchema};
 
 use crate::api::error::ApiError;
 use crate::physics::constants::{MAX_GEOCENTRIC_DISTANCE_M, SPEED_OF_LIGHT_M_S};
+use crate::physics::rate::{Frame, GravityModel, HeightReference, RateReference};
 use crate::physics::time::error::TimeError;
 use crate::physics::time::formats::InstantFormat;
 use crate::physics::time::scale::Scale;
-
-/// Every instant format, in the order the documentation lists them.
-pub const INSTANT_FORMATS: [InstantFormat; 6] = [
-    InstantFormat::Iso,
-    InstantFormat::Mjd,
-    InstantFormat::Jd,
-    InstantFormat::J2000S,
-    InstantFormat::UnixS,
-    InstantFormat::GnssWeek,
-];
+use crate::physics::vocabulary::Vocabulary;
+use crate::trajectory::{
+    Frame as EphemerisFrame, EARTH_FIXED_FRAME_FAMILIES, EARTH_FIXED_FRAME_NAMES,
+    INERTIAL_FRAME_NAMES,
+};
 
 /// The word a target-scale list uses for every scale.
 pub const ALL_SCALES: &str = "all";
@@ -56,7 +52,7 @@ pub fn instant_pattern() -> String {
 /// A comma-separated list of scale names or `all`, without spaces.
 pub fn scale_list_pattern() -> String {
     let names: Vec<&str> = std::iter::once(ALL_SCALES)
-        .chain(Scale::ALL.iter().map(|scale| scale.as_str()))
+        .chain(Scale::SPELLINGS.iter().copied())
         .collect();
     let one = format!("(?:{})", names.join("|"));
     format!("^{one}(?:,{one})*$")
@@ -68,27 +64,44 @@ pub fn three_numbers_pattern() -> String {
     format!("^{number},{number},{number}$")
 }
 
-/// The scale written exactly as `text` (canonical upper-case abbreviation).
-pub fn scale_named(text: &str) -> Option<Scale> {
-    Scale::ALL.into_iter().find(|scale| scale.as_str() == text)
+/// Reads a name of the vocabulary `V` written exactly (one of `V::SPELLINGS`); otherwise a 422
+/// with `code` naming `field`, whose detail reads "unknown `what` `text`; expected A, B or C
+/// (written exactly so)".
+pub fn parse_named<V: Vocabulary>(
+    text: &str,
+    code: &'static str,
+    what: &str,
+    field: impl Into<String>,
+) -> Result<V, ApiError> {
+    V::named(text).ok_or_else(|| {
+        ApiError::unprocessable(
+            code,
+            format!(
+                "unknown {what} `{text}`; expected {} (written exactly so)",
+                either_of(V::SPELLINGS)
+            ),
+        )
+        .with_field(field)
+    })
 }
 
-/// The instant format written exactly as `text`.
-pub fn format_named(text: &str) -> Option<InstantFormat> {
-    INSTANT_FORMATS
-        .into_iter()
-        .find(|format| format.as_str() == text)
+/// `A`, `A or B`, `A, B or C`...
+pub fn either_of(names: &[&str]) -> String {
+    match names {
+        [] => String::new(),
+        [only] => (*only).to_string(),
+        [init @ .., last] => format!("{} or {last}", init.join(", ")),
+    }
 }
 
 /// Reads a scale name written exactly; 422 `unknown_scale` naming `field` otherwise.
 pub fn parse_scale(text: &str, field: &str) -> Result<Scale, ApiError> {
-    scale_named(text).ok_or_else(|| {
-        let names: Vec<&str> = Scale::ALL.iter().map(|scale| scale.as_str()).collect();
+    Scale::from_name(text).ok_or_else(|| {
         ApiError::unprocessable(
             "unknown_scale",
             format!(
                 "unknown time scale `{text}`; expected one of {} (written exactly so)",
-                names.join(", ")
+                Scale::NAMES.join(", ")
             ),
         )
         .with_field(field)
@@ -100,7 +113,7 @@ pub fn parse_scale(text: &str, field: &str) -> Result<Scale, ApiError> {
 pub fn parse_format(text: Option<&str>, field: &str) -> Result<InstantFormat, ApiError> {
     match text {
         None => Ok(InstantFormat::Iso),
-        Some(text) => format_named(text)
+        Some(text) => InstantFormat::from_name(text)
             .ok_or_else(|| ApiError::from_time(&TimeError::UnknownFormat(text.to_string()), field)),
     }
 }
@@ -111,6 +124,11 @@ pub fn one_of<T: Copy>(text: &str, choices: &[(&str, T)]) -> Option<T> {
         .iter()
         .find(|(name, _)| *name == text)
         .map(|(_, value)| *value)
+}
+
+/// The schema of a name of the vocabulary `V`: a string enum of its spellings.
+pub fn vocabulary_schema<V: Vocabulary>(description: &str) -> RefOr<Schema> {
+    string_enum(V::SPELLINGS.iter().copied(), description)
 }
 
 fn string_enum<'a>(values: impl IntoIterator<Item = &'a str>, description: &str) -> RefOr<Schema> {
@@ -126,8 +144,7 @@ pub struct ScaleName;
 
 impl PartialSchema for ScaleName {
     fn schema() -> RefOr<Schema> {
-        string_enum(
-            Scale::ALL.iter().map(|scale| scale.as_str()),
+        vocabulary_schema::<Scale>(
             "A time scale, by its abbreviation (exactly as written here; see GET /v1/time/scales).",
         )
     }
@@ -145,7 +162,7 @@ pub struct TargetScaleName;
 impl PartialSchema for TargetScaleName {
     fn schema() -> RefOr<Schema> {
         string_enum(
-            std::iter::once(ALL_SCALES).chain(Scale::ALL.iter().map(|scale| scale.as_str())),
+            std::iter::once(ALL_SCALES).chain(Scale::SPELLINGS.iter().copied()),
             "A target time scale, by its abbreviation, or `all` for every scale.",
         )
     }
@@ -162,8 +179,7 @@ pub struct InstantFormatName;
 
 impl PartialSchema for InstantFormatName {
     fn schema() -> RefOr<Schema> {
-        string_enum(
-            INSTANT_FORMATS.iter().map(|format| format.as_str()),
+        vocabulary_schema::<InstantFormat>(
             "How an instant is written: `iso` (ISO 8601 calendar or ordinal date and time; `Z` only for UTC; `23:59:60` only inside a UTC leap second), `mjd`, `jd`, `j2000_s` (seconds since J2000.0 of the scale), `unix_s` (UTC only), `gnss_week` (`WEEK:SECONDS`; GPST, GST, BDT, QZSST only).",
         )
     }
@@ -180,8 +196,7 @@ pub struct FrameName;
 
 impl PartialSchema for FrameName {
     fn schema() -> RefOr<Schema> {
-        string_enum(
-            ["GCRS", "ITRF"],
+        vocabulary_schema::<Frame>(
             "`GCRS` (geocentric, non-rotating) or `ITRF` (Earth-fixed, rotating).",
         )
     }
@@ -193,13 +208,46 @@ impl ToSchema for FrameName {
     }
 }
 
+/// Schema of a rate reference name.
+pub struct ReferenceName;
+
+impl PartialSchema for ReferenceName {
+    fn schema() -> RefOr<Schema> {
+        vocabulary_schema::<RateReference>(
+            "Names of the reference time scales (documentation of the `reference` strings).",
+        )
+    }
+}
+
+impl ToSchema for ReferenceName {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("ReferenceName")
+    }
+}
+
+/// Schema of a gravity model name.
+pub struct GravityModelName;
+
+impl PartialSchema for GravityModelName {
+    fn schema() -> RefOr<Schema> {
+        vocabulary_schema::<GravityModel>(
+            "Names of the Earth gravity models (documentation of the `gravity_model` strings).",
+        )
+    }
+}
+
+impl ToSchema for GravityModelName {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("GravityModelName")
+    }
+}
+
 /// Schema of a height reference name.
 pub struct HeightReferenceName;
 
 impl PartialSchema for HeightReferenceName {
     fn schema() -> RefOr<Schema> {
-        string_enum(
-            ["ellipsoid", "geoid"],
+        vocabulary_schema::<HeightReference>(
             "`ellipsoid` (height above the GRS80 ellipsoid) or `geoid` (orthometric height).",
         )
     }
@@ -389,31 +437,20 @@ impl ToSchema for EphemerisVelocityMS {
     }
 }
 
-/// Exact names of inertial frames in a JSON ephemeris.
-const INERTIAL_FRAMES: [&str; 4] = ["GCRF", "EME2000", "J2000", "ICRF"];
-/// Exact names of Earth-fixed frames in a JSON ephemeris (besides the ITRF and IGS families).
-const EARTH_FIXED_FRAMES: [&str; 3] = ["ECEF", "WGS84", "WGS-84"];
-/// Prefixes of the Earth-fixed frame families (ITRF2014, ITRF2020, IGS20...).
-const EARTH_FIXED_FAMILIES: [&str; 2] = ["ITRF", "IGS"];
-
 /// Whether `text` is a frame name of a JSON ephemeris, written exactly as documented (upper
 /// case, no surrounding spaces; the ITRF and IGS families by their prefix).
 pub fn ephemeris_frame_named(text: &str) -> bool {
-    INERTIAL_FRAMES.contains(&text)
-        || EARTH_FIXED_FRAMES.contains(&text)
-        || EARTH_FIXED_FAMILIES
-            .iter()
-            .any(|prefix| text.starts_with(prefix))
+    EphemerisFrame::from_name(text).is_some()
 }
 
 /// The pattern of [`ephemeris_frame_named`].
 pub fn ephemeris_frame_pattern() -> String {
-    let exact: Vec<&str> = INERTIAL_FRAMES
+    let exact: Vec<&str> = INERTIAL_FRAME_NAMES
         .iter()
-        .chain(EARTH_FIXED_FRAMES.iter())
+        .chain(EARTH_FIXED_FRAME_NAMES)
         .copied()
         .collect();
-    let families: Vec<String> = EARTH_FIXED_FAMILIES
+    let families: Vec<String> = EARTH_FIXED_FRAME_FAMILIES
         .iter()
         .map(|prefix| format!(r"{prefix}[\s\S]*"))
         .collect();
@@ -428,9 +465,12 @@ impl PartialSchema for EphemerisFrameName {
         ObjectBuilder::new()
             .schema_type(Type::String)
             .pattern(Some(ephemeris_frame_pattern()))
-            .description(Some(
-                "A frame name in upper case: GCRF, EME2000, J2000, ICRF (inertial); ECEF, WGS84, WGS-84, or any name of the ITRF or IGS families (ITRF2014, IGS20...; Earth-fixed).",
-            ))
+            .description(Some(format!(
+                "A frame name in upper case: {} (inertial); {}, or any name of the {} families (ITRF2014, IGS20...; Earth-fixed).",
+                INERTIAL_FRAME_NAMES.join(", "),
+                EARTH_FIXED_FRAME_NAMES.join(", "),
+                EARTH_FIXED_FRAME_FAMILIES.join(" or ")
+            )))
             .examples(["GCRF"])
             .into()
     }
@@ -450,11 +490,14 @@ mod tests {
     #[test]
     fn names_are_exact() {
         // The canonical spellings of the DESIGN contract (common practice: one spelling per value).
-        assert_eq!(scale_named("UTC"), Some(Scale::Utc));
-        assert_eq!(scale_named("utc"), None);
-        assert_eq!(scale_named(" UTC"), None);
-        assert_eq!(format_named("gnss_week"), Some(InstantFormat::GnssWeek));
-        assert_eq!(format_named("ISO"), None);
+        assert_eq!(Scale::from_name("UTC"), Some(Scale::Utc));
+        assert_eq!(Scale::from_name("utc"), None);
+        assert_eq!(Scale::from_name(" UTC"), None);
+        assert_eq!(
+            InstantFormat::from_name("gnss_week"),
+            Some(InstantFormat::GnssWeek)
+        );
+        assert_eq!(InstantFormat::from_name("ISO"), None);
         assert_eq!(one_of("geoid", &[("geoid", 1), ("ellipsoid", 2)]), Some(1));
         assert_eq!(one_of("Geoid", &[("geoid", 1), ("ellipsoid", 2)]), None);
     }

@@ -12,7 +12,13 @@
 //!
 //! The unit tests below check that codes are unique, well formed and explained.
 
-/// (code, meaning) for every problem code the API answers, in the order the page lists them.
+use crate::physics::proper_time::ProperTimeErrorKind;
+use crate::physics::rate::RateErrorKind;
+use crate::physics::signal::SignalErrorKind;
+use crate::physics::time::error::TimeErrorKind;
+
+/// (code, meaning) for every problem code the API answers; a code the physics library answers
+/// is taken from its error kind (the one place it is written), in the order the page lists them.
 pub const PROBLEM_CODES: &[(&str, &str)] = &[
     // Any route: routing, request reading, limits.
     (
@@ -53,35 +59,35 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     ),
     // Time scales and instants (the time engine).
     (
-        "unknown_scale",
+        TimeErrorKind::UnknownScale.as_str(),
         "The time scale is not one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST.",
     ),
     (
-        "unknown_format",
+        TimeErrorKind::UnknownFormat.as_str(),
         "The instant format is not one of `iso`, `mjd`, `jd`, `j2000_s`, `unix_s`, `gnss_week`.",
     ),
     (
-        "malformed_instant",
+        TimeErrorKind::Malformed.as_str(),
         "The instant text does not have the shape its format expects; `detail` says what was expected.",
     ),
     (
-        "impossible_date",
+        TimeErrorKind::ImpossibleDate.as_str(),
         "The text has the right shape but names a date or time that does not exist (for example 30 February).",
     ),
     (
-        "invalid_leap_second",
+        TimeErrorKind::InvalidLeapSecond.as_str(),
         "A second 60 where the leap-second table has no leap second, or in a scale without leap seconds.",
     ),
     (
-        "format_not_for_scale",
+        TimeErrorKind::FormatNotForScale.as_str(),
         "The format does not apply to the scale (`unix_s` is for UTC only, `gnss_week` for GNSS scales only).",
     ),
     (
-        "utc_before_1960",
+        TimeErrorKind::BeforeUtc.as_str(),
         "A UTC instant before 1960-01-01, where UTC is not defined by the table in use; give the instant in TAI or TT.",
     ),
     (
-        "instant_out_of_range",
+        TimeErrorKind::OutOfRange.as_str(),
         "The instant or number is outside the range the time engine supports.",
     ),
     // Time conversion requests.
@@ -106,7 +112,7 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "The observer position is not near the Earth's surface; positions are ITRF metres from the geocentre.",
     ),
     (
-        "not_finite",
+        RateErrorKind::NotFinite.as_str(),
         "A number is not finite (NaN or infinite).",
     ),
     (
@@ -135,7 +141,7 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "The gravity model is not `point_mass` or `j2`.",
     ),
     (
-        "unsupported_gravity_model",
+        RateErrorKind::UnsupportedGravityModel.as_str(),
         "The gravity model does not apply to this subject (e.g. `j2` for a Keplerian orbit); use `point_mass` or give a state vector.",
     ),
     (
@@ -151,39 +157,39 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "More than one of `true_anomaly_deg`, `mean_anomaly_deg`, `eccentric_anomaly_deg` is given; give one.",
     ),
     (
-        "speed_not_below_c",
+        RateErrorKind::SpeedNotBelowC.as_str(),
         "A speed is at or above the speed of light: the relativistic formulas have no meaning there.",
     ),
     (
-        "below_surface",
+        RateErrorKind::BelowSurface.as_str(),
         "A position is below the Earth's (or the Moon's) surface by more than the 11 km margin; check units (metres) and frame.",
     ),
     (
-        "beyond_model_range",
+        RateErrorKind::BeyondModelRange.as_str(),
         "A position or orbit is beyond the range of the geocentric model (outside the Earth's Hill sphere, about 1.5e9 m).",
     ),
     (
-        "invalid_semi_major_axis",
+        RateErrorKind::InvalidSemiMajorAxis.as_str(),
         "The semi-major axis must be positive and keep the whole orbit above the Earth's surface.",
     ),
     (
-        "invalid_eccentricity",
+        RateErrorKind::InvalidEccentricity.as_str(),
         "The eccentricity must be at least 0 and below 1 (closed orbits only).",
     ),
     (
-        "latitude_out_of_range",
+        RateErrorKind::LatitudeOutOfRange.as_str(),
         "A latitude must lie between -90 and 90 degrees.",
     ),
     (
-        "angle_out_of_range",
+        RateErrorKind::AngleOutOfRange.as_str(),
         "An angle is not finite or outside the range it is read in.",
     ),
     (
-        "invalid_frequency",
+        RateErrorKind::InvalidFrequency.as_str(),
         "The nominal frequency must be a positive, finite number of hertz.",
     ),
     (
-        "rate_out_of_range",
+        RateErrorKind::RateOutOfRange.as_str(),
         "The computed rate is outside the first-order model's range; the input is not a physical clock near the Earth or Moon.",
     ),
     (
@@ -191,27 +197,27 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "The two clocks of a comparison name different references; compare them against one reference.",
     ),
     (
-        "invalid_value",
+        RateErrorKind::InvalidValue.as_str(),
         "A value cannot be used; `detail` says why and `field` names it.",
     ),
     (
-        "inside_earth",
+        SignalErrorKind::InsideEarth.as_str(),
         "A signal end point is inside the Earth; check units (metres) and frame.",
     ),
     (
-        "beyond_range",
+        SignalErrorKind::BeyondRange.as_str(),
         "A signal end point is farther than the model's range from the geocentre.",
     ),
     (
-        "coincident_endpoints",
+        SignalErrorKind::CoincidentEndpoints.as_str(),
         "The transmitter and the receiver are at the same place: there is no path.",
     ),
     (
-        "path_through_earth",
+        SignalErrorKind::PathThroughEarth.as_str(),
         "The straight path between the end points passes through the Earth: the receiver cannot see the transmitter.",
     ),
     (
-        "no_convergence",
+        SignalErrorKind::NoConvergence.as_str(),
         "The light-time iteration did not converge; check that the states are physical.",
     ),
     (
@@ -223,12 +229,12 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "A signal end point must give either a position (with a frame) or a ground site, not both or neither.",
     ),
     (
-        "not_visible",
+        SignalErrorKind::NotVisible.as_str(),
         "The satellite is below a station's horizon: no two-way link is possible.",
     ),
     // Proper time along an ephemeris (JSON, CCSDS OEM, SP3).
     (
-        "sampling_too_coarse",
+        ProperTimeErrorKind::SamplingTooCoarse.as_str(),
         "The states of an object are too far apart for its motion (it sweeps hundreds of radians between two samples); sample the trajectory more densely.",
     ),
     (
@@ -252,11 +258,11 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "A number in the file cannot be read; `line` says where.",
     ),
     (
-        "bad_option",
+        ProperTimeErrorKind::BadOption.as_str(),
         "An option is out of range (interpolation points 2 to 16, positive gap limit, output step of at least 1 ms and at most 1 000 000 output epochs per object).",
     ),
     (
-        "epochs_not_increasing",
+        ProperTimeErrorKind::EpochsNotIncreasing.as_str(),
         "Epochs of an object must increase strictly (no duplicates); `object` and `index` name the first offending state.",
     ),
     (
@@ -276,7 +282,7 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "An object has fewer states than the interpolation window needs; send more states or lower `interpolation_points`.",
     ),
     (
-        "too_few_epochs",
+        ProperTimeErrorKind::TooFewEpochs.as_str(),
         "Fewer output epochs than the integration needs.",
     ),
     (
@@ -428,6 +434,134 @@ mod tests {
                 error.code()
             );
         }
+    }
+
+    #[test]
+    fn every_physics_code_is_listed() {
+        // The codes of the physics error kinds (the one place each is written) all have a row.
+        let codes = TimeErrorKind::NAMES
+            .iter()
+            .chain(&RateErrorKind::NAMES)
+            .chain(&SignalErrorKind::NAMES)
+            .chain(&ProperTimeErrorKind::NAMES);
+        for code in codes {
+            assert!(
+                meaning(code).is_some(),
+                "{code:?} is missing from PROBLEM_CODES"
+            );
+        }
+    }
+
+    #[test]
+    fn unknown_name_meanings_list_the_vocabulary() {
+        // The meaning of each "unknown name" code names every spelling the parser reads.
+        use crate::physics::rate::{Frame, GravityModel, HeightReference, RateReference};
+        use crate::physics::time::formats::InstantFormat;
+        use crate::physics::time::scale::Scale;
+        use crate::physics::vocabulary::Vocabulary;
+        fn check<V: Vocabulary>(code: &str) {
+            let text = meaning(code).unwrap_or_default();
+            for name in V::SPELLINGS {
+                assert!(text.contains(name), "{code}: {name} is not in {text:?}");
+            }
+        }
+        check::<Scale>("unknown_scale");
+        check::<InstantFormat>("unknown_format");
+        check::<RateReference>("unknown_reference");
+        check::<GravityModel>("unknown_gravity_model");
+        check::<Frame>("unknown_frame");
+        check::<HeightReference>("unknown_height_reference");
+    }
+
+    #[test]
+    fn documented_422_lists_name_the_physics_codes() {
+        // Each operation's 422 description names the codes its physics computation answers, and
+        // every `snake_case` word it names that is a code is in PROBLEM_CODES.
+        let document: serde_json::Value =
+            serde_json::to_value(<crate::api::openapi::ApiDoc as utoipa::OpenApi>::openapi())
+                .unwrap_or_default();
+        let described = |method: &str, path: &str| {
+            document["paths"][path][method]["responses"]["422"]["description"]
+                .as_str()
+                .unwrap_or_default()
+                .to_string()
+        };
+        let words = |text: &str| -> Vec<String> {
+            text.split(|c: char| !(c.is_ascii_alphanumeric() || c == '_'))
+                .map(str::to_string)
+                .collect()
+        };
+        let expect = |method: &str, path: &str, codes: &[&str]| {
+            let text = described(method, path);
+            let named = words(&text);
+            for code in codes {
+                assert!(
+                    named.iter().any(|word| word == code),
+                    "{method} {path}: the 422 description does not name {code}"
+                );
+            }
+        };
+        let rate: Vec<&str> = RateErrorKind::ALL
+            .iter()
+            .filter(|kind| **kind != RateErrorKind::InvalidValue)
+            .map(|kind| kind.code())
+            .collect();
+        expect("post", "/v1/clock/rate", &rate);
+        expect("get", "/v1/time/convert", &TimeErrorKind::NAMES);
+        let path: Vec<&str> = SignalErrorKind::ALL
+            .iter()
+            .filter(|kind| **kind != SignalErrorKind::NotVisible)
+            .map(|kind| kind.as_str())
+            .collect();
+        expect("post", "/v1/signal/path", &path);
+        expect(
+            "post",
+            "/v1/signal/two-way",
+            &[
+                SignalErrorKind::NotVisible.as_str(),
+                SignalErrorKind::InvalidValue.as_str(),
+            ],
+        );
+        // `too_few_epochs` cannot reach the endpoint: the readers require two states.
+        let proper_time: Vec<&str> = ProperTimeErrorKind::ALL
+            .iter()
+            .filter(|kind| **kind != ProperTimeErrorKind::TooFewEpochs)
+            .map(|kind| kind.as_str())
+            .collect();
+        expect("post", "/v1/clock/proper-time", &proper_time);
+        let paths = document["paths"].as_object().cloned().unwrap_or_default();
+        let mut checked = 0;
+        for (path, operations) in paths {
+            for (method, operation) in operations.as_object().cloned().unwrap_or_default() {
+                let text = operation["responses"]["422"]["description"]
+                    .as_str()
+                    .unwrap_or_default()
+                    .to_string();
+                for word in words(&text) {
+                    let is_code_like = word.contains('_')
+                        && word
+                            .bytes()
+                            .all(|b| b.is_ascii_lowercase() || b == b'_' || b.is_ascii_digit());
+                    // Field and format names the descriptions mention beside the codes.
+                    let known_field = [
+                        "clock_b",
+                        "ground_site",
+                        "latitude_deg",
+                        "position_m",
+                        "unix_s",
+                        "gnss_week",
+                    ];
+                    if is_code_like
+                        && !known_field.contains(&word.as_str())
+                        && meaning(&word).is_none()
+                    {
+                        panic!("{method} {path}: {word} is not a listed problem code");
+                    }
+                }
+                checked += usize::from(!text.is_empty());
+            }
+        }
+        assert!(checked >= 7, "only {checked} documented 422 lists found");
     }
 
     #[test]

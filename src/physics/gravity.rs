@@ -9,6 +9,7 @@ use crate::physics::constants::{
     EARTH_ROTATION_RAD_S, EQUATORIAL_RADIUS_EARTH_M, GM_EARTH_M3_S2, GM_MOON_M3_S2, J2_EARTH,
 };
 use crate::physics::rate_error::{require_finite, require_finite_vector, RateError, RateErrorKind};
+use crate::physics::vocabulary::vocabulary;
 
 /// Smallest distance from a body's centre at which a potential is evaluated, m. Below it the
 /// point-mass potential is meaningless (and 1/r would overflow); callers apply tighter bounds.
@@ -91,13 +92,15 @@ pub fn centrifugal_potential_m2_s2(position_m: [f64; 3]) -> Result<f64, RateErro
     Ok(0.5 * EARTH_ROTATION_RAD_S * EARTH_ROTATION_RAD_S * axial_distance_squared_m2)
 }
 
-/// Which Earth gravity model a computation uses.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum GravityModel {
-    /// U = GM/r.
-    PointMass,
-    /// U = GM/r (1 - J2 (a_E/r)^2 P2(sin phi)).
-    J2,
+vocabulary! {
+    /// Which Earth gravity model a computation uses.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum GravityModel {
+        /// U = GM/r.
+        PointMass = "point_mass",
+        /// U = GM/r (1 - J2 (a_E/r)^2 P2(sin phi)).
+        J2 = "j2",
+    }
 }
 
 /// The Earth's Newtonian potential U(x) for the chosen model (m^2/s^2).

@@ -11,3 +11,4 @@ pub mod rate;
 pub mod rate_error;
 pub mod signal;
 pub mod time;
+pub mod vocabulary;

@@ -3,52 +3,44 @@
 
 use std::fmt;
 
-/// What kind of failure a [`RateError`] is; [`RateErrorKind::code`] is its stable name.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum RateErrorKind {
-    /// A value that is not a finite number (NaN, infinite, or a norm that overflows).
-    NotFinite,
-    /// An inertial speed at or above the speed of light.
-    SpeedNotBelowC,
-    /// A position (or periapsis, or height) inside the body, deeper than any real clock.
-    BelowSurface,
-    /// A position (or apoapsis, or height) beyond the range where the model applies.
-    BeyondModelRange,
-    /// A semi-major axis that is zero or negative.
-    InvalidSemiMajorAxis,
-    /// An eccentricity outside [0, 1).
-    InvalidEccentricity,
-    /// A latitude outside [-90, 90] degrees.
-    LatitudeOutOfRange,
-    /// An angle so large that its fraction of a turn is lost (|value| above 1e6 degrees).
-    AngleOutOfRange,
-    /// A gravity model the computation does not offer.
-    UnsupportedGravityModel,
-    /// A nominal frequency that is zero or negative.
-    InvalidFrequency,
-    /// A fractional rate too large for the frequency answer (|y| above 1e-3).
-    RateOutOfRange,
-    /// Any other value that cannot be used.
-    InvalidValue,
+use crate::physics::vocabulary::vocabulary;
+
+vocabulary! {
+    /// What kind of failure a [`RateError`] is; its spelling ([`RateErrorKind::code`]) is the
+    /// stable problem code, written only here.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum RateErrorKind {
+        /// A value that is not a finite number (NaN, infinite, or a norm that overflows).
+        NotFinite = "not_finite",
+        /// An inertial speed at or above the speed of light.
+        SpeedNotBelowC = "speed_not_below_c",
+        /// A position (or periapsis, or height) inside the body, deeper than any real clock.
+        BelowSurface = "below_surface",
+        /// A position (or apoapsis, or height) beyond the range where the model applies.
+        BeyondModelRange = "beyond_model_range",
+        /// A semi-major axis that is zero or negative.
+        InvalidSemiMajorAxis = "invalid_semi_major_axis",
+        /// An eccentricity outside [0, 1).
+        InvalidEccentricity = "invalid_eccentricity",
+        /// A latitude outside [-90, 90] degrees.
+        LatitudeOutOfRange = "latitude_out_of_range",
+        /// An angle so large that its fraction of a turn is lost (|value| above 1e6 degrees).
+        AngleOutOfRange = "angle_out_of_range",
+        /// A gravity model the computation does not offer.
+        UnsupportedGravityModel = "unsupported_gravity_model",
+        /// A nominal frequency that is zero or negative.
+        InvalidFrequency = "invalid_frequency",
+        /// A fractional rate too large for the frequency answer (|y| above 1e-3).
+        RateOutOfRange = "rate_out_of_range",
+        /// Any other value that cannot be used.
+        InvalidValue = "invalid_value",
+    }
 }
 
 impl RateErrorKind {
     /// The stable snake_case code of this kind (for example `speed_not_below_c`).
-    pub fn code(self) -> &'static str {
-        match self {
-            Self::NotFinite => "not_finite",
-            Self::SpeedNotBelowC => "speed_not_below_c",
-            Self::BelowSurface => "below_surface",
-            Self::BeyondModelRange => "beyond_model_range",
-            Self::InvalidSemiMajorAxis => "invalid_semi_major_axis",
-            Self::InvalidEccentricity => "invalid_eccentricity",
-            Self::LatitudeOutOfRange => "latitude_out_of_range",
-            Self::AngleOutOfRange => "angle_out_of_range",
-            Self::UnsupportedGravityModel => "unsupported_gravity_model",
-            Self::InvalidFrequency => "invalid_frequency",
-            Self::RateOutOfRange => "rate_out_of_range",
-            Self::InvalidValue => "invalid_value",
-        }
+    pub const fn code(self) -> &'static str {
+        self.as_str()
     }
 }
 

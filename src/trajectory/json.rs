@@ -81,8 +81,9 @@ pub fn from_document(
         TrajectoryError::new(
             "unsupported_frame",
             format!(
-                "frame {:?} is not supported; expected GCRF, EME2000, ICRF (inertial) or ITRF... (Earth-fixed)",
-                document.frame
+                "frame {:?} is not supported; expected {}, in upper case",
+                document.frame,
+                Frame::names_in_words()
             ),
         )
     })?;

@@ -40,18 +40,40 @@ pub enum Frame {
     EarthFixed,
 }
 
+/// Exact names of the geocentric inertial frames a JSON ephemeris may name.
+pub const INERTIAL_FRAME_NAMES: &[&str] = &["GCRF", "EME2000", "J2000", "ICRF"];
+/// Exact names of Earth-fixed frames a JSON ephemeris may name (besides the families).
+pub const EARTH_FIXED_FRAME_NAMES: &[&str] = &["ECEF", "WGS84", "WGS-84"];
+/// Prefixes of the Earth-fixed frame families (ITRF, ITRF2014, ITRF2020, IGS20...).
+pub const EARTH_FIXED_FRAME_FAMILIES: &[&str] = &["ITRF", "IGS"];
+
 impl Frame {
-    /// Reads a frame name (ASCII case ignored): EME2000, J2000, GCRF, ICRF are inertial;
-    /// ITRF, ITRF93, ITRF-93, ITRF97, ITRF2000, ITRF2005, ITRF2008, ITRF2014, ITRF2020, IGS*,
-    /// ECEF and WGS84 are Earth-fixed.
+    /// Reads a frame name written exactly (upper case, no surrounding spaces):
+    /// [`INERTIAL_FRAME_NAMES`] are inertial; [`EARTH_FIXED_FRAME_NAMES`] and every name that
+    /// starts with one of [`EARTH_FIXED_FRAME_FAMILIES`] are Earth-fixed.
     pub fn from_name(name: &str) -> Option<Frame> {
-        let upper = name.trim().to_ascii_uppercase();
-        match upper.as_str() {
-            "EME2000" | "J2000" | "GCRF" | "ICRF" => Some(Frame::Inertial),
-            "ECEF" | "WGS84" | "WGS-84" => Some(Frame::EarthFixed),
-            _ if upper.starts_with("ITRF") || upper.starts_with("IGS") => Some(Frame::EarthFixed),
-            _ => None,
+        if INERTIAL_FRAME_NAMES.contains(&name) {
+            Some(Frame::Inertial)
+        } else if EARTH_FIXED_FRAME_NAMES.contains(&name)
+            || EARTH_FIXED_FRAME_FAMILIES
+                .iter()
+                .any(|prefix| name.starts_with(prefix))
+        {
+            Some(Frame::EarthFixed)
+        } else {
+            None
         }
+    }
+
+    /// The frame names [`Frame::from_name`] reads, in words: "GCRF, EME2000, J2000, ICRF
+    /// (inertial), ECEF, WGS84, WGS-84 or a name of the ITRF or IGS families (Earth-fixed)".
+    pub fn names_in_words() -> String {
+        format!(
+            "{} (inertial), {} or a name of the {} families (Earth-fixed)",
+            INERTIAL_FRAME_NAMES.join(", "),
+            EARTH_FIXED_FRAME_NAMES.join(", "),
+            EARTH_FIXED_FRAME_FAMILIES.join(" or ")
+        )
     }
 
     /// The name of the family.

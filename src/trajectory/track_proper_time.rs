@@ -47,6 +47,9 @@ fn from_physics(error: ProperTimeError, object: &str) -> TrajectoryError {
     }
 }
 
+/// The model note of [`proper_time_of_track`]: which coordinate time the integration runs on.
+pub const COORDINATE_TIME_NOTE: &str = "coordinate time is TT from the ephemeris epochs (converted through the leap-second table, so a leap second inside the span is handled); against TCG the TCG - TT drift L_G/(1 - L_G) is removed";
+
 /// Integrates the proper time of one track at its own epochs.
 ///
 /// `rate(position_m, velocity_m_s)` returns the (velocity, gravity) parts of the fractional

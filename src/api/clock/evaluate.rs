@@ -5,10 +5,10 @@ use super::answer::{FrequencyAnswer, PeriodicAnswer, RateAnswer, RateSplit};
 use super::notes;
 use super::types::{GroundSiteInput, LunarSiteInput, OrbitInput, RateItem, StateInput};
 use crate::api::error::ApiError;
-use crate::api::names::one_of;
+use crate::api::names::parse_named;
 use crate::physics::rate::{
     frequency_offset, ground_site_rate, lunar_site_rate, orbit_rate, state_rate, Anomaly, Frame,
-    GravityModel, GroundHeight, GroundSite, KeplerianOrbit, LunarSite, RateError, RateParts,
+    GravityModel, GroundSite, HeightReference, KeplerianOrbit, LunarSite, RateError, RateParts,
     RateReference, StateVector,
 };
 
@@ -62,52 +62,14 @@ pub struct Evaluated {
     pub parts: RateParts,
 }
 
-/// Reads `TT` or `TCG` (written exactly so).
+/// Reads `TT` or `TCG` (written exactly so); 422 `unknown_reference` naming `field`.
 pub fn parse_reference(text: &str, field: &str) -> Result<RateReference, ApiError> {
-    one_of(
-        text,
-        &[("TT", RateReference::Tt), ("TCG", RateReference::Tcg)],
-    )
-    .ok_or_else(|| {
-        ApiError::unprocessable(
-            "unknown_reference",
-            format!("unknown reference `{text}`; expected TT or TCG (written exactly so)"),
-        )
-        .with_field(field)
-    })
+    parse_named(text, "unknown_reference", "reference", field)
 }
 
+/// Reads `point_mass` or `j2` (written exactly so); 422 `unknown_gravity_model` naming `field`.
 pub fn parse_gravity_model(text: &str, field: &str) -> Result<GravityModel, ApiError> {
-    one_of(
-        text,
-        &[
-            ("point_mass", GravityModel::PointMass),
-            ("j2", GravityModel::J2),
-        ],
-    )
-    .ok_or_else(|| {
-        ApiError::unprocessable(
-            "unknown_gravity_model",
-            format!(
-                "unknown gravity model `{text}`; expected point_mass or j2 (written exactly so)"
-            ),
-        )
-        .with_field(field)
-    })
-}
-
-pub fn reference_name(reference: RateReference) -> &'static str {
-    match reference {
-        RateReference::Tt => "TT",
-        RateReference::Tcg => "TCG",
-    }
-}
-
-pub fn model_name(model: GravityModel) -> &'static str {
-    match model {
-        GravityModel::PointMass => "point_mass",
-        GravityModel::J2 => "j2",
-    }
+    parse_named(text, "unknown_gravity_model", "gravity model", field)
 }
 
 /// The one subject of an item.
@@ -225,7 +187,7 @@ pub fn evaluate_item(
             let model = requested_model.unwrap_or(GravityModel::PointMass);
             let (parts, periodic) = state_answer(state, reference, model, path, &origins)?;
             notes.extend(notes::state(model));
-            (parts, model_name(model), Some(periodic), None)
+            (parts, model.as_str(), Some(periodic), None)
         }
         Subject::Orbit(orbit) => {
             let model = match (item_model, defaults.gravity_model) {
@@ -239,11 +201,12 @@ pub fn evaluate_item(
             let (parts, periodic, inclination) =
                 orbit_answer(orbit, reference, model, path, &origins)?;
             notes.extend(notes::orbit());
-            (parts, model_name(model), Some(periodic), inclination)
+            (parts, model.as_str(), Some(periodic), inclination)
         }
         Subject::Ground(site) => {
-            let (parts, label) = ground_answer(site, reference, requested_model, path, &origins)?;
-            notes.extend(notes::ground(label));
+            let (parts, label, ground_notes) =
+                ground_answer(site, reference, requested_model, path, &origins)?;
+            notes.extend(ground_notes);
             (parts, label, None, None)
         }
         Subject::Lunar(site) => {
@@ -270,7 +233,7 @@ pub fn evaluate_item(
     let us = parts.to_microseconds_per_day();
     let answer = RateAnswer {
         subject: subject.key().to_string(),
-        reference: reference_name(reference).to_string(),
+        reference: reference.as_str().to_string(),
         gravity_model: model_label.to_string(),
         fractional: RateSplit {
             sr: parts.sr,
@@ -297,20 +260,12 @@ fn state_answer(
     path: &str,
     origins: &Origins<'_>,
 ) -> Result<(RateParts, PeriodicAnswer), ApiError> {
-    let frame = one_of(
+    let frame: Frame = parse_named(
         &state.frame,
-        &[("GCRS", Frame::Gcrs), ("ITRF", Frame::Itrf)],
-    )
-    .ok_or_else(|| {
-        ApiError::unprocessable(
-            "unknown_frame",
-            format!(
-                "unknown frame `{}`; expected GCRS or ITRF (written exactly so)",
-                state.frame
-            ),
-        )
-        .with_field(format!("{path}.state.frame"))
-    })?;
+        "unknown_frame",
+        "frame",
+        format!("{path}.state.frame"),
+    )?;
     let vector = StateVector {
         frame,
         position_m: state.position_m,
@@ -378,25 +333,21 @@ fn ground_answer(
     requested_model: Option<GravityModel>,
     path: &str,
     origins: &Origins<'_>,
-) -> Result<(RateParts, &'static str), ApiError> {
-    let above_geoid = match site.height_reference.as_deref() {
-        None => false,
-        Some(text) => one_of(text, &[("ellipsoid", false), ("geoid", true)]).ok_or_else(|| {
-            ApiError::unprocessable(
-                "unknown_height_reference",
-                "unknown height reference; expected ellipsoid or geoid (written exactly so)",
-            )
-            .with_field(format!("{path}.ground_site.height_reference"))
-        })?,
+) -> Result<(RateParts, &'static str, Vec<String>), ApiError> {
+    let height_reference = match site.height_reference.as_deref() {
+        None => HeightReference::Ellipsoid,
+        Some(text) => parse_named(
+            text,
+            "unknown_height_reference",
+            "height reference",
+            format!("{path}.ground_site.height_reference"),
+        )?,
     };
     let model = requested_model.unwrap_or(GravityModel::J2);
-    let (height, label) = if above_geoid {
-        (
-            GroundHeight::AboveGeoidM(site.height_m),
-            "grs80_normal_gravity",
-        )
-    } else {
-        (GroundHeight::EllipsoidalM(site.height_m), model_name(model))
+    let height = height_reference.height(site.height_m);
+    let label = match height_reference {
+        HeightReference::Geoid => "grs80_normal_gravity",
+        HeightReference::Ellipsoid => model.as_str(),
     };
     let ground = GroundSite {
         latitude_deg: site.latitude_deg,
@@ -404,5 +355,5 @@ fn ground_answer(
         height,
     };
     let parts = ground_site_rate(&ground, reference, model).map_err(|e| origins.error(e))?;
-    Ok((parts, label))
+    Ok((parts, label, notes::ground(height_reference, model)))
 }

@@ -4,27 +4,7 @@ use serde::Deserialize;
 use utoipa::ToSchema;
 
 use crate::api::names::{FrameName, HeightReferenceName, PositionM, VelocityMS};
-
-/// Names of the reference time scales (documentation of the `reference` strings).
-#[derive(Debug, Clone, Copy, ToSchema)]
-#[allow(clippy::upper_case_acronyms, dead_code)]
-pub enum ReferenceName {
-    /// Terrestrial Time: a clock at rest on the geoid has rate 0.
-    TT,
-    /// Geocentric Coordinate Time (TT runs slower than TCG by L_G = 6.969290134e-10).
-    TCG,
-}
-
-/// Names of the Earth gravity models (documentation of the `gravity_model` strings).
-#[derive(Debug, Clone, Copy, ToSchema)]
-#[serde(rename_all = "snake_case")]
-#[allow(dead_code)]
-pub enum GravityModelName {
-    /// U = GM/r with GM of IERS Conventions (2010) table 1.1.
-    PointMass,
-    /// U = GM/r (1 - J2 (a_E/r)^2 P2(sin phi)) with GM, J2, a_E of IERS Conventions (2010).
-    J2,
-}
+pub use crate::api::names::{GravityModelName, ReferenceName};
 
 /// A geocentric state vector.
 #[derive(Debug, Clone, Deserialize, ToSchema)]

@@ -4,43 +4,32 @@ use std::fmt::Write as _;
 
 use super::body::{ephemeris_problem, ProperTimeRequest};
 use super::types::{ObjectOutput, ProperTimeAnswer, SampleOutput, SummaryOutput};
-use crate::api::clock::evaluate::{model_name, reference_name};
 use crate::api::error::ApiError;
 use crate::api::time::types::InstantForms;
-use crate::physics::gravity::{dot, earth_potential_m2_s2, GravityModel};
-use crate::physics::proper_time::{relative_to_tcg, ProperTimeOptions};
-use crate::physics::rate::{RateParts, RateReference};
+use crate::physics::gravity::GravityModel;
+use crate::physics::proper_time::{
+    relative_to_tcg, ProperTimeOptions, EARTH_FIXED_NOTE, INTEGRATION_NOTE, PERIODIC_NOTE,
+};
+use crate::physics::rate::{inertial_rate_function, RateReference, INERTIAL_J2_NOTE};
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::formats::{day_reading, write_instant, write_iso, ISO_DECIMALS};
 use crate::physics::time::instant::Instant;
 use crate::physics::time::leap_seconds::LeapTable;
+use crate::trajectory::track_proper_time::COORDINATE_TIME_NOTE;
 use crate::trajectory::{proper_time_of_ephemeris, Frame, TrackProperTime};
 
-/// The fractional rate against TT split into (velocity, gravity) parts at an inertial state
-/// (IERS Conventions (2010) eq. 10.6, through [`RateParts::from_speed_and_potential`]).
-fn rate_against_tt(model: GravityModel) -> impl Fn(&[f64; 3], &[f64; 3]) -> (f64, f64) {
-    move |position_m, velocity_m_s| {
-        let potential = earth_potential_m2_s2(model, *position_m).unwrap_or(f64::NAN);
-        let parts = RateParts::from_speed_and_potential(
-            RateReference::Tt,
-            dot(*velocity_m_s, *velocity_m_s),
-            potential,
-        );
-        (parts.sr, parts.gr)
-    }
-}
-
 fn model_notes(request: &ProperTimeRequest) -> Vec<String> {
-    let mut notes = vec![
-        "d(tau)/dt - 1 = -(v^2/2 + U)/c^2 + L_G against TT (IERS Conventions (2010) eq. 10.6), integrated with Gauss-Legendre quadrature between output epochs and compensated summation".to_string(),
-        "coordinate time is TT from the ephemeris epochs (converted through the leap-second table, so a leap second inside the span is handled); against TCG the TCG - TT drift L_G/(1 - L_G) is removed".to_string(),
-        "Earth-fixed tracks: inertial speed from v + omega_E x r with the nominal omega_E; precession, nutation and polar motion are neglected (they change neither |r|, z nor r.v to first order)".to_string(),
-        "the periodic term is -2 r.v / c^2 (IS-GPS-200 20.3.3.3.3.1); the residual is tau - t minus that term and the least-squares line".to_string(),
-    ];
-    if request.gravity_model == GravityModel::J2 {
-        notes.push("J2 potential with the IERS Conventions (2010) GM, J2 and a_E; the GCRS pole stands in for the Earth's axis for inertial tracks".to_string());
-    }
-    notes
+    let j2 = (request.gravity_model == GravityModel::J2).then_some(INERTIAL_J2_NOTE);
+    [
+        INTEGRATION_NOTE,
+        COORDINATE_TIME_NOTE,
+        EARTH_FIXED_NOTE,
+        PERIODIC_NOTE,
+    ]
+    .into_iter()
+    .chain(j2)
+    .map(String::from)
+    .collect()
 }
 
 fn instant_forms(instant: &Instant, table: &LeapTable) -> Result<InstantForms, ApiError> {
@@ -97,11 +86,7 @@ fn object_output(
     });
     Ok(ObjectOutput {
         time_scale: track.start.scale().as_str().to_string(),
-        frame: match frame {
-            Frame::Inertial => "inertial",
-            Frame::EarthFixed => "earth_fixed",
-        }
-        .to_string(),
+        frame: frame.as_str().to_string(),
         state_count,
         summary: SummaryOutput {
             start: instant_forms(&track.start, table)?,
@@ -129,7 +114,7 @@ pub fn compute(
         &request.interpolation,
         &ProperTimeOptions::default(),
         &context,
-        rate_against_tt(request.gravity_model),
+        inertial_rate_function(RateReference::Tt, request.gravity_model),
     )
     .map_err(ephemeris_problem)?;
     let objects = tracks
@@ -138,8 +123,8 @@ pub fn compute(
         .map(|(track, input)| object_output(track, request, table, input.frame, input.states.len()))
         .collect::<Result<Vec<_>, _>>()?;
     Ok(ProperTimeAnswer {
-        reference: reference_name(request.reference).to_string(),
-        gravity_model: model_name(request.gravity_model).to_string(),
+        reference: request.reference.as_str().to_string(),
+        gravity_model: request.gravity_model.as_str().to_string(),
         objects,
         model_notes: model_notes(request),
     })

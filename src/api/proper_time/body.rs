@@ -86,8 +86,9 @@ fn check_json_names(input: &EphemerisInput) -> Result<(), ApiError> {
         return Err(ApiError::unprocessable(
             "unsupported_frame",
             format!(
-                "frame {:?} is not supported; expected GCRF, EME2000, J2000, ICRF (inertial), ECEF, WGS84, WGS-84 or a name of the ITRF or IGS families (Earth-fixed), in upper case",
-                input.frame
+                "frame {:?} is not supported; expected {}, in upper case",
+                input.frame,
+                crate::trajectory::Frame::names_in_words()
             ),
         )
         .with_field("frame"));

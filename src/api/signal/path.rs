@@ -8,7 +8,7 @@ use super::types::{
 };
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, TimeoutProblem};
 use crate::api::extract::JsonBody;
-use crate::api::names::{one_of, parse_format, parse_scale};
+use crate::api::names::{parse_format, parse_named, parse_scale};
 use crate::api::state::AppState;
 use crate::api::time::types::InstantForms;
 use crate::physics::constants::SPEED_OF_LIGHT_M_S;
@@ -31,13 +31,7 @@ fn invalid_endpoint(field: String, detail: &str) -> ApiError {
 }
 
 fn parse_frame(text: &str, field: String) -> Result<Frame, ApiError> {
-    one_of(text, &[("GCRS", Frame::Gcrs), ("ITRF", Frame::Itrf)]).ok_or_else(|| {
-        ApiError::unprocessable(
-            "unknown_frame",
-            format!("unknown frame `{text}`; expected GCRS or ITRF (written exactly so)"),
-        )
-        .with_field(field)
-    })
+    parse_named(text, "unknown_frame", "frame", field)
 }
 
 fn resolve(owner: &str, input: &PathEndpointInput) -> Result<Resolved, ApiError> {
@@ -144,10 +138,7 @@ pub async fn signal_path(
         }
         ApiError::from(error)
     })?;
-    let frame = match geometry.frame {
-        Frame::Gcrs => "GCRS",
-        Frame::Itrf => "ITRF",
-    };
+    let frame = geometry.frame.as_str();
     Ok(Json(SignalPathAnswer {
         epoch,
         frame: frame.to_string(),

@@ -1,6 +1,7 @@
 //! A two-body (Keplerian) orbit as an analytic trajectory, for checks and benchmarks.
 
 use super::Trajectory;
+use crate::physics::rate::orbit::solve_kepler_equation_rad;
 
 /// Classical elements of a geocentric Keplerian orbit.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -27,21 +28,11 @@ impl KeplerOrbit {
         (self.gm_m3_s2 / self.semi_major_axis_m.powi(3)).sqrt()
     }
 
-    /// Eccentric anomaly E at `t_s`: Newton's method on Kepler's equation E - e sin E = M
-    /// (e.g. Vallado, Fundamentals of Astrodynamics and Applications, algorithm 2), iterated to
-    /// a step below 1e-15 rad.
+    /// Eccentric anomaly E at `t_s`, in [0, 2 pi): Kepler's equation E - e sin E = M by
+    /// [`solve_kepler_equation_rad`] (Newton's method to a step below 1e-15 rad).
     pub fn eccentric_anomaly_rad(&self, t_s: f64) -> f64 {
         let mean = self.mean_anomaly_at_zero_rad + self.mean_motion_rad_s() * t_s;
-        let e = self.eccentricity;
-        let mut anomaly = if e < 0.8 { mean } else { std::f64::consts::PI };
-        for _ in 0..50 {
-            let step = (anomaly - e * anomaly.sin() - mean) / (1.0 - e * anomaly.cos());
-            anomaly -= step;
-            if step.abs() < 1e-15 {
-                break;
-            }
-        }
-        anomaly
+        solve_kepler_equation_rad(mean, self.eccentricity)
     }
 }
 

@@ -31,9 +31,12 @@ mod series;
 pub use quadrature::{CompensatedSum, GaussLegendre, MAX_NODES};
 pub use series::{
     kepler_periodic_term_s, relative_to_tcg, ProperTimeSample, ProperTimeSeries, ProperTimeSummary,
+    PERIODIC_NOTE,
 };
 
 use std::fmt;
+
+use crate::physics::vocabulary::vocabulary;
 
 use crate::physics::constants::{EARTH_ROTATION_RAD_S, SPEED_OF_LIGHT_SQUARED_M2_S2};
 
@@ -52,6 +55,9 @@ where
         self(t_s)
     }
 }
+
+/// The model note of [`EarthFixed`] trajectories.
+pub const EARTH_FIXED_NOTE: &str = "Earth-fixed tracks: inertial speed from v + omega_E x r with the nominal omega_E; precession, nutation and polar motion are neglected (they change neither |r|, z nor r.v to first order)";
 
 /// An Earth-fixed trajectory seen with inertial-equivalent velocity.
 #[derive(Debug, Clone)]
@@ -96,6 +102,25 @@ impl Default for ProperTimeOptions {
     }
 }
 
+vocabulary! {
+    /// The stable codes of [`ProperTimeError`], written only here.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum ProperTimeErrorKind {
+        /// An option out of range.
+        BadOption = "bad_option",
+        /// Fewer than two output epochs.
+        TooFewEpochs = "too_few_epochs",
+        /// A value that is not finite.
+        NotFinite = "not_finite",
+        /// Epochs that do not increase strictly.
+        EpochsNotIncreasing = "epochs_not_increasing",
+        /// A speed at or above c along the trajectory.
+        SpeedNotBelowC = "speed_not_below_c",
+        /// Samples too far apart for the motion.
+        SamplingTooCoarse = "sampling_too_coarse",
+    }
+}
+
 /// Why an integration was refused.
 #[derive(Debug, Clone, PartialEq)]
 pub struct ProperTimeError {
@@ -118,13 +143,20 @@ impl fmt::Display for ProperTimeError {
 
 impl std::error::Error for ProperTimeError {}
 
-fn error(code: &'static str, index: Option<usize>, message: impl Into<String>) -> ProperTimeError {
+fn error(
+    kind: ProperTimeErrorKind,
+    index: Option<usize>,
+    message: impl Into<String>,
+) -> ProperTimeError {
     ProperTimeError {
-        code,
+        code: kind.as_str(),
         message: message.into(),
         index,
     }
 }
+
+/// The model note of [`integrate_proper_time`] with the rate against TT.
+pub const INTEGRATION_NOTE: &str = "d(tau)/dt - 1 = -(v^2/2 + U)/c^2 + L_G against TT (IERS Conventions (2010) eq. 10.6), integrated with Gauss-Legendre quadrature between output epochs and compensated summation";
 
 /// Integrates d(tau)/dt - 1 along `trajectory` between consecutive `epochs_s`.
 ///
@@ -144,24 +176,28 @@ where
 {
     if options.relative_tolerance.is_nan() || options.relative_tolerance <= 0.0 {
         return Err(error(
-            "bad_option",
+            ProperTimeErrorKind::BadOption,
             None,
             "relative_tolerance must be positive",
         ));
     }
     if epochs_s.len() < 2 {
         return Err(error(
-            "too_few_epochs",
+            ProperTimeErrorKind::TooFewEpochs,
             None,
             format!("{} output epochs; at least two are needed", epochs_s.len()),
         ));
     }
     if let Some(index) = epochs_s.iter().position(|t| !t.is_finite()) {
-        return Err(error("not_finite", Some(index), "the epoch is not finite"));
+        return Err(error(
+            ProperTimeErrorKind::NotFinite,
+            Some(index),
+            "the epoch is not finite",
+        ));
     }
     if let Some(index) = epochs_s.windows(2).position(|pair| pair[1] <= pair[0]) {
         return Err(error(
-            "epochs_not_increasing",
+            ProperTimeErrorKind::EpochsNotIncreasing,
             Some(index + 1),
             "output epochs must be strictly increasing",
         ));
@@ -182,14 +218,14 @@ where
         let length_s = end_s - start_s;
         if !(length_s * angular_rate).is_finite() {
             return Err(error(
-                "not_finite",
+                ProperTimeErrorKind::NotFinite,
                 Some(index),
                 "the state at the start of this interval has a zero or non-finite position or velocity",
             ));
         }
         if dot3(&velocity_m_s, &velocity_m_s) >= SPEED_OF_LIGHT_SQUARED_M2_S2 {
             return Err(error(
-                "speed_not_below_c",
+                ProperTimeErrorKind::SpeedNotBelowC,
                 Some(index),
                 "the (interpolated) speed at the start of this interval is at or above c; near-duplicate epochs or inconsistent positions make the derived velocity meaningless",
             ));
@@ -197,7 +233,7 @@ where
         let Some((nodes, pieces)) = rules.plan(length_s * angular_rate, options.relative_tolerance)
         else {
             return Err(error(
-                "sampling_too_coarse",
+                ProperTimeErrorKind::SamplingTooCoarse,
                 Some(index),
                 format!(
                     "the object moves through {:.0} rad of its geocentric direction in this interval of {length_s} s; sample the trajectory more densely",
@@ -220,7 +256,7 @@ where
         gravity_part *= 0.5 * piece_s;
         if !(velocity_part.is_finite() && gravity_part.is_finite()) {
             return Err(error(
-                "not_finite",
+                ProperTimeErrorKind::NotFinite,
                 Some(index),
                 "the rate is not finite inside this interval (check the trajectory and the rate function)",
             ));

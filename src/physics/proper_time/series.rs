@@ -49,6 +49,9 @@ pub struct ProperTimeSeries {
     pub summary: ProperTimeSummary,
 }
 
+/// The model note of [`kepler_periodic_term_s`] and of the residual of a series.
+pub const PERIODIC_NOTE: &str = "the periodic term is -2 r.v / c^2 (IS-GPS-200 20.3.3.3.3.1); the residual is tau - t minus that term and the least-squares line";
+
 /// The Keplerian periodic clock term `-2 r.v / c^2`, s.
 ///
 /// Inputs: position_m (m) and velocity_m_s (m/s), geocentric, inertial (or, equivalently, r.v

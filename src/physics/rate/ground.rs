@@ -5,6 +5,7 @@ use crate::physics::geodesy::{geodetic_to_ecef_m, normal_potential_drop_m2_s2};
 use crate::physics::gravity::{centrifugal_potential_m2_s2, earth_potential_m2_s2, GravityModel};
 use crate::physics::rate::error::RateError;
 use crate::physics::rate::{RateParts, RateReference};
+use crate::physics::vocabulary::vocabulary;
 
 /// How the height of a ground site is given.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -16,6 +17,27 @@ pub enum GroundHeight {
     AboveGeoidM(f64),
 }
 
+vocabulary! {
+    /// What the height of a ground site is measured from.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum HeightReference {
+        /// The GRS80 ellipsoid ([`GroundHeight::EllipsoidalM`]).
+        Ellipsoid = "ellipsoid",
+        /// The geoid, i.e. orthometric height ([`GroundHeight::AboveGeoidM`]).
+        Geoid = "geoid",
+    }
+}
+
+impl HeightReference {
+    /// A height of `height_m` metres above this reference.
+    pub fn height(self, height_m: f64) -> GroundHeight {
+        match self {
+            Self::Ellipsoid => GroundHeight::EllipsoidalM(height_m),
+            Self::Geoid => GroundHeight::AboveGeoidM(height_m),
+        }
+    }
+}
+
 /// A clock at rest on the rotating Earth.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct GroundSite {
@@ -25,6 +47,19 @@ pub struct GroundSite {
     pub longitude_deg: f64,
     /// Height, in [-11 km, 1e8 m].
     pub height: GroundHeight,
+}
+
+/// The model note of every [`ground_site_rate`].
+pub const GROUND_NOTE: &str = "clock at rest on the Earth rotating at omega_E = 7.292115e-5 rad/s; tides and polar motion are not modelled; length-of-day variations change the rotation term by below 1e-19";
+
+/// The model note of the height model [`ground_site_rate`] uses for `height_reference` and
+/// `model` (the model is not used for a height above the geoid).
+pub fn ground_height_note(height_reference: HeightReference, model: GravityModel) -> &'static str {
+    match (height_reference, model) {
+        (HeightReference::Geoid, _) => "height above the geoid: W0 - W from GRS80 normal gravity (Heiskanen & Moritz (1967) eq. 2-215), so a clock on the geoid has rate 0 against TT; gravity_model is not used",
+        (HeightReference::Ellipsoid, GravityModel::J2) => "height above the GRS80 ellipsoid with a J2 Earth: within 1.8e-15 of W0 on the ellipsoid; the geoid undulation (up to about +-100 m, +-1.1e-14) is not in the model: give height_reference geoid for 1e-16 work",
+        (HeightReference::Ellipsoid, GravityModel::PointMass) => "height above the GRS80 ellipsoid with a point-mass Earth: ignores the Earth's flattening, off by up to about 7e-13 on the ground; j2 (the default for ground sites) is far closer",
+    }
 }
 
 /// Fractional rate of a clock fixed on the rotating Earth.

@@ -67,6 +67,14 @@ pub fn lunar_site_geocentric_state(site: &LunarSite) -> Result<([f64; 3], [f64; 
     Ok((position_m, velocity_m_s))
 }
 
+/// The model notes of [`lunar_site_rate`].
+pub const LUNAR_NOTES: [&str; 2] = [
+    "mean rate in the geocentric frame: the Moon on a circular orbit of 384 400 km at the two-body speed, rotating synchronously; the monthly periodic term of the lunar eccentricity (about 0.47 us amplitude) is not included",
+    "the Moon's own potential as a point mass (GM of JPL DE430) through its geocentric tidal part; the Sun's tidal potential (about 0.001 to 0.004 us/day), the lunar J2 (about 6e-15), librations and the tilts of the lunar axis and orbit are neglected",
+];
+/// The model note of [`lunar_site_rate`] when J2 was asked for: the Earth is a point mass there.
+pub const LUNAR_EARTH_J2_NOTE: &str = "the Earth's J2 changes the potential at the Moon by less than 1 m^2/s^2 (below 1e-17 of rate): a point-mass Earth is used";
+
 /// Mean fractional rate of a clock fixed on the Moon's surface.
 ///
 /// Model (first post-Newtonian, geocentric frame, IERS Conventions (2010) ch. 10 eq. 10.6):

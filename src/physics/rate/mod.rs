@@ -41,21 +41,29 @@ mod robustness_tests;
 pub use crate::physics::gravity::GravityModel;
 pub use error::{RateError, RateErrorKind};
 pub use frequency::{frequency_offset, FrequencyOffset};
-pub use ground::{ground_site_rate, GroundHeight, GroundSite};
+pub use ground::{ground_site_rate, GroundHeight, GroundSite, HeightReference};
 pub use lunar::{lunar_site_rate, LunarSite};
 pub use orbit::{orbit_rate, Anomaly, KeplerianOrbit, OrbitRate, PeriodicTerm};
 pub use state::{state_rate, Frame, StateRate, StateVector};
 
 use crate::physics::constants::{L_G, MICROSECONDS_PER_DAY, SPEED_OF_LIGHT_SQUARED_M2_S2};
+use crate::physics::gravity::{dot, earth_potential_m2_s2};
+use crate::physics::vocabulary::vocabulary;
 
-/// The coordinate time a rate is measured against.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum RateReference {
-    /// Terrestrial Time: a clock on the geoid has rate 0.
-    Tt,
-    /// Geocentric Coordinate Time.
-    Tcg,
+vocabulary! {
+    /// The coordinate time a rate is measured against.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum RateReference {
+        /// Terrestrial Time: a clock on the geoid has rate 0.
+        Tt = "TT",
+        /// Geocentric Coordinate Time.
+        Tcg = "TCG",
+    }
 }
+
+/// The model note of every rate answer: the order of the model and what [`RateParts::total`]
+/// leaves out (see the module notes).
+pub const FIRST_ORDER_NOTE: &str = "first post-Newtonian order, d(tau)/dt - 1 = -(v^2/2 + U)/c^2 (+ L_G against TT), IERS Conventions (2010) eq. 10.6; total = sr + gr, the 1/(1 - L_G) factor and 1/c^4 terms (about 1e-18) are not included";
 
 /// A fractional rate offset d(tau)/d(t) - 1 split into its velocity and gravity parts.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -118,6 +126,30 @@ pub struct MicrosecondsPerDay {
     pub gr: f64,
     /// Total, us/day.
     pub total: f64,
+}
+
+/// The model note of [`inertial_rate_function`] with [`GravityModel::J2`].
+pub const INERTIAL_J2_NOTE: &str = "J2 potential with the IERS Conventions (2010) GM, J2 and a_E; the GCRS pole stands in for the Earth's axis for inertial tracks";
+
+/// The rate function of a clock at an inertial geocentric state, for `reference` and `model`:
+/// `rate(position_m, velocity_m_s)` gives the (velocity, gravity) parts of d(tau)/dt - 1, i.e.
+/// `-v^2/(2c^2)` and `-U/c^2` (+ L_G against TT), IERS Conventions (2010) eq. 10.6 through
+/// [`RateParts::from_speed_and_potential`]. A position where the potential is undefined (not
+/// finite, at the geocentre) gives a NaN gravity part, which the integrator's callers refuse.
+/// What the proper-time integrators take.
+pub fn inertial_rate_function(
+    reference: RateReference,
+    model: GravityModel,
+) -> impl Fn(&[f64; 3], &[f64; 3]) -> (f64, f64) + Copy {
+    move |position_m, velocity_m_s| {
+        let potential_m2_s2 = earth_potential_m2_s2(model, *position_m).unwrap_or(f64::NAN);
+        let parts = RateParts::from_speed_and_potential(
+            reference,
+            dot(*velocity_m_s, *velocity_m_s),
+            potential_m2_s2,
+        );
+        (parts.sr, parts.gr)
+    }
 }
 
 /// Converts a fractional rate to microseconds per day (86 400 s/day, 1e6 us/s).

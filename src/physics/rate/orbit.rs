@@ -54,6 +54,16 @@ pub struct OrbitRate {
 /// Largest |angle| accepted for an anomaly, degrees (beyond it f64 loses the fraction of a turn).
 pub const MAX_ANGLE_DEG: f64 = 1.0e6;
 
+/// The model notes of [`orbit_rate`] (Ashby (2003) Living Rev. Relativity 6, 1).
+pub const ORBIT_NOTES: [&str; 3] = [
+    "mean rate over one revolution of a point-mass Keplerian orbit: sr = -GM/(2ac^2), gr = (W0 - GM/a)/c^2 against TT (Ashby (2003) Living Rev. Relativity 6, 1)",
+    "GM = 3.986004418e14 m^3/s^2 (IERS Conventions (2010), TCG-compatible); the IS-GPS-200 value 3.986005e14 changes the total by less than 1e-16 and the periodic amplitude by about 7e-8 of itself",
+    "inclination, node and argument of perigee do not change the first-order rate or the periodic term",
+];
+/// The model note of an orbit when J2 was asked for at a level that also covers other subjects:
+/// [`orbit_rate`] has no J2 mean rate.
+pub const ORBIT_J2_NOT_APPLIED_NOTE: &str = "the request-level gravity_model j2 does not apply to orbit mean rates (the J2 average depends on the definition of a and e at the level of the J2 effect); point_mass used: give a state vector for J2";
+
 /// Mean rate and periodic term of a clock on a Keplerian orbit (GM of IERS Conventions (2010)
 /// table 1.1, TCG-compatible).
 ///
@@ -144,9 +154,8 @@ pub fn relativistic_correction_constant_s_per_sqrt_m(gm_m3_s2: f64) -> f64 {
 
 /// Eccentric anomaly E (rad) from a true, mean or eccentric anomaly, for 0 <= e < 1.
 ///
-/// True: E = 2 atan2(sqrt(1 - e) sin(nu/2), sqrt(1 + e) cos(nu/2)). Mean: Kepler's equation
-/// E - e sin E = M by Newton's method (start E = M, or pi for e > 0.8; at most 50 steps,
-/// stop below 1e-15 rad). References: Vallado, Fundamentals of Astrodynamics and
+/// True: E = 2 atan2(sqrt(1 - e) sin(nu/2), sqrt(1 + e) cos(nu/2)). Mean: Kepler's equation,
+/// by [`solve_kepler_equation_rad`]. References: Vallado, Fundamentals of Astrodynamics and
 /// Applications, algorithms 2 and 5 (from memory); Kepler's equation.
 pub fn eccentric_anomaly_rad(anomaly: Anomaly, eccentricity: f64) -> Result<f64, RateError> {
     let (field, angle_deg) = match anomaly {
@@ -170,18 +179,28 @@ pub fn eccentric_anomaly_rad(anomaly: Anomaly, eccentricity: f64) -> Result<f64,
             let half = 0.5 * angle_rad;
             2.0 * ((1.0 - e).sqrt() * half.sin()).atan2((1.0 + e).sqrt() * half.cos())
         }
-        Anomaly::MeanDeg(_) => {
-            let mut ecc = if e > 0.8 { PI } else { angle_rad };
-            for _ in 0..50 {
-                let step = (ecc - e * ecc.sin() - angle_rad) / (1.0 - e * ecc.cos());
-                ecc -= step;
-                if step.abs() < 1e-15 {
-                    break;
-                }
-            }
-            ecc
-        }
+        Anomaly::MeanDeg(_) => solve_kepler_equation_rad(angle_rad, e),
     })
+}
+
+/// Eccentric anomaly E in [0, 2 pi) (up to the last Newton step) of the mean anomaly `mean_rad`
+/// (any finite value; reduced to [0, 2 pi) first, so a large M loses no accuracy) for
+/// 0 <= e < 1: Kepler's equation E - e sin E = M by Newton's method, starting at E = M, or at
+/// pi for e > 0.8 (which converges for every M), at most 50 steps, stopping below 1e-15 rad.
+/// References: Kepler's equation; Vallado, Fundamentals of Astrodynamics and Applications,
+/// algorithm 2 (from memory). The one solver of the crate.
+pub fn solve_kepler_equation_rad(mean_rad: f64, eccentricity: f64) -> f64 {
+    let e = eccentricity;
+    let mean_rad = mean_rad.rem_euclid(2.0 * PI);
+    let mut ecc = if e > 0.8 { PI } else { mean_rad };
+    for _ in 0..50 {
+        let step = (ecc - e * ecc.sin() - mean_rad) / (1.0 - e * ecc.cos());
+        ecc -= step;
+        if step.abs() < 1e-15 {
+            break;
+        }
+    }
+    ecc
 }
 
 fn validate_orbit(orbit: &KeplerianOrbit) -> Result<f64, RateError> {

@@ -10,14 +10,17 @@ use crate::physics::geodesy::{
 use crate::physics::gravity::{dot, earth_potential_m2_s2, norm, GravityModel};
 use crate::physics::rate::error::{require_finite_vector, RateError, RateErrorKind};
 use crate::physics::rate::{RateParts, RateReference};
+use crate::physics::vocabulary::vocabulary;
 
-/// Coordinate frame of a state vector.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum Frame {
-    /// Geocentric Celestial Reference System (non-rotating).
-    Gcrs,
-    /// International Terrestrial Reference Frame (rotating with the Earth).
-    Itrf,
+vocabulary! {
+    /// Coordinate frame of a state vector.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum Frame {
+        /// Geocentric Celestial Reference System (non-rotating).
+        Gcrs = "GCRS",
+        /// International Terrestrial Reference Frame (rotating with the Earth).
+        Itrf = "ITRF",
+    }
 }
 
 /// A geocentric state: position (m) and velocity (m/s) in `frame`.
@@ -50,6 +53,15 @@ pub struct StateRate {
 /// 11 km (6 345 752.3 m). GCRS axes do not tell where the equator bulge is, so this bound is the
 /// deepest a clock can be anywhere; ITRF positions are checked against the ellipsoid instead.
 pub const MIN_GCRS_DISTANCE_M: f64 = GRS80_SEMI_MINOR_AXIS_M - MAX_DEPTH_BELOW_SURFACE_M;
+
+/// The model notes of [`state_rate`]: what the instantaneous rate neglects, and where the
+/// periodic values come from.
+pub const STATE_NOTES: [&str; 2] = [
+    "instantaneous rate at this state; the tidal potentials of the Moon and the Sun are neglected (about 1e-16 and 8e-16 at GEO)",
+    "periodic.value_at_state_s = -2 (r . v)/c^2 (IS-GPS-200 20.3.3.3.3.1); periodic.amplitude_s is that of the osculating point-mass Keplerian orbit (IERS Conventions (2010) GM), absent when the state is not on a closed orbit above the Earth",
+];
+/// The model note of [`state_rate`] with [`GravityModel::J2`].
+pub const STATE_J2_NOTE: &str = "J2 about the frame's z axis: exact for ITRF; for GCRS the precession-nutation tilt of the pole changes the rate by less than 3e-15 for low orbits";
 
 /// Instantaneous fractional rate of a clock at a geocentric state (first post-Newtonian order).
 ///

@@ -3,6 +3,32 @@
 use std::fmt;
 
 use crate::physics::rate::error::RateError;
+use crate::physics::vocabulary::vocabulary;
+
+vocabulary! {
+    /// The stable codes of [`SignalError`], written only here.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum SignalErrorKind {
+        /// An end point inside the Earth.
+        InsideEarth = "inside_earth",
+        /// An end point beyond the model's range.
+        BeyondRange = "beyond_range",
+        /// Transmitter and receiver at one place.
+        CoincidentEndpoints = "coincident_endpoints",
+        /// The straight path passes through the Earth.
+        PathThroughEarth = "path_through_earth",
+        /// The light-time iteration did not converge.
+        NoConvergence = "no_convergence",
+        /// A speed at or above c.
+        SpeedNotBelowC = "speed_not_below_c",
+        /// A value that is not finite.
+        NotFinite = "not_finite",
+        /// The satellite is below a station's horizon.
+        NotVisible = "not_visible",
+        /// Any other value that cannot be used.
+        InvalidValue = "invalid_value",
+    }
+}
 
 /// Bad input to a signal-path computation.
 #[derive(Debug, Clone, PartialEq)]
@@ -18,9 +44,13 @@ pub struct SignalError {
 
 impl SignalError {
     /// A new error with `code` about `field`.
-    pub fn new(code: &'static str, field: impl Into<String>, message: impl Into<String>) -> Self {
+    pub fn new(
+        kind: SignalErrorKind,
+        field: impl Into<String>,
+        message: impl Into<String>,
+    ) -> Self {
         Self {
-            code,
+            code: kind.as_str(),
             field: field.into(),
             message: message.into(),
         }
@@ -30,7 +60,7 @@ impl SignalError {
     /// (for example `station_a` + `latitude_deg` gives `station_a.latitude_deg`).
     pub fn from_rate(owner: &str, error: RateError) -> Self {
         Self::new(
-            "invalid_value",
+            SignalErrorKind::InvalidValue,
             format!("{owner}.{}", error.field),
             error.message,
         )

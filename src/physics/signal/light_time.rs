@@ -9,7 +9,7 @@ use crate::physics::geodesy::{is_deep_inside_earth, itrf_to_inertial_velocity_m_
 use crate::physics::gravity::norm;
 use crate::physics::rate::state::{periodic_value_s, MIN_GCRS_DISTANCE_M};
 use crate::physics::rate::Frame;
-use crate::physics::signal::error::SignalError;
+use crate::physics::signal::error::{SignalError, SignalErrorKind};
 use crate::physics::signal::formulas::{
     difference_m, rotate_about_z_m, segment_closest_approach_m, shapiro_delay_s,
 };
@@ -114,7 +114,7 @@ pub fn signal_path(geometry: &PathGeometry) -> Result<SignalPath, SignalError> {
     let initial_range_m = norm(difference_m(receiver.position_m, transmitter.position_m));
     if initial_range_m < MIN_RANGE_M {
         return Err(SignalError::new(
-            "coincident_endpoints",
+            SignalErrorKind::CoincidentEndpoints,
             "receiver.position_m",
             format!(
                 "transmitter and receiver are {initial_range_m} m apart; at least {MIN_RANGE_M} m is needed"
@@ -145,7 +145,7 @@ pub fn signal_path(geometry: &PathGeometry) -> Result<SignalPath, SignalError> {
         }
     }
     Err(SignalError::new(
-        "no_convergence",
+        SignalErrorKind::NoConvergence,
         "transmitter.velocity_m_s",
         format!(
             "the light-time iteration did not converge in {MAX_ITERATIONS} iterations (a transmitter speed close to c converges slowly)"
@@ -216,7 +216,7 @@ fn finish(
     let emission_distance_m = norm(step.emission_frame_m);
     if emission_distance_m < MIN_GCRS_DISTANCE_M {
         return Err(SignalError::new(
-            "inside_earth",
+            SignalErrorKind::InsideEarth,
             "transmitter.velocity_m_s",
             "moved back to the emission time, the transmitter is inside the Earth",
         ));
@@ -257,7 +257,7 @@ fn itrf_velocity(position_m: [f64; 3], velocity_m_s: [f64; 3]) -> [f64; 3] {
 
 fn path_through_earth() -> SignalError {
     SignalError::new(
-        "path_through_earth",
+        SignalErrorKind::PathThroughEarth,
         "receiver.position_m",
         format!(
             "the straight path from the transmitter to the receiver passes more than {MAX_DEPTH_BELOW_SURFACE_M} m below the Earth's polar radius: the receiver cannot see the transmitter"
@@ -275,7 +275,7 @@ fn validate_endpoint(
     let position_m = endpoint.position_m;
     if !position_m.iter().all(|value| value.is_finite()) {
         return Err(SignalError::new(
-            "not_finite",
+            SignalErrorKind::NotFinite,
             position_field,
             "every component must be a finite number",
         ));
@@ -283,7 +283,7 @@ fn validate_endpoint(
     let distance_m = norm(position_m);
     if !distance_m.is_finite() || distance_m > MAX_GEOCENTRIC_DISTANCE_M {
         return Err(SignalError::new(
-            "beyond_range",
+            SignalErrorKind::BeyondRange,
             position_field,
             format!(
                 "geocentric distance {distance_m} m is beyond {MAX_GEOCENTRIC_DISTANCE_M} m, where the Sun's delay (not modelled) dominates the Earth's"
@@ -296,7 +296,7 @@ fn validate_endpoint(
     };
     if inside {
         return Err(SignalError::new(
-            "inside_earth",
+            SignalErrorKind::InsideEarth,
             position_field,
             format!(
                 "the position (geocentric distance {distance_m:.1} m) is more than {MAX_DEPTH_BELOW_SURFACE_M} m inside the Earth"
@@ -306,7 +306,7 @@ fn validate_endpoint(
     if let Some(velocity_m_s) = endpoint.velocity_m_s {
         if !velocity_m_s.iter().all(|value| value.is_finite()) {
             return Err(SignalError::new(
-                "not_finite",
+                SignalErrorKind::NotFinite,
                 velocity_field,
                 "every component must be a finite number",
             ));
@@ -318,7 +318,7 @@ fn validate_endpoint(
         let speed_m_s = norm(inertial_m_s);
         if speed_m_s.is_nan() || speed_m_s >= SPEED_OF_LIGHT_M_S {
             return Err(SignalError::new(
-                "speed_not_below_c",
+                SignalErrorKind::SpeedNotBelowC,
                 velocity_field,
                 format!(
                     "inertial speed must be below c = {SPEED_OF_LIGHT_M_S} m/s, got {speed_m_s}"

@@ -16,6 +16,6 @@ pub mod light_time;
 pub mod two_way;
 
 pub use crate::physics::rate::Frame;
-pub use error::SignalError;
+pub use error::{SignalError, SignalErrorKind};
 pub use light_time::{signal_path, Endpoint, PathGeometry, SignalPath};
 pub use two_way::{two_way_sagnac, Station, TwoWayLink, TwoWaySagnac};

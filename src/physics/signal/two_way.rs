@@ -3,7 +3,7 @@
 use crate::physics::constants::{GEOSTATIONARY_RADIUS_M, MAX_GEOCENTRIC_DISTANCE_M};
 use crate::physics::geodesy::{geodetic_to_ecef_m, is_deep_inside_earth};
 use crate::physics::rate::error::{require_finite, require_longitude_deg};
-use crate::physics::signal::error::SignalError;
+use crate::physics::signal::error::{SignalError, SignalErrorKind};
 use crate::physics::signal::formulas::{elevation_deg, sagnac_rotating_frame_s};
 
 /// A ground station: GRS80 geodetic coordinates.
@@ -85,15 +85,15 @@ pub struct TwoWaySagnac {
 /// station's horizon (`station_a` or `station_b`).
 pub fn two_way_sagnac(link: &TwoWayLink) -> Result<TwoWaySagnac, SignalError> {
     require_longitude_deg("satellite_longitude_deg", link.satellite_longitude_deg)
-        .map_err(|e| SignalError::new("invalid_value", e.field, e.message))?;
+        .map_err(|e| SignalError::new(SignalErrorKind::InvalidValue, e.field, e.message))?;
     let radius_m = require_finite("satellite_radius_m", link.satellite_radius_m)
-        .map_err(|e| SignalError::new("invalid_value", e.field, e.message))?;
+        .map_err(|e| SignalError::new(SignalErrorKind::InvalidValue, e.field, e.message))?;
     let (sin_lon, cos_lon) = link.satellite_longitude_deg.to_radians().sin_cos();
     let satellite_m = [radius_m * cos_lon, radius_m * sin_lon, 0.0];
     if radius_m <= 0.0 || is_deep_inside_earth(satellite_m) || radius_m > MAX_GEOCENTRIC_DISTANCE_M
     {
         return Err(SignalError::new(
-            "invalid_value",
+            SignalErrorKind::InvalidValue,
             "satellite_radius_m",
             format!(
                 "must put the satellite above the Earth and within {MAX_GEOCENTRIC_DISTANCE_M} m of the geocentre, got {radius_m}"
@@ -136,7 +136,7 @@ fn station_view(
     match elevation {
         Some(elevation) if elevation >= 0.0 => Ok((station_m, elevation)),
         _ => Err(SignalError::new(
-            "not_visible",
+            SignalErrorKind::NotVisible,
             owner,
             format!(
                 "the satellite is below the station's horizon (elevation {:.2} deg)",

@@ -2,6 +2,33 @@
 
 use std::fmt;
 
+use super::format_name::InstantFormat;
+use super::scale::Scale;
+use crate::physics::vocabulary::vocabulary;
+
+vocabulary! {
+    /// The kinds of [`TimeError`]; each spelling is the stable problem code, written only here.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum TimeErrorKind {
+        /// [`TimeError::UnknownScale`].
+        UnknownScale = "unknown_scale",
+        /// [`TimeError::UnknownFormat`].
+        UnknownFormat = "unknown_format",
+        /// [`TimeError::Malformed`].
+        Malformed = "malformed_instant",
+        /// [`TimeError::ImpossibleDate`].
+        ImpossibleDate = "impossible_date",
+        /// [`TimeError::InvalidLeapSecond`].
+        InvalidLeapSecond = "invalid_leap_second",
+        /// [`TimeError::FormatNotForScale`].
+        FormatNotForScale = "format_not_for_scale",
+        /// [`TimeError::BeforeUtc`].
+        BeforeUtc = "utc_before_1960",
+        /// [`TimeError::OutOfRange`].
+        OutOfRange = "instant_out_of_range",
+    }
+}
+
 /// An error of the time engine. Each variant has a stable machine-readable [`TimeError::code`]
 /// and a message a person can act on.
 #[derive(Debug, Clone, PartialEq, Eq)]
@@ -37,18 +64,23 @@ pub enum TimeError {
 }
 
 impl TimeError {
-    /// Stable code for clients.
-    pub fn code(&self) -> &'static str {
+    /// What kind of error this is.
+    pub const fn kind(&self) -> TimeErrorKind {
         match self {
-            Self::UnknownScale(_) => "unknown_scale",
-            Self::UnknownFormat(_) => "unknown_format",
-            Self::Malformed { .. } => "malformed_instant",
-            Self::ImpossibleDate(_) => "impossible_date",
-            Self::InvalidLeapSecond(_) => "invalid_leap_second",
-            Self::FormatNotForScale { .. } => "format_not_for_scale",
-            Self::BeforeUtc(_) => "utc_before_1960",
-            Self::OutOfRange(_) => "instant_out_of_range",
+            Self::UnknownScale(_) => TimeErrorKind::UnknownScale,
+            Self::UnknownFormat(_) => TimeErrorKind::UnknownFormat,
+            Self::Malformed { .. } => TimeErrorKind::Malformed,
+            Self::ImpossibleDate(_) => TimeErrorKind::ImpossibleDate,
+            Self::InvalidLeapSecond(_) => TimeErrorKind::InvalidLeapSecond,
+            Self::FormatNotForScale { .. } => TimeErrorKind::FormatNotForScale,
+            Self::BeforeUtc(_) => TimeErrorKind::BeforeUtc,
+            Self::OutOfRange(_) => TimeErrorKind::OutOfRange,
         }
+    }
+
+    /// Stable code for clients (the spelling of [`TimeError::kind`]).
+    pub const fn code(&self) -> &'static str {
+        self.kind().as_str()
     }
 
     /// Shorthand for [`TimeError::Malformed`].
@@ -65,13 +97,17 @@ impl fmt::Display for TimeError {
         match self {
             Self::UnknownScale(name) => write!(
                 f,
-                "unknown time scale {name:?}; expected one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST"
+                "unknown time scale {name:?}; expected one of {}",
+                Scale::NAMES.join(", ")
             ),
             Self::UnknownFormat(name) => write!(
                 f,
-                "unknown instant format {name:?}; expected one of iso, mjd, jd, j2000_s, unix_s, gnss_week"
+                "unknown instant format {name:?}; expected one of {}",
+                InstantFormat::NAMES.join(", ")
             ),
-            Self::Malformed { expected, found } => write!(f, "expected {expected}, found {found:?}"),
+            Self::Malformed { expected, found } => {
+                write!(f, "expected {expected}, found {found:?}")
+            }
             Self::ImpossibleDate(message)
             | Self::InvalidLeapSecond(message)
             | Self::BeforeUtc(message)

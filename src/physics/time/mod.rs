@@ -5,6 +5,7 @@ pub mod calendar;
 pub mod convert;
 pub mod decimal;
 pub mod error;
+pub mod format_name;
 pub mod formats;
 pub mod instant;
 pub mod leap_seconds;

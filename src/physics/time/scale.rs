@@ -3,62 +3,36 @@
 use std::fmt;
 use std::str::FromStr;
 
-/// A time scale.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, PartialOrd, Ord)]
-pub enum Scale {
-    /// Coordinated Universal Time (ITU-R TF.460-6): TAI minus the leap-second table.
-    Utc,
-    /// International Atomic Time (BIPM).
-    Tai,
-    /// Terrestrial Time (IAU 1991 A4, IAU 2000 B1.9): TAI + 32.184 s.
-    Tt,
-    /// Geocentric Coordinate Time (IAU 1991 A4, IAU 2000 B1.9).
-    Tcg,
-    /// Barycentric Coordinate Time (IAU 1991 A4, IAU 2006 B3).
-    Tcb,
-    /// Barycentric Dynamical Time (IAU 2006 B3).
-    Tdb,
-    /// GPS Time (IS-GPS-200): TAI - 19 s.
-    Gpst,
-    /// Galileo System Time (Galileo OS SIS ICD): TAI - 19 s.
-    Gst,
-    /// BeiDou Time (BeiDou OS ICD): TAI - 33 s.
-    Bdt,
-    /// QZSS Time (IS-QZSS): TAI - 19 s.
-    Qzsst,
+use crate::physics::vocabulary::vocabulary;
+
+vocabulary! {
+    /// A time scale, by its standard abbreviation.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, PartialOrd, Ord)]
+    pub enum Scale {
+        /// Coordinated Universal Time (ITU-R TF.460-6): TAI minus the leap-second table.
+        Utc = "UTC",
+        /// International Atomic Time (BIPM).
+        Tai = "TAI",
+        /// Terrestrial Time (IAU 1991 A4, IAU 2000 B1.9): TAI + 32.184 s.
+        Tt = "TT",
+        /// Geocentric Coordinate Time (IAU 1991 A4, IAU 2000 B1.9).
+        Tcg = "TCG",
+        /// Barycentric Coordinate Time (IAU 1991 A4, IAU 2006 B3).
+        Tcb = "TCB",
+        /// Barycentric Dynamical Time (IAU 2006 B3).
+        Tdb = "TDB",
+        /// GPS Time (IS-GPS-200): TAI - 19 s.
+        Gpst = "GPST",
+        /// Galileo System Time (Galileo OS SIS ICD): TAI - 19 s.
+        Gst = "GST",
+        /// BeiDou Time (BeiDou OS ICD): TAI - 33 s.
+        Bdt = "BDT",
+        /// QZSS Time (IS-QZSS): TAI - 19 s.
+        Qzsst = "QZSST",
+    }
 }
 
 impl Scale {
-    /// Every scale, in the order answers list them.
-    pub const ALL: [Scale; 10] = [
-        Scale::Utc,
-        Scale::Tai,
-        Scale::Tt,
-        Scale::Tcg,
-        Scale::Tcb,
-        Scale::Tdb,
-        Scale::Gpst,
-        Scale::Gst,
-        Scale::Bdt,
-        Scale::Qzsst,
-    ];
-
-    /// The scale's standard abbreviation.
-    pub fn as_str(self) -> &'static str {
-        match self {
-            Scale::Utc => "UTC",
-            Scale::Tai => "TAI",
-            Scale::Tt => "TT",
-            Scale::Tcg => "TCG",
-            Scale::Tcb => "TCB",
-            Scale::Tdb => "TDB",
-            Scale::Gpst => "GPST",
-            Scale::Gst => "GST",
-            Scale::Bdt => "BDT",
-            Scale::Qzsst => "QZSST",
-        }
-    }
-
     /// True for the GNSS system times (they have a week numbering).
     pub fn is_gnss(self) -> bool {
         matches!(self, Scale::Gpst | Scale::Gst | Scale::Bdt | Scale::Qzsst)
@@ -113,12 +87,6 @@ impl Scale {
     }
 }
 
-impl fmt::Display for Scale {
-    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
-        f.write_str(self.as_str())
-    }
-}
-
 /// An unknown scale name.
 #[derive(Debug, Clone, PartialEq, Eq)]
 pub struct UnknownScale(pub String);
@@ -127,8 +95,9 @@ impl fmt::Display for UnknownScale {
     fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
         write!(
             f,
-            "unknown time scale {:?}; expected one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST",
-            self.0
+            "unknown time scale {:?}; expected one of {}",
+            self.0,
+            Scale::NAMES.join(", ")
         )
     }
 }

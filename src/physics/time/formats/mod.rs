@@ -10,7 +10,6 @@
 mod gnss_week;
 mod iso;
 
-use std::fmt;
 use std::str::FromStr;
 
 pub use gnss_week::{gnss_week_origin_mjd, SECONDS_PER_WEEK};
@@ -35,57 +34,16 @@ pub const FIRST_MJD: i64 = -678_575;
 /// Last MJD accepted (9999-12-31).
 pub const LAST_MJD: i64 = 2_973_483;
 
-/// How an instant is written in a request.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum InstantFormat {
-    /// ISO 8601 calendar or ordinal date and time.
-    Iso,
-    /// Modified Julian Date.
-    Mjd,
-    /// Julian Date.
-    Jd,
-    /// Seconds since J2000.0 in the instant's scale.
-    J2000S,
-    /// Seconds since 1970-01-01T00:00:00 UTC, 86 400 s per day (UTC only).
-    UnixS,
-    /// GNSS week and seconds of week, `WEEK:SECONDS`.
-    GnssWeek,
-}
-
-impl InstantFormat {
-    /// The format's name in requests.
-    pub fn as_str(self) -> &'static str {
-        match self {
-            Self::Iso => "iso",
-            Self::Mjd => "mjd",
-            Self::Jd => "jd",
-            Self::J2000S => "j2000_s",
-            Self::UnixS => "unix_s",
-            Self::GnssWeek => "gnss_week",
-        }
-    }
-}
-
-impl fmt::Display for InstantFormat {
-    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
-        f.write_str(self.as_str())
-    }
-}
+pub use super::format_name::InstantFormat;
 
 impl FromStr for InstantFormat {
     type Err = TimeError;
+    /// Reads a format name, ignoring ASCII case.
     fn from_str(text: &str) -> Result<Self, Self::Err> {
-        [
-            Self::Iso,
-            Self::Mjd,
-            Self::Jd,
-            Self::J2000S,
-            Self::UnixS,
-            Self::GnssWeek,
-        ]
-        .into_iter()
-        .find(|format| format.as_str().eq_ignore_ascii_case(text))
-        .ok_or_else(|| TimeError::UnknownFormat(text.to_string()))
+        Self::ALL
+            .into_iter()
+            .find(|format| format.as_str().eq_ignore_ascii_case(text))
+            .ok_or_else(|| TimeError::UnknownFormat(text.to_string()))
     }
 }
 
