@@ -389,8 +389,9 @@ impl ToSchema for EphemerisVelocityMS {
     }
 }
 
-/// Exact names of inertial frames in a JSON ephemeris.
-const INERTIAL_FRAMES: [&str; 4] = ["GCRF", "EME2000", "J2000", "ICRF"];
+/// Exact names of inertial frames in a JSON ephemeris: the IAU's GCRS (IAU 2000 Resolution B1.3)
+/// and its realisation GCRF, as the rate and signal endpoints name it too, and the older axes.
+const INERTIAL_FRAMES: [&str; 5] = ["GCRS", "GCRF", "EME2000", "J2000", "ICRF"];
 /// Exact names of Earth-fixed frames in a JSON ephemeris (besides the ITRF and IGS families).
 const EARTH_FIXED_FRAMES: [&str; 3] = ["ECEF", "WGS84", "WGS-84"];
 /// Prefixes of the Earth-fixed frame families (ITRF2014, ITRF2020, IGS20...).
@@ -429,7 +430,7 @@ impl PartialSchema for EphemerisFrameName {
             .schema_type(Type::String)
             .pattern(Some(ephemeris_frame_pattern()))
             .description(Some(
-                "A frame name in upper case: GCRF, EME2000, J2000, ICRF (inertial); ECEF, WGS84, WGS-84, or any name of the ITRF or IGS families (ITRF2014, IGS20...; Earth-fixed).",
+                "A frame name in upper case: GCRS, GCRF, EME2000, J2000, ICRF (inertial); ECEF, WGS84, WGS-84, or any name of the ITRF or IGS families (ITRF2014, IGS20...; Earth-fixed).",
             ))
             .examples(["GCRF"])
             .into()

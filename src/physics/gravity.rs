@@ -11,6 +11,7 @@ use crate::physics::constants::{
 use crate::physics::rate::error::{
     require_finite, require_finite_vector, RateError, RateErrorKind,
 };
+use crate::physics::readable::readable;
 
 /// Smallest distance from a body's centre at which a potential is evaluated, m. Below it the
 /// point-mass potential is meaningless (and 1/r would overflow); callers apply tighter bounds.
@@ -37,7 +38,7 @@ fn distance_m(field: &'static str, position_m: [f64; 3]) -> Result<f64, RateErro
         };
         return Err(RateError::new(
             field,
-            format!("distance from the body's centre must be at least {MIN_DISTANCE_M} m and finite, got {r_m}"),
+            format!("distance from the body's centre must be at least {MIN_DISTANCE_M} m and finite, got {r_m}", r_m = readable(r_m)),
         )
         .with_kind(kind));
     }

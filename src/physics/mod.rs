@@ -8,5 +8,6 @@ pub mod geodesy;
 pub mod gravity;
 pub mod proper_time;
 pub mod rate;
+pub mod readable;
 pub mod signal;
 pub mod time;

@@ -81,7 +81,7 @@ pub fn from_document(
         TrajectoryError::new(
             "unsupported_frame",
             format!(
-                "frame {:?} is not supported; expected GCRF, EME2000, ICRF (inertial) or ITRF... (Earth-fixed)",
+                "frame {:?} is not supported; expected GCRS, GCRF, EME2000, ICRF (inertial) or ITRF... (Earth-fixed)",
                 document.frame
             ),
         )

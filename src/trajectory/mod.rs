@@ -22,7 +22,7 @@ pub mod text;
 pub mod track_proper_time;
 
 pub use error::TrajectoryError;
-pub use interpolate::{validate_track, InterpolationOptions, Interpolator};
+pub use interpolate::{validate_track, InterpolationOptions, Interpolator, MAX_POINTS};
 pub use json::read_json;
 pub use oem::read_oem;
 pub use sp3::read_sp3;
@@ -41,13 +41,14 @@ pub enum Frame {
 }
 
 impl Frame {
-    /// Reads a frame name (ASCII case ignored): EME2000, J2000, GCRF, ICRF are inertial;
+    /// Reads a frame name (ASCII case ignored): GCRS (the IAU name), GCRF, EME2000, J2000, ICRF
+    /// are inertial;
     /// ITRF, ITRF93, ITRF-93, ITRF97, ITRF2000, ITRF2005, ITRF2008, ITRF2014, ITRF2020, IGS*,
     /// ECEF and WGS84 are Earth-fixed.
     pub fn from_name(name: &str) -> Option<Frame> {
         let upper = name.trim().to_ascii_uppercase();
         match upper.as_str() {
-            "EME2000" | "J2000" | "GCRF" | "ICRF" => Some(Frame::Inertial),
+            "GCRS" | "GCRF" | "EME2000" | "J2000" | "ICRF" => Some(Frame::Inertial),
             "ECEF" | "WGS84" | "WGS-84" => Some(Frame::EarthFixed),
             _ if upper.starts_with("ITRF") || upper.starts_with("IGS") => Some(Frame::EarthFixed),
             _ => None,

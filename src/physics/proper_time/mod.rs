@@ -33,6 +33,7 @@ pub use series::{
     kepler_periodic_term_s, relative_to_tcg, ProperTimeSample, ProperTimeSeries, ProperTimeSummary,
 };
 
+use crate::physics::readable::readable;
 use std::fmt;
 
 use crate::physics::constants::{EARTH_ROTATION_RAD_S, SPEED_OF_LIGHT_SQUARED_M2_S2};
@@ -200,8 +201,8 @@ where
                 "sampling_too_coarse",
                 Some(index),
                 format!(
-                    "the object moves through {:.0} rad of its geocentric direction in this interval of {length_s} s; sample the trajectory more densely",
-                    length_s * angular_rate
+                    "the object moves through {} rad of its geocentric direction in this interval of {length_s} s; sample the trajectory more densely",
+                    readable((length_s * angular_rate).round()), length_s = readable(length_s)
                 ),
             ));
         };

@@ -10,6 +10,7 @@ use crate::physics::geodesy::{
 use crate::physics::gravity::{dot, earth_potential_m2_s2, norm, GravityModel};
 use crate::physics::rate::error::{require_finite_vector, RateError, RateErrorKind};
 use crate::physics::rate::{RateParts, RateReference};
+use crate::physics::readable::readable;
 
 /// Coordinate frame of a state vector.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -85,7 +86,10 @@ pub fn state_rate(
     if speed_m_s.is_nan() || speed_m_s >= SPEED_OF_LIGHT_M_S {
         return Err(RateError::new(
             "velocity_m_s",
-            format!("inertial speed must be below c = {SPEED_OF_LIGHT_M_S} m/s, got {speed_m_s}"),
+            format!(
+                "inertial speed must be below c = {SPEED_OF_LIGHT_M_S} m/s, got {speed_m_s}",
+                speed_m_s = readable(speed_m_s)
+            ),
         )
         .with_kind(RateErrorKind::SpeedNotBelowC));
     }
@@ -154,7 +158,7 @@ fn validate_position(frame: Frame, position_m: [f64; 3]) -> Result<(), RateError
         return Err(RateError::new(
             "position_m",
             format!(
-                "geocentric distance {r_m} m is beyond the Earth's Hill sphere ({MAX_GEOCENTRIC_DISTANCE_M} m), where this geocentric model does not apply"
+                "geocentric distance {r_m} m is beyond the Earth's Hill sphere ({MAX_GEOCENTRIC_DISTANCE_M} m), where this geocentric model does not apply", r_m = readable(r_m)
             ),
         )
         .with_kind(if r_m.is_nan() {
@@ -171,7 +175,7 @@ fn validate_position(frame: Frame, position_m: [f64; 3]) -> Result<(), RateError
         return Err(RateError::new(
             "position_m",
             format!(
-                "position (geocentric distance {r_m} m) is more than {MAX_DEPTH_BELOW_SURFACE_M} m inside the Earth"
+                "position (geocentric distance {r_m} m) is more than {MAX_DEPTH_BELOW_SURFACE_M} m inside the Earth", r_m = readable(r_m)
             ),
         )
         .with_kind(RateErrorKind::BelowSurface));
