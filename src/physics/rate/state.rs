@@ -264,7 +264,8 @@ mod tests {
     fn itrf_ground_clock_equals_rotating_frame_formula() {
         // Ashby (2003) eq. (21): a clock at rest in ITRF has v = omega_E x r, so the state rate
         // equals (W0 - W)/c^2 with W = U + omega^2 (x^2+y^2)/2 (IERS Conventions (2010) ch. 10).
-        let position = geodetic_to_ecef_m(40.0, -105.0, 1650.0).unwrap();
+        // The invented Tessaro station of the demo scenario.
+        let position = geodetic_to_ecef_m(46.1, 11.2, 1050.0).unwrap();
         let state = StateVector {
             frame: Frame::Itrf,
             position_m: position,
