@@ -33,7 +33,8 @@ fn circular_orbit(a_m: f64) -> Value {
 }
 
 fn geoid_site(latitude_deg: f64, height_m: f64) -> Value {
-    json!({"ground_site": {"latitude_deg": latitude_deg, "longitude_deg": 8.5,
+    // At the longitude of the invented Tessaro station of the demo scenario.
+    json!({"ground_site": {"latitude_deg": latitude_deg, "longitude_deg": 11.2,
         "height_m": height_m, "height_reference": "geoid"}})
 }
 
@@ -227,7 +228,7 @@ async fn lunar_site_and_references() {
 #[tokio::test]
 async fn compare_navigation_clock_with_ground_clock() {
     let server = TestServer::start().await;
-    let request = json!({"clock_a": circular_orbit(NAV_A_M), "clock_b": geoid_site(47.3, 0.0)});
+    let request = json!({"clock_a": circular_orbit(NAV_A_M), "clock_b": geoid_site(46.1, 0.0)});
     let (status, _, body) = post_json(&server, "/v1/clock/compare", &request).await;
     assert_eq!(status, 200, "{body}");
     let difference = &body["a_minus_b"];
@@ -246,7 +247,7 @@ async fn compare_navigation_clock_with_ground_clock() {
         "{difference}"
     );
     // Swapped: B gains on A by the opposite amount.
-    let swapped = json!({"clock_a": geoid_site(47.3, 0.0), "clock_b": circular_orbit(NAV_A_M)});
+    let swapped = json!({"clock_a": geoid_site(46.1, 0.0), "clock_b": circular_orbit(NAV_A_M)});
     let (_, _, back) = post_json(&server, "/v1/clock/compare", &swapped).await;
     let back_fractional = num(&back["a_minus_b"]["fractional"]);
     assert!(

@@ -106,7 +106,7 @@ async fn moving_navigation_satellite_converges_with_a_clock_term() {
         &server,
         json!({"frame": "ITRF", "position_m": [15_600_000.0, 7_540_000.0, 20_140_000.0],
                "velocity_m_s": [-2000.0, 2800.0, 500.0]}),
-        json!({"ground_site": {"latitude_deg": 50.8, "longitude_deg": 4.4, "height_m": 100.0}}),
+        json!({"ground_site": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0}}),
     )
     .await;
     // Common practice: the GNSS light-time iteration converges in a few steps, and MEO light
@@ -164,15 +164,16 @@ async fn two_way_symmetric_stations_and_meridian_stations() {
 #[tokio::test]
 async fn two_way_transatlantic_magnitude() {
     // Loose sanity check only (from memory): intercontinental two-way links carry Sagnac
-    // corrections of tens to about two hundred nanoseconds.
+    // corrections of tens to about two hundred nanoseconds. The invented Ashgrove (46.3 N,
+    // 69.6 W) and Tessaro (46.1 N, 11.2 E) stations of the demo scenario, relay at 30 W.
     let server = TestServer::start().await;
     let (status, _, answer) = post_json(
         &server,
         "/v1/signal/two-way",
         &json!({
-            "station_a": {"latitude_deg": 38.9, "longitude_deg": -77.0, "height_m": 100.0},
-            "station_b": {"latitude_deg": 52.3, "longitude_deg": 10.5, "height_m": 100.0},
-            "satellite_longitude_deg": -50.0
+            "station_a": {"latitude_deg": 46.3, "longitude_deg": -69.6, "height_m": 300.0},
+            "station_b": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0},
+            "satellite_longitude_deg": -30.0
         }),
     )
     .await;

@@ -173,7 +173,10 @@ where
             if value.fract() == 0.0 && (0.0..=9_007_199_254_740_992.0).contains(&value) {
                 Ok(Some(value as usize))
             } else {
-                Err(E::custom(format!("{value} is not a whole number from 0")))
+                Err(E::custom(format!(
+                    "{} is not a whole number from 0",
+                    crate::physics::readable::readable(value)
+                )))
             }
         }
     }

@@ -287,7 +287,7 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     ),
     (
         "unsupported_frame",
-        "The ephemeris frame is not one the service reads (GCRF, EME2000, ICRF inertial; ITRF Earth-fixed).",
+        "The ephemeris frame is not one the service reads (GCRS, GCRF, EME2000, ICRF inertial; ITRF Earth-fixed).",
     ),
     (
         "oem_unsupported_version",

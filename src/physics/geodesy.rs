@@ -11,6 +11,7 @@ use crate::physics::rate_error::{
     require_finite, require_finite_vector, require_latitude_deg, require_longitude_deg, RateError,
     RateErrorKind,
 };
+use crate::physics::readable::readable;
 
 /// GRS80 semi-minor axis b = a (1 - f), m (6 356 752.3141 m, Moritz, GRS80).
 pub const GRS80_SEMI_MINOR_AXIS_M: f64 = GRS80_SEMI_MAJOR_AXIS_M * (1.0 - GRS80_FLATTENING);
@@ -58,7 +59,7 @@ pub fn require_height_m(field: &'static str, height_m: f64) -> Result<f64, RateE
         return Err(RateError::new(
             field,
             format!(
-                "must be at least -{MAX_DEPTH_BELOW_SURFACE_M} m (deeper than any real clock), got {height_m}"
+                "must be at least -{MAX_DEPTH_BELOW_SURFACE_M} m (deeper than any real clock), got {height_m}", height_m = readable(height_m)
             ),
         )
         .with_kind(RateErrorKind::BelowSurface));
@@ -66,7 +67,7 @@ pub fn require_height_m(field: &'static str, height_m: f64) -> Result<f64, RateE
     if height_m > MAX_SITE_HEIGHT_M {
         return Err(RateError::new(
             field,
-            format!("must be at most {MAX_SITE_HEIGHT_M} m for a site fixed to the body, got {height_m}"),
+            format!("must be at most {MAX_SITE_HEIGHT_M} m for a site fixed to the body, got {height_m}", height_m = readable(height_m)),
         )
         .with_kind(RateErrorKind::BeyondModelRange));
     }

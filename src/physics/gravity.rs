@@ -9,6 +9,7 @@ use crate::physics::constants::{
     EARTH_ROTATION_RAD_S, EQUATORIAL_RADIUS_EARTH_M, GM_EARTH_M3_S2, GM_MOON_M3_S2, J2_EARTH,
 };
 use crate::physics::rate_error::{require_finite, require_finite_vector, RateError, RateErrorKind};
+use crate::physics::readable::readable;
 use crate::physics::vocabulary::vocabulary;
 
 /// Smallest distance from a body's centre at which a potential is evaluated, m. Below it the
@@ -36,7 +37,7 @@ fn distance_m(field: &'static str, position_m: [f64; 3]) -> Result<f64, RateErro
         };
         return Err(RateError::new(
             field,
-            format!("distance from the body's centre must be at least {MIN_DISTANCE_M} m and finite, got {r_m}"),
+            format!("distance from the body's centre must be at least {MIN_DISTANCE_M} m and finite, got {r_m}", r_m = readable(r_m)),
         )
         .with_kind(kind));
     }

@@ -9,6 +9,7 @@ pub mod gravity;
 pub mod proper_time;
 pub mod rate;
 pub mod rate_error;
+pub mod readable;
 pub mod signal;
 pub mod time;
 pub mod vocabulary;

@@ -1,6 +1,7 @@
 //! The error of every rate, potential and geodesy function: the offending input field, a stable
 //! kind (with its snake_case code) and why.
 
+use crate::physics::readable::{readable, readable_vector};
 use std::fmt;
 
 use crate::physics::vocabulary::vocabulary;
@@ -92,10 +93,14 @@ pub fn require_finite(field: &'static str, value: f64) -> Result<f64, RateError>
     if value.is_finite() {
         Ok(value)
     } else {
-        Err(
-            RateError::new(field, format!("must be a finite number, got {value}"))
-                .with_kind(RateErrorKind::NotFinite),
+        Err(RateError::new(
+            field,
+            format!(
+                "must be a finite number, got {value}",
+                value = readable(value)
+            ),
         )
+        .with_kind(RateErrorKind::NotFinite))
     }
 }
 
@@ -106,7 +111,10 @@ pub fn require_finite_vector(field: &'static str, value: [f64; 3]) -> Result<[f6
     } else {
         Err(RateError::new(
             field,
-            format!("every component must be a finite number, got {value:?}"),
+            format!(
+                "every component must be a finite number, got {}",
+                readable_vector(&value)
+            ),
         )
         .with_kind(RateErrorKind::NotFinite))
     }
@@ -120,7 +128,10 @@ pub fn require_latitude_deg(field: &'static str, latitude_deg: f64) -> Result<f6
     } else {
         Err(RateError::new(
             field,
-            format!("must lie in [-90, 90] degrees, got {latitude_deg}"),
+            format!(
+                "must lie in [-90, 90] degrees, got {latitude_deg}",
+                latitude_deg = readable(latitude_deg)
+            ),
         )
         .with_kind(RateErrorKind::LatitudeOutOfRange))
     }
@@ -134,7 +145,10 @@ pub fn require_longitude_deg(field: &'static str, longitude_deg: f64) -> Result<
     } else {
         Err(RateError::new(
             field,
-            format!("must be an angle in degrees (|value| <= 1e6), got {longitude_deg}"),
+            format!(
+                "must be an angle in degrees (|value| <= 1e6), got {longitude_deg}",
+                longitude_deg = readable(longitude_deg)
+            ),
         )
         .with_kind(RateErrorKind::AngleOutOfRange))
     }

@@ -22,7 +22,7 @@ pub mod text;
 pub mod track_proper_time;
 
 pub use error::TrajectoryError;
-pub use interpolate::{validate_track, InterpolationOptions, Interpolator};
+pub use interpolate::{validate_track, InterpolationOptions, Interpolator, MAX_POINTS};
 pub use json::read_json;
 pub use oem::read_oem;
 pub use sp3::read_sp3;
@@ -41,7 +41,7 @@ pub enum Frame {
 }
 
 /// Exact names of the geocentric inertial frames a JSON ephemeris may name.
-pub const INERTIAL_FRAME_NAMES: &[&str] = &["GCRF", "EME2000", "J2000", "ICRF"];
+pub const INERTIAL_FRAME_NAMES: &[&str] = &["GCRS", "GCRF", "EME2000", "J2000", "ICRF"];
 /// Exact names of Earth-fixed frames a JSON ephemeris may name (besides the families).
 pub const EARTH_FIXED_FRAME_NAMES: &[&str] = &["ECEF", "WGS84", "WGS-84"];
 /// Prefixes of the Earth-fixed frame families (ITRF, ITRF2014, ITRF2020, IGS20...).

@@ -13,6 +13,7 @@ use crate::physics::proper_time::{
     integrate_proper_time, EarthFixed, ProperTimeError, ProperTimeOptions, ProperTimeSeries,
     Trajectory,
 };
+use crate::physics::readable::readable;
 use crate::physics::time::convert::{from_tt_attos, to_tt_attos, ConversionContext};
 use crate::physics::time::instant::{seconds_f64_to_attos, Instant};
 
@@ -112,7 +113,7 @@ fn output_grid(
         return Err(TrajectoryError::new(
             "bad_option",
             format!(
-                "an output step of {step_s} s over {end_s} s gives {count} epochs; at most {MAX_OUTPUT_EPOCHS} per object"
+                "an output step of {step_s} s over {end_s} s gives {count} epochs; at most {MAX_OUTPUT_EPOCHS} per object", step_s = readable(step_s), end_s = readable(end_s)
             ),
         )
         .for_object(&track.id));

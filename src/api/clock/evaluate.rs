@@ -11,6 +11,7 @@ use crate::physics::rate::{
     GravityModel, GroundSite, HeightReference, KeplerianOrbit, LunarSite, RateError, RateParts,
     RateReference, StateVector,
 };
+use crate::physics::readable::readable;
 
 /// Settings given at the request level, already read.
 #[derive(Debug, Clone, Copy, Default)]
@@ -306,7 +307,10 @@ fn orbit_answer(
         if !(0.0..=180.0).contains(&inclination) {
             return Err(ApiError::unprocessable(
                 "angle_out_of_range",
-                format!("inclination must lie in [0, 180] degrees, got {inclination}"),
+                format!(
+                    "inclination must lie in [0, 180] degrees, got {inclination}",
+                    inclination = readable(inclination)
+                ),
             )
             .with_field(format!("{path}.orbit.inclination_deg")));
         }

@@ -59,7 +59,7 @@ pub struct OrbitInput {
 /// A clock at rest on the rotating Earth.
 #[derive(Debug, Clone, Deserialize, ToSchema)]
 #[serde(deny_unknown_fields)]
-#[schema(example = json!({"latitude_deg": 47.3, "longitude_deg": 8.5, "height_m": 500.0,
+#[schema(example = json!({"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0,
     "height_reference": "geoid"}))]
 pub struct GroundSiteInput {
     /// Geodetic latitude on GRS80, degrees in [-90, 90].
@@ -129,7 +129,7 @@ pub struct RateItem {
 #[schema(example = json!({
     "items": [
         {"orbit": {"semi_major_axis_m": 26561750.0, "eccentricity": 0.01, "mean_anomaly_deg": 30.0}},
-        {"ground_site": {"latitude_deg": 47.3, "longitude_deg": 8.5, "height_m": 500.0}},
+        {"ground_site": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0}},
         {"state": {"frame": "GCRS", "position_m": [7000000.0, 0.0, 0.0], "velocity_m_s": [0.0, 7546.05, 0.0]}},
         {"lunar_site": {"latitude_deg": -89.5, "longitude_deg": 0.0}}
     ],
@@ -162,7 +162,7 @@ pub struct RateRequest {
 #[serde(deny_unknown_fields)]
 #[schema(example = json!({
     "clock_a": {"orbit": {"semi_major_axis_m": 26561750.0, "eccentricity": 0.0}},
-    "clock_b": {"ground_site": {"latitude_deg": 47.3, "longitude_deg": 8.5, "height_m": 0.0,
+    "clock_b": {"ground_site": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0,
         "height_reference": "geoid"}},
     "reference": "TT"
 }))]

@@ -2,7 +2,8 @@
 
 use axum::http::{header, HeaderMap, StatusCode};
 
-use super::types::{EphemerisInput, ProperTimeOptionsInput, MAX_OPTION_SECONDS};
+use super::options::check_options;
+use super::types::{EphemerisInput, ProperTimeOptionsInput};
 use crate::api::clock::evaluate::{parse_gravity_model, parse_reference};
 use crate::api::error::ApiError;
 use crate::api::extract::{check_batch_size, parse_json};
@@ -119,18 +120,6 @@ fn check_geocentric_range(ephemeris: &TrajectorySet) -> Result<(), ApiError> {
     Ok(())
 }
 
-/// An option in seconds, finite and at most [`MAX_OPTION_SECONDS`] in magnitude.
-fn seconds_option(value: Option<f64>, field: &str) -> Result<Option<f64>, ApiError> {
-    match finite_option(value, field)? {
-        Some(v) if v.abs() > MAX_OPTION_SECONDS => Err(ApiError::unprocessable(
-            "bad_option",
-            format!("{field} is {v} s; at most {MAX_OPTION_SECONDS} s (the supported range of instants) in magnitude"),
-        )
-        .with_field(field)),
-        other => Ok(other),
-    }
-}
-
 fn sniff(body: &str) -> Result<BodyFormat, ApiError> {
     let start = body.trim_start_matches('\u{feff}').trim_start();
     if start.starts_with('{') {
@@ -203,7 +192,7 @@ fn json_document(input: EphemerisInput) -> (JsonEphemeris, Option<ProperTimeOpti
     (document, input.options.map(ProperTimeOptionsInput::from))
 }
 
-/// Body options override query options field by field.
+/// Body options override query options field by field (each source checked on its own first).
 fn merge(
     query: ProperTimeOptionsInput,
     body: Option<ProperTimeOptionsInput>,
@@ -221,17 +210,6 @@ fn merge(
     }
 }
 
-fn finite_option(value: Option<f64>, field: &str) -> Result<Option<f64>, ApiError> {
-    match value {
-        Some(v) if !v.is_finite() => Err(ApiError::unprocessable(
-            "not_finite",
-            format!("{field} must be a finite number"),
-        )
-        .with_field(field)),
-        other => Ok(other),
-    }
-}
-
 /// Reads the body in its format and resolves the options.
 pub fn read_request(
     headers: &HeaderMap,
@@ -246,6 +224,7 @@ pub fn read_request(
             format!("the body is not UTF-8 text: {e}"),
         )
     })?;
+    check_options(&query, "")?;
     let context = ConversionContext::geocentric(table);
     let (ephemeris, options) = match body_format(headers, query.format.as_deref(), text)? {
         BodyFormat::Json => {
@@ -267,6 +246,9 @@ pub fn read_request(
                     .with_field("options.format")
                 })?;
             }
+            if let Some(body_options) = input.options.clone() {
+                check_options(&body_options.into(), "options.")?;
+            }
             let (document, body_options) = json_document(input);
             let ephemeris = from_document(&document, &context).map_err(ephemeris_problem)?;
             (ephemeris, merge(query, body_options))
@@ -287,9 +269,8 @@ pub fn read_request(
     };
     let interpolation = InterpolationOptions {
         points: options.interpolation_points.unwrap_or(8),
-        max_gap_s: seconds_option(options.max_gap_s, "max_gap_s")?
-            .unwrap_or(settings.max_ephemeris_gap_s),
-        output_step_s: seconds_option(options.step_s, "step_s")?,
+        max_gap_s: options.max_gap_s.unwrap_or(settings.max_ephemeris_gap_s),
+        output_step_s: options.step_s,
     };
     interpolation.check().map_err(ephemeris_problem)?;
     Ok(ProperTimeRequest {
@@ -297,8 +278,7 @@ pub fn read_request(
         reference,
         gravity_model,
         interpolation,
-        initial_offset_s: seconds_option(options.initial_offset_s, "initial_offset_s")?
-            .unwrap_or(0.0),
+        initial_offset_s: options.initial_offset_s.unwrap_or(0.0),
         include_series: options.include_series.unwrap_or(true),
     })
 }

@@ -3,6 +3,7 @@
 
 mod answer;
 mod body;
+mod options;
 pub mod types;
 
 use axum::extract::State;

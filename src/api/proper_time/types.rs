@@ -155,7 +155,7 @@ pub struct ObjectInput {
     "options": {"reference": "TT", "interpolation_points": 2}
 }))]
 pub struct EphemerisInput {
-    /// Frame: `GCRF`, `EME2000`, `J2000`, `ICRF` (inertial) or `ITRF`, `ITRF2014`..., `IGS20`...,
+    /// Frame: `GCRS`, `GCRF`, `EME2000`, `J2000`, `ICRF` (inertial) or `ITRF`, `ITRF2014`..., `IGS20`...,
     /// `ECEF`, `WGS84` (Earth-fixed; velocities made inertial with the Earth's rotation).
     #[schema(value_type = EphemerisFrameName)]
     pub frame: String,

@@ -12,7 +12,7 @@ use crate::api::time::types::InstantForms;
 #[derive(Debug, Clone, Copy, Deserialize, ToSchema)]
 #[schema(as = GeodeticSiteInput)]
 #[serde(deny_unknown_fields)]
-#[schema(example = json!({"latitude_deg": 50.1, "longitude_deg": 8.6, "height_m": 150.0}))]
+#[schema(example = json!({"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0}))]
 pub struct GroundSiteInput {
     /// Geodetic latitude on the GRS80 ellipsoid, degrees in [-90, 90] (north positive).
     #[schema(minimum = -90.0, maximum = 90.0)]
@@ -54,7 +54,7 @@ pub struct PathEndpointInput {
 #[schema(example = json!({
     "transmitter": {"frame": "ITRF", "position_m": [15600000.0, 7540000.0, 20140000.0],
                     "velocity_m_s": [-2000.0, 2800.0, 500.0]},
-    "receiver": {"ground_site": {"latitude_deg": 50.1, "longitude_deg": 8.6, "height_m": 150.0}},
+    "receiver": {"ground_site": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0}},
     "epoch": "2026-03-14T06:30:00", "scale": "GPST"
 }))]
 pub struct SignalPathRequest {
@@ -131,9 +131,9 @@ pub struct SignalPathAnswer {
 #[derive(Debug, Clone, Deserialize, ToSchema)]
 #[serde(deny_unknown_fields)]
 #[schema(example = json!({
-    "station_a": {"latitude_deg": 38.9, "longitude_deg": -77.0, "height_m": 100.0},
-    "station_b": {"latitude_deg": 52.3, "longitude_deg": 10.5, "height_m": 100.0},
-    "satellite_longitude_deg": -50.0
+    "station_a": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0},
+    "station_b": {"latitude_deg": 52.6, "longitude_deg": -1.9, "height_m": 120.0},
+    "satellite_longitude_deg": 5.0
 }))]
 pub struct TwoWayRequest {
     /// Station A.

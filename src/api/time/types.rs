@@ -97,7 +97,7 @@ pub struct ConvertQuery {
     /// Observer for the topocentric part of TDB - TT: ITRF position in metres, `x,y,z` (no
     /// spaces), within 6 340 km to 6 480 km of the geocentre (422 `observer_not_on_ground`
     /// otherwise).
-    #[param(value_type = Option<ThreeNumbersText>, example = "4027894.0,307045.0,4919474.9")]
+    #[param(value_type = Option<ThreeNumbersText>, example = "4346657.2,860661.3,4573718.4")]
     pub observer_itrf_m: Option<String>,
 }
 
@@ -106,7 +106,7 @@ pub struct ConvertQuery {
 /// of the geocentre (422 `invalid_observer`, `observer_not_on_ground` otherwise).
 #[derive(Debug, Clone, Deserialize, ToSchema)]
 #[serde(deny_unknown_fields)]
-#[schema(example = json!({"latitude_deg": 50.1, "longitude_deg": 8.6, "height_m": 150.0}))]
+#[schema(example = json!({"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0}))]
 pub struct ObserverInput {
     /// ITRF position [x, y, z] in metres (each component within 6 480 km); give this or the
     /// geodetic pair.

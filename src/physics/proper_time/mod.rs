@@ -34,6 +34,7 @@ pub use series::{
     PERIODIC_NOTE,
 };
 
+use crate::physics::readable::readable;
 use std::fmt;
 
 use crate::physics::vocabulary::vocabulary;
@@ -236,8 +237,8 @@ where
                 ProperTimeErrorKind::SamplingTooCoarse,
                 Some(index),
                 format!(
-                    "the object moves through {:.0} rad of its geocentric direction in this interval of {length_s} s; sample the trajectory more densely",
-                    length_s * angular_rate
+                    "the object moves through {} rad of its geocentric direction in this interval of {length_s} s; sample the trajectory more densely",
+                    readable((length_s * angular_rate).round()), length_s = readable(length_s)
                 ),
             ));
         };

@@ -1,6 +1,7 @@
 //! From a fractional rate to frequencies: the offset seen from the ground and the factory setting.
 
 use crate::physics::rate::error::{require_finite, RateError, RateErrorKind};
+use crate::physics::readable::readable;
 
 /// Frequency consequences of a fractional rate offset y = d(tau)/d(t) - 1.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -41,7 +42,8 @@ pub fn frequency_offset(
         return Err(RateError::new(
             "nominal_hz",
             format!(
-                "must be positive and at most {MAX_NOMINAL_FREQUENCY_HZ:e} Hz, got {nominal_hz}"
+                "must be positive and at most {MAX_NOMINAL_FREQUENCY_HZ:e} Hz, got {nominal_hz}",
+                nominal_hz = readable(nominal_hz)
             ),
         )
         .with_kind(RateErrorKind::InvalidFrequency));
@@ -50,7 +52,10 @@ pub fn frequency_offset(
     if fractional_rate.abs() > MAX_FRACTIONAL_RATE {
         return Err(RateError::new(
             "fractional_rate",
-            format!("must be at most {MAX_FRACTIONAL_RATE} in magnitude, got {fractional_rate}"),
+            format!(
+                "must be at most {MAX_FRACTIONAL_RATE} in magnitude, got {fractional_rate}",
+                fractional_rate = readable(fractional_rate)
+            ),
         )
         .with_kind(RateErrorKind::RateOutOfRange));
     }

@@ -9,6 +9,7 @@ use crate::physics::rate::error::{
     require_finite, require_latitude_deg, require_longitude_deg, RateError, RateErrorKind,
 };
 use crate::physics::rate::{RateParts, RateReference};
+use crate::physics::readable::readable;
 
 /// A clock fixed on the Moon.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -34,7 +35,7 @@ pub fn lunar_site_geocentric_state(site: &LunarSite) -> Result<([f64; 3], [f64; 
         return Err(RateError::new(
             "height_m",
             format!(
-                "must lie in [-{MAX_DEPTH_BELOW_SURFACE_M}, {MAX_LUNAR_SITE_HEIGHT_M}] m above the mean lunar radius, got {height_m}"
+                "must lie in [-{MAX_DEPTH_BELOW_SURFACE_M}, {MAX_LUNAR_SITE_HEIGHT_M}] m above the mean lunar radius, got {height_m}", height_m = readable(height_m)
             ),
         )
         .with_kind(if height_m < 0.0 {

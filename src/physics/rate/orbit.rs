@@ -1,5 +1,6 @@
 //! Mean rate and periodic term of a clock on a Keplerian orbit around the Earth.
 
+use crate::physics::readable::readable;
 use std::f64::consts::PI;
 
 use crate::physics::constants::{
@@ -167,7 +168,10 @@ pub fn eccentric_anomaly_rad(anomaly: Anomaly, eccentricity: f64) -> Result<f64,
     if angle_deg.abs() > MAX_ANGLE_DEG {
         return Err(RateError::new(
             field,
-            format!("must be at most {MAX_ANGLE_DEG} degrees in magnitude, got {angle_deg}"),
+            format!(
+                "must be at most {MAX_ANGLE_DEG} degrees in magnitude, got {angle_deg}",
+                angle_deg = readable(angle_deg)
+            ),
         )
         .with_kind(RateErrorKind::AngleOutOfRange));
     }
@@ -209,7 +213,10 @@ fn validate_orbit(orbit: &KeplerianOrbit) -> Result<f64, RateError> {
     if !(0.0..1.0).contains(&e) {
         return Err(RateError::new(
             "eccentricity",
-            format!("must lie in [0, 1) for a closed orbit, got {e}"),
+            format!(
+                "must lie in [0, 1) for a closed orbit, got {e}",
+                e = readable(e)
+            ),
         )
         .with_kind(RateErrorKind::InvalidEccentricity));
     }
@@ -224,7 +231,7 @@ fn validate_orbit(orbit: &KeplerianOrbit) -> Result<f64, RateError> {
         return Err(RateError::new(
             "semi_major_axis_m",
             format!(
-                "must lie in [{MIN_GCRS_DISTANCE_M}, {MAX_GEOCENTRIC_DISTANCE_M}] m (above the Earth, inside its Hill sphere), got {a_m}"
+                "must lie in [{MIN_GCRS_DISTANCE_M}, {MAX_GEOCENTRIC_DISTANCE_M}] m (above the Earth, inside its Hill sphere), got {a_m}", a_m = readable(a_m)
             ),
         )
         .with_kind(kind));
@@ -233,7 +240,7 @@ fn validate_orbit(orbit: &KeplerianOrbit) -> Result<f64, RateError> {
     if periapsis_m < MIN_GCRS_DISTANCE_M {
         return Err(RateError::new(
             "eccentricity",
-            format!("periapsis a(1 - e) = {periapsis_m} m is inside the Earth (below {MIN_GCRS_DISTANCE_M} m)"),
+            format!("periapsis a(1 - e) = {periapsis_m} m is inside the Earth (below {MIN_GCRS_DISTANCE_M} m)", periapsis_m = readable(periapsis_m)),
         )
         .with_kind(RateErrorKind::BelowSurface));
     }
@@ -241,7 +248,7 @@ fn validate_orbit(orbit: &KeplerianOrbit) -> Result<f64, RateError> {
     if apoapsis_m > MAX_GEOCENTRIC_DISTANCE_M {
         return Err(RateError::new(
             "eccentricity",
-            format!("apoapsis a(1 + e) = {apoapsis_m} m is beyond the Earth's Hill sphere ({MAX_GEOCENTRIC_DISTANCE_M} m)"),
+            format!("apoapsis a(1 + e) = {apoapsis_m} m is beyond the Earth's Hill sphere ({MAX_GEOCENTRIC_DISTANCE_M} m)", apoapsis_m = readable(apoapsis_m)),
         )
         .with_kind(RateErrorKind::BeyondModelRange));
     }

@@ -10,6 +10,7 @@ use crate::physics::geodesy::{
 use crate::physics::gravity::{dot, earth_potential_m2_s2, norm, GravityModel};
 use crate::physics::rate::error::{require_finite_vector, RateError, RateErrorKind};
 use crate::physics::rate::{RateParts, RateReference};
+use crate::physics::readable::readable;
 use crate::physics::vocabulary::vocabulary;
 
 vocabulary! {
@@ -97,7 +98,10 @@ pub fn state_rate(
     if speed_m_s.is_nan() || speed_m_s >= SPEED_OF_LIGHT_M_S {
         return Err(RateError::new(
             "velocity_m_s",
-            format!("inertial speed must be below c = {SPEED_OF_LIGHT_M_S} m/s, got {speed_m_s}"),
+            format!(
+                "inertial speed must be below c = {SPEED_OF_LIGHT_M_S} m/s, got {speed_m_s}",
+                speed_m_s = readable(speed_m_s)
+            ),
         )
         .with_kind(RateErrorKind::SpeedNotBelowC));
     }
@@ -166,7 +170,7 @@ fn validate_position(frame: Frame, position_m: [f64; 3]) -> Result<(), RateError
         return Err(RateError::new(
             "position_m",
             format!(
-                "geocentric distance {r_m} m is beyond the Earth's Hill sphere ({MAX_GEOCENTRIC_DISTANCE_M} m), where this geocentric model does not apply"
+                "geocentric distance {r_m} m is beyond the Earth's Hill sphere ({MAX_GEOCENTRIC_DISTANCE_M} m), where this geocentric model does not apply", r_m = readable(r_m)
             ),
         )
         .with_kind(if r_m.is_nan() {
@@ -183,7 +187,7 @@ fn validate_position(frame: Frame, position_m: [f64; 3]) -> Result<(), RateError
         return Err(RateError::new(
             "position_m",
             format!(
-                "position (geocentric distance {r_m} m) is more than {MAX_DEPTH_BELOW_SURFACE_M} m inside the Earth"
+                "position (geocentric distance {r_m} m) is more than {MAX_DEPTH_BELOW_SURFACE_M} m inside the Earth", r_m = readable(r_m)
             ),
         )
         .with_kind(RateErrorKind::BelowSurface));
@@ -272,7 +276,8 @@ mod tests {
     fn itrf_ground_clock_equals_rotating_frame_formula() {
         // Ashby (2003) eq. (21): a clock at rest in ITRF has v = omega_E x r, so the state rate
         // equals (W0 - W)/c^2 with W = U + omega^2 (x^2+y^2)/2 (IERS Conventions (2010) ch. 10).
-        let position = geodetic_to_ecef_m(40.0, -105.0, 1650.0).unwrap();
+        // The invented Tessaro station of the demo scenario.
+        let position = geodetic_to_ecef_m(46.1, 11.2, 1050.0).unwrap();
         let state = StateVector {
             frame: Frame::Itrf,
             position_m: position,

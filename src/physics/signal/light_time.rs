@@ -9,6 +9,7 @@ use crate::physics::geodesy::{is_deep_inside_earth, itrf_to_inertial_velocity_m_
 use crate::physics::gravity::norm;
 use crate::physics::rate::state::{periodic_value_s, MIN_GCRS_DISTANCE_M};
 use crate::physics::rate::Frame;
+use crate::physics::readable::readable;
 use crate::physics::signal::error::{SignalError, SignalErrorKind};
 use crate::physics::signal::formulas::{
     difference_m, rotate_about_z_m, segment_closest_approach_m, shapiro_delay_s,
@@ -117,7 +118,7 @@ pub fn signal_path(geometry: &PathGeometry) -> Result<SignalPath, SignalError> {
             SignalErrorKind::CoincidentEndpoints,
             "receiver.position_m",
             format!(
-                "transmitter and receiver are {initial_range_m} m apart; at least {MIN_RANGE_M} m is needed"
+                "transmitter and receiver are {initial_range_m} m apart; at least {MIN_RANGE_M} m is needed", initial_range_m = readable(initial_range_m)
             ),
         ));
     }
@@ -286,7 +287,7 @@ fn validate_endpoint(
             SignalErrorKind::BeyondRange,
             position_field,
             format!(
-                "geocentric distance {distance_m} m is beyond {MAX_GEOCENTRIC_DISTANCE_M} m, where the Sun's delay (not modelled) dominates the Earth's"
+                "geocentric distance {distance_m} m is beyond {MAX_GEOCENTRIC_DISTANCE_M} m, where the Sun's delay (not modelled) dominates the Earth's", distance_m = readable(distance_m)
             ),
         ));
     }
@@ -321,7 +322,8 @@ fn validate_endpoint(
                 SignalErrorKind::SpeedNotBelowC,
                 velocity_field,
                 format!(
-                    "inertial speed must be below c = {SPEED_OF_LIGHT_M_S} m/s, got {speed_m_s}"
+                    "inertial speed must be below c = {SPEED_OF_LIGHT_M_S} m/s, got {speed_m_s}",
+                    speed_m_s = readable(speed_m_s)
                 ),
             ));
         }

@@ -3,6 +3,7 @@
 use crate::physics::constants::{GEOSTATIONARY_RADIUS_M, MAX_GEOCENTRIC_DISTANCE_M};
 use crate::physics::geodesy::{geodetic_to_ecef_m, is_deep_inside_earth};
 use crate::physics::rate::error::{require_finite, require_longitude_deg};
+use crate::physics::readable::readable;
 use crate::physics::signal::error::{SignalError, SignalErrorKind};
 use crate::physics::signal::formulas::{elevation_deg, sagnac_rotating_frame_s};
 
@@ -96,7 +97,7 @@ pub fn two_way_sagnac(link: &TwoWayLink) -> Result<TwoWaySagnac, SignalError> {
             SignalErrorKind::InvalidValue,
             "satellite_radius_m",
             format!(
-                "must put the satellite above the Earth and within {MAX_GEOCENTRIC_DISTANCE_M} m of the geocentre, got {radius_m}"
+                "must put the satellite above the Earth and within {MAX_GEOCENTRIC_DISTANCE_M} m of the geocentre, got {radius_m}", radius_m = readable(radius_m)
             ),
         ));
     }

@@ -82,12 +82,12 @@ fn area_rule_gives_207_ns_around_the_equator() {
 #[test]
 fn transatlantic_link_is_a_couple_hundred_ns() {
     // Loose sanity check only (from memory): intercontinental two-way links need Sagnac
-    // corrections of tens to about two hundred ns. Stations in eastern North America
-    // (38.9 N, 77.0 W) and central Europe (52.3 N, 10.5 E), satellite at 50 W.
+    // corrections of tens to about two hundred ns. The invented stations Ashgrove (46.3 N,
+    // 69.6 W, in open woodland) and Tessaro (46.1 N, 11.2 E) of the demo scenario, relay at 30 W.
     let link = TwoWayLink::geostationary(
-        station(38.9, -77.0, 100.0),
-        station(52.3, 10.5, 100.0),
-        -50.0,
+        station(46.3, -69.6, 300.0),
+        station(46.1, 11.2, 1050.0),
+        -30.0,
     );
     let sagnac = two_way_sagnac(&link).unwrap();
     assert!(

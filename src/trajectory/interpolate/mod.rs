@@ -12,8 +12,10 @@ pub use validate::validate_track;
 
 use super::error::TrajectoryError;
 use super::ObjectTrack;
+use crate::physics::readable::readable;
 use crate::physics::time::convert::ConversionContext;
-use basis::{hermite, lagrange, window_weights, MAX_POINTS};
+pub use basis::MAX_POINTS;
+use basis::{hermite, lagrange, window_weights};
 
 /// How tracks are interpolated and what is accepted.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -54,7 +56,7 @@ impl InterpolationOptions {
                 "bad_option",
                 format!(
                     "max_gap_s is {}; expected a positive number of seconds",
-                    self.max_gap_s
+                    readable(self.max_gap_s)
                 ),
             ));
         }
@@ -62,7 +64,10 @@ impl InterpolationOptions {
             if !(step_s.is_finite() && step_s >= 1e-3) {
                 return Err(TrajectoryError::new(
                     "bad_option",
-                    format!("output step is {step_s} s; expected at least 0.001 s"),
+                    format!(
+                        "output step is {step_s} s; expected at least 0.001 s",
+                        step_s = readable(step_s)
+                    ),
                 ));
             }
         }

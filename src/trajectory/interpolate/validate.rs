@@ -5,12 +5,16 @@ use super::super::error::TrajectoryError;
 use super::super::ObjectTrack;
 use super::InterpolationOptions;
 use crate::physics::constants::{GRS80_SEMI_MINOR_AXIS_M, SPEED_OF_LIGHT_M_S};
+use crate::physics::readable::readable;
 use crate::physics::time::convert::{to_tt_attos, ConversionContext};
 
-/// An attosecond difference in seconds: one rounding of the i128 to f64 (relative 1.1e-16, the
-/// same as the f64 result itself can hold) and no i128 division, which is slow.
+/// An exact attosecond difference in seconds, converted once: one rounding of the i128 to f64
+/// and one correctly rounded division by 1e18, which is exact in binary64 (2^18 5^18, with
+/// 5^18 < 2^53). A whole number of seconds therefore comes out exact (60 s reads 60, not
+/// 60.000000000000014 as a product with the inexact 1e-18 did), and no i128 division, which
+/// is slow, is needed.
 fn attos_difference_s(attos: i128) -> f64 {
-    attos as f64 * 1e-18
+    attos as f64 / 1e18
 }
 
 fn norm(vector: &[f64; 3]) -> f64 {
@@ -99,7 +103,8 @@ pub fn validate_track(
                     index,
                     format!(
                         "{gap_s} s since the previous state, more than the allowed {} s",
-                        options.max_gap_s
+                        readable(options.max_gap_s),
+                        gap_s = readable(gap_s)
                     ),
                 ));
             }

@@ -32,6 +32,9 @@ pub fn scale_of_time_system(name: &str) -> Option<Scale> {
 
 /// Reference frames read by the OEM reader: EME2000, GCRF, ICRF (inertial) and the ITRF
 /// realizations ITRF, ITRF-93, ITRF-97, ITRF2000, ITRF2005, ITRF2008, ITRF2014, ITRF2020.
+/// REF_FRAME takes the values of the CCSDS (SANA) registry, which names the IAU's GCRS by its
+/// realisation GCRF; `GCRS` is refused here (with a hint) so that a file this reader accepts
+/// stays readable by other CCSDS tools, while the JSON ephemeris takes both names.
 pub fn frame_of_ref_frame(name: &str) -> Option<Frame> {
     match name {
         "EME2000" | "GCRF" | "ICRF" => Some(Frame::Inertial),
@@ -146,7 +149,7 @@ impl MetadataBlock {
             TrajectoryError::at_line(
                 "oem_unsupported_frame",
                 frame_line,
-                format!("REF_FRAME {frame_name:?} is not supported; expected EME2000, GCRF, ICRF (inertial) or ITRF, ITRF-93, ITRF2000, ITRF2014, ITRF2020 (Earth-fixed)"),
+                format!("REF_FRAME {frame_name:?} is not supported; expected EME2000, GCRF, ICRF (inertial) or ITRF, ITRF-93, ITRF2000, ITRF2014, ITRF2020 (Earth-fixed){}", if frame_name == "GCRS" { "; CCSDS names the GCRS `GCRF`" } else { "" }),
             )
         })?;
         let scale = scale_of_time_system(&system).ok_or_else(|| {
