@@ -332,3 +332,28 @@ async fn settings_resolve_item_over_request_over_default() {
     assert!((shift - j2_term).abs() < 1e-20, "{shift:e} vs {j2_term:e}");
     assert_eq!(results[3]["gravity_model"], "point_mass");
 }
+
+#[tokio::test]
+async fn a_site_at_the_geostationary_radius_ticks_as_a_geostationary_orbit() {
+    // A point co-rotating with the Earth above the equator at the geostationary radius
+    // (42 164 172 m, where omega_E^2 r^3 = GM: common practice) moves exactly as a circular
+    // geostationary orbit, so both answers agree up to the Earth's flattening terms that the
+    // point-mass orbit leaves out (J2 at r: about 1.3e-15, 1.2e-4 us/day; IERS Conventions
+    // (2010) table 1.1). The free-air height series used before answered over 9 000 us/day.
+    let server = TestServer::start().await;
+    let site = json!({"ground_site": {"latitude_deg": 0.0, "longitude_deg": -61.0,
+        "height_m": 42_164_172.0 - 6_378_137.0, "height_reference": "geoid"}});
+    let results = rate_of(
+        &server,
+        json!({"items": [site, circular_orbit(42_164_172.0)]}),
+    )
+    .await;
+    let us = |i: usize| num(&results[i]["us_per_day"]["total"]);
+    eprintln!("site {} orbit {}", us(0), us(1));
+    assert!(
+        (us(0) - us(1)).abs() < 2e-4,
+        "site {} orbit {}",
+        us(0),
+        us(1)
+    );
+}

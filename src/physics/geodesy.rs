@@ -4,7 +4,7 @@
 //! Angles are in degrees at the interface (`_deg`), lengths in metres.
 
 use crate::physics::constants::{
-    EARTH_ROTATION_RAD_S, GRS80_FLATTENING, GRS80_GM_M3_S2, GRS80_NORMAL_GRAVITY_EQUATOR_M_S2,
+    EARTH_ROTATION_RAD_S, GRS80_FLATTENING, GRS80_NORMAL_GRAVITY_EQUATOR_M_S2,
     GRS80_NORMAL_GRAVITY_POLE_M_S2, GRS80_SEMI_MAJOR_AXIS_M, MAX_DEPTH_BELOW_SURFACE_M,
 };
 use crate::physics::rate_error::{
@@ -125,34 +125,10 @@ pub fn normal_gravity_m_s2(latitude_deg: f64) -> Result<f64, RateError> {
         / (1.0 - GRS80_ECCENTRICITY_SQUARED * sin_sq).sqrt())
 }
 
-/// Normal-potential difference between the reference surface and a point h above it along the
-/// normal: W_surface - W(h) = gamma h (1 - (1 + f + m - 2 f sin^2 phi) h / a + h^2 / a^2),
-/// the integral of the normal free-air gravity series gamma_h = gamma (1 - 2 (1 + f + m -
-/// 2 f sin^2 phi) h/a + 3 h^2/a^2), m = omega^2 a^2 b / GM.
-///
-/// Inputs: `latitude_deg`, `height_m` (in [-11 km, 1e8 m]; the series is meant for heights of
-/// a few tens of km at most). Result: m^2/s^2, positive above the surface.
-///
-/// References: Heiskanen & Moritz (1967) eq. 2-215; NIMA TR8350.2 (2000) eq. 4-3; GRS80
-/// constants (Moritz).
-pub fn normal_potential_drop_m2_s2(latitude_deg: f64, height_m: f64) -> Result<f64, RateError> {
-    require_height_m("height_m", height_m)?;
-    let gamma_m_s2 = normal_gravity_m_s2(latitude_deg)?;
-    let sin_sq = latitude_deg.to_radians().sin().powi(2);
-    let m = EARTH_ROTATION_RAD_S
-        * EARTH_ROTATION_RAD_S
-        * GRS80_SEMI_MAJOR_AXIS_M
-        * GRS80_SEMI_MAJOR_AXIS_M
-        * GRS80_SEMI_MINOR_AXIS_M
-        / GRS80_GM_M3_S2;
-    let first = 1.0 + GRS80_FLATTENING + m - 2.0 * GRS80_FLATTENING * sin_sq;
-    let ratio = height_m / GRS80_SEMI_MAJOR_AXIS_M;
-    Ok(gamma_m_s2 * height_m * (1.0 - first * ratio + ratio * ratio))
-}
-
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::physics::earth::normal_field::grs80_normal_potential_drop_m2_s2 as normal_potential_drop_m2_s2;
 
     #[test]
     fn geodetic_to_ecef_matches_erfa_gd2gc() {

@@ -4,6 +4,7 @@
 //! comment names its publication and equation.
 
 pub mod constants;
+pub mod earth;
 pub mod geodesy;
 pub mod gravity;
 pub mod proper_time;

@@ -1,7 +1,8 @@
 //! Rate of a clock fixed on the rotating Earth.
 
 use crate::physics::constants::{EARTH_ROTATION_RAD_S, L_G, SPEED_OF_LIGHT_SQUARED_M2_S2};
-use crate::physics::geodesy::{geodetic_to_ecef_m, normal_potential_drop_m2_s2};
+use crate::physics::earth::normal_field::grs80_normal_potential_drop_m2_s2;
+use crate::physics::geodesy::geodetic_to_ecef_m;
 use crate::physics::gravity::{centrifugal_potential_m2_s2, earth_potential_m2_s2, GravityModel};
 use crate::physics::rate::error::RateError;
 use crate::physics::rate::{RateParts, RateReference};
@@ -12,8 +13,8 @@ use crate::physics::vocabulary::vocabulary;
 pub enum GroundHeight {
     /// Height above the GRS80 ellipsoid, m: the rate comes from the model potential W(x).
     EllipsoidalM(f64),
-    /// Height above the geoid (orthometric height), m: W0 - W = integral of GRS80 normal gravity
-    /// over the height; the gravity model is not used.
+    /// Height above the geoid (orthometric height), m: W0 - W = the GRS80 normal-potential drop
+    /// over the height (closed form); the gravity model is not used.
     AboveGeoidM(f64),
 }
 
@@ -75,9 +76,13 @@ pub fn ground_height_note(height_reference: HeightReference, model: GravityModel
 ///   poles; the rest is the truncated J4 term, about 150 m^2/s^2 at the poles). A real clock
 ///   also sees the geoid undulation N, up to about +-100 m (about +-1.1e-14), which no
 ///   ellipsoidal model knows: for 1e-16 work give the height above the geoid instead.
-/// * [`GroundHeight::AboveGeoidM`]: W0 - W = gamma h (1 - (1 + f + m - 2 f sin^2 phi) h/a +
-///   h^2/a^2) with GRS80 normal gravity gamma (Heiskanen & Moritz 1967 eq. 2-215), so a site on
-///   the geoid has rate 0 against TT by definition of TT. `model` is not used; `sr` is the
+/// * [`GroundHeight::AboveGeoidM`]: W0 - W = U0 - U(phi, h), the drop of the GRS80 normal
+///   potential in closed form from the ellipsoid to h above it (Heiskanen & Moritz 1967
+///   eq. 2-126; exact at every accepted height, unlike the free-air series of eq. 2-215, which
+///   is off by 3.6e-13 at 1000 km and diverges at geostationary heights), so a site on the
+///   geoid has rate 0 against TT by definition of TT. The normal field stands in for the real
+///   one between the geoid and the site (gravity anomalies, a few 1e-5 of g, change the drop
+///   by about as much of itself near the ground). `model` is not used; `sr` is the
 ///   rotation speed at the point taken as h above the ellipsoid (the geoid undulation changes it
 ///   by under 5e-17) and `gr` is the rest of the total.
 ///
@@ -97,7 +102,7 @@ pub fn ground_site_rate(
         GroundHeight::EllipsoidalM(_) => earth_potential_m2_s2(model, position_m)?,
         GroundHeight::AboveGeoidM(_) => {
             let w0_m2_s2 = L_G * SPEED_OF_LIGHT_SQUARED_M2_S2;
-            let drop_m2_s2 = normal_potential_drop_m2_s2(site.latitude_deg, height_m)?;
+            let drop_m2_s2 = grs80_normal_potential_drop_m2_s2(site.latitude_deg, height_m)?;
             w0_m2_s2 - drop_m2_s2 - centrifugal_m2_s2
         }
     };
