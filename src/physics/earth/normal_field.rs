@@ -7,7 +7,7 @@
 
 use crate::physics::constants::{EARTH_ROTATION_RAD_S, GRS80_GM_M3_S2, GRS80_SEMI_MAJOR_AXIS_M};
 use crate::physics::geodesy::{geodetic_to_ecef_m, GRS80_SEMI_MINOR_AXIS_M};
-use crate::physics::rate::error::{require_finite_vector, RateError, RateErrorKind};
+use crate::physics::rate_error::{require_finite_vector, RateError, RateErrorKind};
 
 /// GRS80 linear eccentricity E = sqrt(a^2 - b^2), m (521 854.0097 m, Moritz 2000).
 pub fn grs80_linear_eccentricity_m() -> f64 {

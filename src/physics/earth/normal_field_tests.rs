@@ -134,3 +134,23 @@ fn points_at_the_centre_are_refused() {
     assert!(grs80_normal_potential_m2_s2([1000.0, 0.0, 0.0]).is_err());
     assert!(grs80_normal_potential_m2_s2([f64::NAN, 0.0, 0.0]).is_err());
 }
+
+#[test]
+fn normal_potential_drop_is_about_g_h_with_free_air_gradient() {
+    // Free-air gradient about 3.086e-6 s^-2 (Heiskanen & Moritz 1967; common practice):
+    // W0 - W(1000 m) = gamma*1000 - 0.5*3.086e-6*1000^2 within 0.01 m^2/s^2.
+    let drop = grs80_normal_potential_drop_m2_s2(45.0, 1000.0).unwrap();
+    let approx = crate::physics::geodesy::normal_gravity_m_s2(45.0).unwrap() * 1000.0
+        - 0.5 * 3.086e-6 * 1.0e6;
+    assert!((drop - approx).abs() < 0.01, "{drop} vs {approx}");
+}
+
+#[test]
+fn a_height_that_is_not_a_number_is_refused_naming_height_m() {
+    assert_eq!(
+        grs80_normal_potential_drop_m2_s2(0.0, f64::NAN)
+            .unwrap_err()
+            .field,
+        "height_m"
+    );
+}
