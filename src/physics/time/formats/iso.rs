@@ -3,6 +3,7 @@
 
 use super::super::calendar::CalendarDate;
 use super::super::decimal::fraction_digits_to_attos;
+use super::super::decimal::write::{ascii_string, push_fixed, push_u64};
 use super::super::error::TimeError;
 use super::super::instant::{DayReading, ATTOS_PER_SECOND};
 
@@ -148,6 +149,63 @@ pub fn parse_iso(text: &str) -> Result<IsoReading, TimeError> {
 /// Writes a day reading as `YYYY-MM-DDThh:mm:ss.ffffffffffff` with `decimals` digits,
 /// truncated (never rounded up into the next second, day or leap second).
 pub fn write_iso(reading: &DayReading, decimals: u32) -> String {
+    let sod = reading.seconds_of_day_attos;
+    let year = CalendarDate::from_mjd(reading.mjd).year;
+    let seconds = u64::try_from(sod.div_euclid(ATTOS_PER_SECOND));
+    match seconds {
+        Ok(seconds) if (0..=9999).contains(&year) => {
+            let attos = sod.rem_euclid(ATTOS_PER_SECOND) as u64;
+            let mut out = Vec::with_capacity(40);
+            push_iso_parts(&mut out, reading.mjd, seconds, attos, decimals);
+            ascii_string(out)
+        }
+        _ => write_iso_by_format(reading, decimals),
+    }
+}
+
+/// Appends the ISO 8601 form of a time of day (whole seconds, 86 400 and up inside a leap
+/// second, and attoseconds) on an MJD day of the years 0000 to 9999.
+pub(super) fn push_iso_parts(
+    out: &mut Vec<u8>,
+    mjd: i64,
+    day_seconds: u64,
+    day_attos: u64,
+    decimals: u32,
+) {
+    let date = CalendarDate::from_mjd(mjd);
+    let (hour, minute, second) = if day_seconds >= 86_400 {
+        (23, 59, 60 + (day_seconds - 86_400))
+    } else {
+        (
+            day_seconds / 3600,
+            (day_seconds / 60) % 60,
+            day_seconds % 60,
+        )
+    };
+    push_fixed(out, date.year.unsigned_abs(), 4);
+    out.push(b'-');
+    push_fixed(out, u64::from(date.month), 2);
+    out.push(b'-');
+    push_fixed(out, u64::from(date.day), 2);
+    out.push(b'T');
+    push_fixed(out, hour, 2);
+    out.push(b':');
+    push_fixed(out, minute, 2);
+    out.push(b':');
+    if second < 100 {
+        push_fixed(out, second, 2);
+    } else {
+        push_u64(out, second);
+    }
+    if decimals > 0 {
+        let digits = decimals.min(18);
+        out.push(b'.');
+        push_fixed(out, day_attos / 10_u64.pow(18 - digits), digits as usize);
+    }
+}
+
+/// The general writer (any year, through `format!`).
+fn write_iso_by_format(reading: &DayReading, decimals: u32) -> String {
     let date = CalendarDate::from_mjd(reading.mjd);
     let whole_seconds = reading.seconds_of_day_attos.div_euclid(ATTOS_PER_SECOND);
     let fraction_attos = reading.seconds_of_day_attos.rem_euclid(ATTOS_PER_SECOND);

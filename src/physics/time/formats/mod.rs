@@ -9,14 +9,19 @@
 
 mod gnss_week;
 mod iso;
+mod write;
+#[cfg(test)]
+mod write_tests;
 
 use std::str::FromStr;
 
-pub use gnss_week::{gnss_week_origin_mjd, SECONDS_PER_WEEK};
+pub use gnss_week::{gnss_week_origin_mjd, write_gnss_week, SECONDS_PER_WEEK};
 pub use iso::{parse_iso, write_iso, IsoReading};
+pub use write::InstantDigits;
 
 use super::calendar::UNIX_EPOCH_MJD;
-use super::decimal::{format_attos_as_seconds, format_ratio, ExactDecimal};
+use super::decimal::write::ascii_string;
+use super::decimal::{format_attos_as_seconds, ExactDecimal};
 use super::error::TimeError;
 use super::instant::{
     uniform_count_attos, uniform_day_reading, DayReading, Instant, ATTOS_PER_DAY, ATTOS_PER_SECOND,
@@ -237,25 +242,21 @@ pub fn reading_count_attos(instant: &Instant, table: &LeapTable) -> Result<i128,
 
 /// Writes every form of an instant.
 pub fn write_instant(instant: &Instant, table: &LeapTable) -> Result<InstantText, TimeError> {
-    let reading = day_reading(instant, table)?;
-    check_mjd_range(reading.mjd)?;
-    let day = reading.day_length_attos;
-    let mjd_numerator = i128::from(reading.mjd) * day + reading.seconds_of_day_attos;
-    // JD = MJD + 2 400 000.5 days, over a denominator of two days so that half of an odd day
-    // length (drift-era UTC) stays exact.
-    let jd_numerator_halves = 2 * mjd_numerator + 4_800_001 * day;
-    let count = if instant.scale() == Scale::Utc {
-        uniform_count_attos(reading.mjd, reading.seconds_of_day_attos)
-    } else {
-        instant.count_attos()
+    let digits = InstantDigits::new(instant, table)?;
+    let form = |push: &dyn Fn(&mut Vec<u8>)| {
+        let mut out = Vec::with_capacity(40);
+        push(&mut out);
+        ascii_string(out)
     };
+    let mut gnss = Vec::new();
+    let gnss_week = digits.push_gnss_week(&mut gnss).then(|| ascii_string(gnss));
     Ok(InstantText {
         scale: instant.scale(),
-        iso: write_iso(&reading, ISO_DECIMALS),
-        mjd: format_ratio(mjd_numerator, day, DAY_DECIMALS),
-        jd: format_ratio(jd_numerator_halves, 2 * day, DAY_DECIMALS),
-        j2000_s: format_attos_as_seconds(count),
-        gnss_week: gnss_week::write_gnss_week(instant.scale(), count),
+        iso: form(&|out| digits.push_iso(out, ISO_DECIMALS)),
+        mjd: form(&|out| digits.push_mjd(out)),
+        jd: form(&|out| digits.push_jd(out)),
+        j2000_s: form(&|out| digits.push_j2000_s(out)),
+        gnss_week,
     })
 }
 

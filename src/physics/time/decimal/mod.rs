@@ -2,9 +2,13 @@
 //!
 //! Instants travel as decimal strings so that no precision is lost in binary floating point.
 //! Reading keeps every digit up to 10^-24 of the unit (then rounds half away from zero); writing
-//! uses integer long division. Values are scaled to attoseconds (10^-18 s).
+//! uses integer long division (in blocks, see [`write`]). Values are scaled to attoseconds (10^-18 s).
 
 use std::fmt;
+
+pub mod write;
+#[cfg(test)]
+mod write_tests;
 
 /// Digits kept after the decimal point when reading.
 const KEPT_FRACTION_DIGITS: u32 = 24;
@@ -200,51 +204,16 @@ pub fn fraction_times(fraction_e24: i128, length_attos: i128) -> i128 {
 /// Writes `numerator / denominator` (denominator > 0) with `digits` decimals, rounded to nearest
 /// (half away from zero), trailing zeros trimmed (at least one decimal kept).
 pub fn format_ratio(numerator: i128, denominator: i128, digits: u32) -> String {
-    let negative = numerator < 0;
-    let magnitude = numerator.unsigned_abs();
-    let denominator = denominator.unsigned_abs().max(1);
-    let mut whole = magnitude / denominator;
-    let mut remainder = magnitude % denominator;
-    let mut fraction: Vec<u8> = Vec::with_capacity(digits as usize);
-    for _ in 0..digits {
-        remainder *= 10;
-        fraction.push((remainder / denominator) as u8);
-        remainder %= denominator;
-    }
-    if remainder * 2 >= denominator {
-        let mut carry = true;
-        for digit in fraction.iter_mut().rev() {
-            if *digit == 9 {
-                *digit = 0;
-            } else {
-                *digit += 1;
-                carry = false;
-                break;
-            }
-        }
-        if carry {
-            whole += 1;
-        }
-    }
-    while fraction.len() > 1 && fraction.last() == Some(&0) {
-        fraction.pop();
-    }
-    let fraction_text: String = fraction.iter().map(|d| char::from(b'0' + d)).collect();
-    let sign = if negative && (whole != 0 || fraction.iter().any(|&d| d != 0)) {
-        "-"
-    } else {
-        ""
-    };
-    if fraction_text.is_empty() {
-        format!("{sign}{whole}")
-    } else {
-        format!("{sign}{whole}.{fraction_text}")
-    }
+    let mut out = Vec::with_capacity(48);
+    write::push_ratio(&mut out, numerator, denominator, digits);
+    write::ascii_string(out)
 }
 
 /// Writes an attosecond count as seconds, exactly (up to 18 decimals, trailing zeros trimmed).
 pub fn format_attos_as_seconds(attos: i128) -> String {
-    format_ratio(attos, 1_000_000_000_000_000_000, 18)
+    let mut out = Vec::with_capacity(40);
+    write::push_attos_as_seconds(&mut out, attos);
+    write::ascii_string(out)
 }
 
 #[cfg(test)]
