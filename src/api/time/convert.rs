@@ -1,6 +1,8 @@
 //! `GET` and `POST /v1/time/convert`.
 
 use axum::extract::State;
+use axum::http::{header, StatusCode};
+use axum::response::{IntoResponse, Response};
 use axum::Json;
 
 use super::types::{
@@ -212,7 +214,7 @@ pub async fn convert_get(
 pub async fn convert_post(
     State(state): State<AppState>,
     JsonBody(request): JsonBody<ConvertBatchRequest>,
-) -> Result<Json<ConversionBatch>, ApiError> {
+) -> Result<Response, ApiError> {
     let from = parse_scale(&request.from, "from")?;
     let targets = parse_targets(request.to.iter().map(String::as_str), "to")?;
     let format = parse_format(request.format.as_deref(), "format")?;
@@ -235,7 +237,7 @@ pub async fn convert_post(
             observer,
             tdb_evaluation: TdbEvaluation::Fitted,
         };
-        request
+        let conversions = request
             .epochs
             .iter()
             .enumerate()
@@ -249,8 +251,13 @@ pub async fn convert_post(
                     &format!("epochs[{index}]"),
                 )
             })
-            .collect::<Result<Vec<_>, _>>()
+            .collect::<Result<Vec<_>, _>>()?;
+        // Written here, in the blocking pool: a 100 000-epoch answer takes as long to write as
+        // to compute, and written on an async worker it delays the shutdown signal.
+        serde_json::to_vec(&ConversionBatch { conversions }).map_err(|e| {
+            ApiError::new(StatusCode::INTERNAL_SERVER_ERROR, "internal", e.to_string())
+        })
     };
-    let conversions = compute(items, work).await?;
-    Ok(Json(ConversionBatch { conversions }))
+    let body = compute(items, work).await?;
+    Ok(([(header::CONTENT_TYPE, "application/json")], body).into_response())
 }
