@@ -5,7 +5,7 @@ mod common;
 use common::{assert_problem, post_json, TestServer};
 use serde_json::{json, Value};
 
-/// IS-GPS-200 / PHYSICS.md: nominal semi-major axis of the navigation MEO orbit, m.
+/// IS-GPS-200: nominal semi-major axis of the navigation MEO orbit, m.
 const NAV_A_M: f64 = 26_561_750.0;
 /// IERS Conventions (2010) table 1.1: GM of the Earth (TCG-compatible), the service's GM.
 const GM_M3_S2: f64 = 3.986_004_418e14;
@@ -273,7 +273,7 @@ async fn compare_navigation_clock_with_ground_clock() {
 #[tokio::test]
 async fn ten_thousand_items_in_one_request() {
     let server = TestServer::start().await;
-    // Common practice (batch contract of DESIGN.md): 10 000 mixed items, answered in order.
+    // Common practice (batch contract of the OpenAPI document): 10 000 mixed items, answered in order.
     let items: Vec<Value> = (0..10_000)
         .map(|i| match i % 4 {
             0 => circular_orbit(7.0e6 + 1000.0 * f64::from(i)),

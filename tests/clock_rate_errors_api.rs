@@ -7,7 +7,7 @@ use common::{assert_problem, post_json, TestServer};
 use eigenzeit::ops::config::Settings;
 use serde_json::{json, Value};
 
-/// IS-GPS-200 / PHYSICS.md: nominal semi-major axis of the navigation MEO orbit, m.
+/// IS-GPS-200: nominal semi-major axis of the navigation MEO orbit, m.
 const NAV_A_M: f64 = 26_561_750.0;
 
 fn circular_orbit(a_m: f64) -> Value {
@@ -185,7 +185,7 @@ async fn bad_requests_name_the_field() {
     };
     let server = TestServer::start_with(settings).await;
     let item = circular_orbit(NAV_A_M);
-    // DESIGN.md batch contract: empty batch and batch over the configured limit.
+    // Batch contract of the OpenAPI document: empty batch and batch over the configured limit.
     let answer = post_json(&server, "/v1/clock/rate", &json!({"items": []})).await;
     assert_eq!(
         assert_problem(&answer, 422, "empty_batch")["field"],

@@ -14,7 +14,7 @@ fn nav_orbit() -> Value {
 
 #[tokio::test]
 async fn names_are_read_exactly_as_documented() {
-    // The document lists the canonical spellings only (DESIGN.md time scales; common practice
+    // The document lists the canonical spellings only (IAU and BIPM abbreviations; common practice
     // for enums): any other spelling is refused, as the schema refuses it.
     let server = TestServer::start().await;
     let answer = get_json(
@@ -99,7 +99,7 @@ async fn numbers_are_read_correctly_rounded() {
 
 #[tokio::test]
 async fn proper_time_json_follows_its_schema() {
-    // A circular orbit at a = 7000 km (two-body states from the test harness, PHYSICS.md).
+    // A circular orbit at a = 7000 km (two-body states from the test harness, Kepler 1609 / common practice).
     let server = TestServer::start().await;
     let orbit = Kepler {
         a_m: 7_000_000.0,

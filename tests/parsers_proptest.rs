@@ -127,7 +127,7 @@ fn check_accepted(instant: &Instant, text: &str) -> Result<(), TestCaseError> {
     // (common practice: what a service accepts it can answer).
     let written = written.map_err(|e| TestCaseError::fail(format!("{text:?}: {e}")))?;
     let back = parse_instant(&written.mjd, InstantFormat::Mjd, instant.scale(), table());
-    // Lossless mjd form (DESIGN.md: decimal strings, lossless).
+    // Lossless mjd form (the README: instants in answers are lossless decimal strings).
     prop_assert_eq!(back, Ok(*instant), "{:?} -> {:?}", text, written.mjd);
     Ok(())
 }
@@ -168,11 +168,11 @@ proptest! {
         let read = |text: &str, format| parse_instant(text, format, scale, table);
 
         // mjd and jd: 24 decimals of a day are below an attosecond, so exact
-        // (DESIGN.md: lossless decimal strings; common practice for exact decimals).
+        // (the README: lossless decimal strings; common practice for exact decimals).
         prop_assert_eq!(read(&written.mjd, InstantFormat::Mjd), Ok(instant), "{}", written.mjd);
         prop_assert_eq!(read(&written.jd, InstantFormat::Jd), Ok(instant), "{}", written.jd);
 
-        // iso: 12 decimals, truncated, so the same reading cut to 1e-12 s (DESIGN.md).
+        // iso: 12 decimals, truncated, so the same reading cut to 1e-12 s (the OpenAPI document, `InstantForms.iso`).
         let from_iso = read(&written.iso, InstantFormat::Iso)
             .and_then(|i| day_reading(&i, table));
         let cut = reading.seconds_of_day_attos
@@ -190,7 +190,7 @@ proptest! {
         prop_assert_eq!(read(&ordinal, InstantFormat::Iso), read(&written.iso, InstantFormat::Iso));
 
         // j2000_s: exact, except that UTC counts 86 400 s per day, so the reading of a leap
-        // second is shared with the next day's first second (DESIGN.md; ERFA quasi-JD).
+        // second is shared with the next day's first second (ERFA quasi-JD convention).
         let from_count = read(&written.j2000_s, InstantFormat::J2000S);
         if reading.seconds_of_day_attos < ATTOS_PER_DAY {
             prop_assert_eq!(from_count.clone(), Ok(instant), "{}", written.j2000_s);
@@ -266,7 +266,7 @@ proptest! {
         let text = format_attos_as_seconds(attos);
         prop_assert_eq!(ExactDecimal::parse(&text).map(|d| d.times_attos(ATTOS_PER_SECOND)),
             Ok(attos), "{}", text);
-        // 24 decimals of an 86 401 s day are below an attosecond (DESIGN.md: lossless mjd).
+        // 24 decimals of an 86 401 s day are below an attosecond (the OpenAPI document: lossless mjd).
         let day = 86_401 * ATTOS_PER_SECOND;
         let text = format_ratio(day_attos, day, 24);
         prop_assert_eq!(ExactDecimal::parse(&text).map(|d| d.times_attos(day)), Ok(day_attos),

@@ -209,7 +209,7 @@ async fn oem_and_sp3_demo_files_and_csv() {
     let objects = answer["objects"].as_array().cloned().unwrap_or_default();
     assert_eq!(objects.len(), 7);
     // Invented Lyra MEO clocks run fast against TT (about +39.7 us/day for their a, from the
-    // closed form of PHYSICS.md); the low Kestrel-1 runs slow (common practice: LEO clocks lose).
+    // Ashby 2003 eq. 40 closed form); the low Kestrel-1 runs slow (common practice: LEO clocks lose).
     for object in &objects {
         let rate = object["summary"]["mean_rate_us_per_day"]
             .as_f64()

@@ -34,7 +34,7 @@ async fn shapiro_delay_of_a_navigation_satellite_at_zenith_and_horizon() {
         json!({"frame": "GCRS", "position_m": [GROUND_M, 0.0, 0.0]}),
     )
     .await;
-    // IERS Conventions (2010) ch. 11 eq. 11.17; PHYSICS.md: about 13 mm at zenith.
+    // IERS Conventions (2010) ch. 11 eq. 11.17 (from memory): 13 mm at zenith.
     let zenith_m = number(&zenith["terms"]["shapiro"]["m"]);
     assert!((0.0125..0.0135).contains(&zenith_m), "{zenith_m}");
     // m = s * c (definition of the answer).
@@ -53,7 +53,7 @@ async fn shapiro_delay_of_a_navigation_satellite_at_zenith_and_horizon() {
     // GCRS: no Sagnac term (the rotation is in the inertial positions; module documentation).
     assert_eq!(number(&zenith["terms"]["sagnac"]["s"]), 0.0);
     assert!(zenith["terms"]["clock_periodic"].is_null());
-    // The epoch is echoed in every form (DESIGN.md instant answer).
+    // The epoch is echoed in every form (the OpenAPI document, `InstantForms`).
     assert_eq!(zenith["epoch"]["scale"], "GPST");
     assert_eq!(zenith["epoch"]["iso"], "2026-03-14T06:30:00.000000000000");
     assert!(zenith["epoch"]["gnss_week"].is_string());

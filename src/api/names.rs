@@ -512,7 +512,7 @@ mod tests {
 
     #[test]
     fn patterns_match_what_the_engine_reads() {
-        // The instant grammar of DESIGN.md ("An instant in a request is a string"), common practice.
+        // The instant grammar of the OpenAPI document (`InstantString`), common practice.
         let instant = whole_match(&instant_pattern());
         for text in [
             "2026-03-14T06:30:00.123456789012",

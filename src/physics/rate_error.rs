@@ -160,7 +160,7 @@ mod tests {
 
     #[test]
     fn codes_are_stable_and_default_is_invalid_value() {
-        // The codes are part of the HTTP contract (DESIGN.md "HTTP contract": stable `code`).
+        // The codes are part of the HTTP contract (the README and OpenAPI document: stable `code`).
         assert_eq!(RateError::new("x_m", "bad").code(), "invalid_value");
         assert_eq!(
             require_finite("x_m", f64::NAN).unwrap_err().code(),

@@ -24,7 +24,7 @@ fn rate_tt(position_m: &[f64; 3], velocity_m_s: &[f64; 3]) -> (f64, f64) {
 }
 
 /// Secular rate of a Keplerian clock relative to TT: (W0 - 3GM/(2a))/c^2, in us/day
-/// (PHYSICS.md closed form plus the W0 term of the TT reference).
+/// (Ashby 2003, Living Rev. Relativity 6, 1, eq. 40 closed form plus the W0 term of the TT reference).
 fn secular_us_per_day(a_m: f64) -> f64 {
     (W0_M2_S2 - 1.5 * GM_EARTH_M3_S2 / a_m) / SPEED_OF_LIGHT_SQUARED_M2_S2 * 86_400.0 * 1e6
 }

@@ -49,7 +49,7 @@ impl Kepler {
         ([x, y * ci, y * si], [vx, vy * ci, vy * si])
     }
 
-    /// tau - TT accumulated from 0 to t: the closed form of PHYSICS.md (Ashby 2003, eq. 40;
+    /// tau - TT accumulated from 0 to t: the closed form (Ashby 2003, eq. 40;
     /// IS-GPS-200 20.3.3.3.3.1) plus L_G for TT.
     pub fn tau_minus_tt(&self, t_s: f64) -> f64 {
         let secular = L_G - 1.5 * GM / (self.a_m * C * C);

@@ -19,7 +19,7 @@ pub(crate) fn point_mass_rate_tcg(position_m: &[f64; 3], velocity_m_s: &[f64; 3]
 /// tau - t of a Keplerian orbit relative to TCG, zero at t = 0:
 /// -(3GM/(2ac^2)) t - (2 sqrt(GM a)/c^2) e (sin E(t) - sin E(0))
 /// (IS-GPS-200 section 20.3.3.3.3.1; Ashby, Living Rev. Relativity 6 (2003) 1, eq. 52;
-/// PHYSICS.md "Clock rates").
+/// IERS Conventions (2010) eq. 10.6).
 pub(crate) fn closed_form_s(orbit: &KeplerOrbit, t_s: f64) -> f64 {
     let a = orbit.semi_major_axis_m;
     let gm = orbit.gm_m3_s2;
@@ -29,7 +29,7 @@ pub(crate) fn closed_form_s(orbit: &KeplerOrbit, t_s: f64) -> f64 {
             * (orbit.eccentric_anomaly_rad(t_s).sin() - orbit.eccentric_anomaly_rad(0.0).sin())
 }
 
-/// The navigation MEO orbit of PHYSICS.md: a = 26 561.75 km (IS-GPS-200 nominal), e = 0.015.
+/// The navigation MEO orbit: a = 26 561.75 km (IS-GPS-200 nominal), e = 0.015.
 pub(crate) fn navigation_orbit() -> KeplerOrbit {
     KeplerOrbit {
         gm_m3_s2: GM_EARTH_M3_S2,
@@ -105,13 +105,13 @@ fn summary_of_a_keplerian_orbit() {
     .unwrap_or_else(|e| panic!("{e}"));
     let summary = series.summary;
     // Periodic amplitude 2 sqrt(GM a) e / c^2: about 23 ns per 0.01 of eccentricity
-    // (PHYSICS.md check values; IS-GPS-200 formula), so about 34.5 ns at e = 0.015. The sampled
+    // (IS-GPS-200 20.3.3.3.3.1 formula), so about 34.5 ns at e = 0.015. The sampled
     // extremes lie within 1 % of the amplitude at 300 s sampling (common practice).
     let expected = 2.0 * (GM_EARTH_M3_S2 * orbit.semi_major_axis_m).sqrt() * orbit.eccentricity
         / SPEED_OF_LIGHT_SQUARED_M2_S2;
     assert!((summary.periodic_amplitude_s / expected - 1.0).abs() < 0.01);
     assert!((expected - 34.5e-9).abs() < 0.5e-9);
-    // A Keplerian orbit leaves no residual beyond the integration error (PHYSICS.md closed form).
+    // A Keplerian orbit leaves no residual beyond the integration error (Ashby 2003 eq. 40 closed form).
     assert!(
         summary.kepler_residual_rms_s < 1e-13,
         "{}",

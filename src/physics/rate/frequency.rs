@@ -76,7 +76,7 @@ mod tests {
     #[test]
     fn navigation_clock_factory_setting() {
         // IS-GPS-200 3.3.1.1: 10.23 MHz nominal is set to 10.22999999543 MHz on the ground,
-        // for the navigation orbit a = 26 561.75 km (IS-GPS-200 / PHYSICS.md).
+        // for the navigation orbit a = 26 561.75 km (IS-GPS-200).
         let y =
             keplerian_mean_rate_parts(GM_EARTH_GPS_M3_S2, 26_561_750.0, RateReference::Tt).total();
         let frequency = frequency_offset(10.23e6, y).unwrap();

@@ -52,7 +52,7 @@ fn point_mass_misses_the_flattening() {
 
 #[test]
 fn height_dependence_is_about_1_09e_16_per_metre_and_higher_runs_faster() {
-    // PHYSICS.md / common practice: g/c^2 ~ 1.09e-16 per metre; higher clocks run faster.
+    // Common practice: g/c^2 ~ 1.09e-16 per metre; higher clocks run faster.
     for height in [
         GroundHeight::EllipsoidalM(1000.0),
         GroundHeight::AboveGeoidM(1000.0),

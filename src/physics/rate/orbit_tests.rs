@@ -3,7 +3,7 @@ use crate::physics::constants::{GM_EARTH_GPS_M3_S2, W0_M2_S2};
 use crate::physics::rate::state::{state_rate, Frame, StateVector};
 use crate::physics::rate::{fractional_to_microseconds_per_day, RateParts};
 
-const GPS_A_M: f64 = 26_561_750.0; // IS-GPS-200 / PHYSICS.md: nominal semi-major axis
+const GPS_A_M: f64 = 26_561_750.0; // IS-GPS-200: nominal semi-major axis
 
 fn circular(a_m: f64) -> KeplerianOrbit {
     KeplerianOrbit {

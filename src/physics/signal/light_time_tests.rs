@@ -33,7 +33,7 @@ fn equatorial_m(radius_m: f64, longitude_deg: f64) -> [f64; 3] {
 
 #[test]
 fn shapiro_delay_navigation_satellite_zenith_and_horizon() {
-    // IERS Conventions (2010) ch. 11 eq. 11.17; PHYSICS.md: about 13 mm at zenith and 19 mm
+    // IERS Conventions (2010) ch. 11 eq. 11.17 (from memory): 13 mm at zenith and 19 mm
     // near the horizon for r = 26 561.75 km seen from the ground.
     let zenith = path(Frame::Gcrs, at_rest([NAV_RADIUS_M, 0.0, 0.0]), GROUND_M);
     let zenith_mm = zenith.shapiro_s * SPEED_OF_LIGHT_M_S * 1e3;

@@ -268,7 +268,7 @@ mod tests {
     fn jd_of_an_odd_length_utc_day_reads_back() {
         // Found by tests/parsers_proptest.rs: a 1968 UTC day (drift era) whose length in
         // attoseconds is odd lost half an attosecond in the JD form. The written forms must
-        // read back exactly (DESIGN.md: decimal strings, lossless).
+        // read back exactly (the README: instants in answers are lossless decimal strings).
         let table = LeapTable::builtin();
         let instant = Instant::from_count_attos(Scale::Utc, -1_007_207_993_907_167_081_988_453_208);
         let reading = day_reading(&instant, table).map(|r| r.day_length_attos % 2);
