@@ -10,6 +10,7 @@ pub mod docs;
 pub mod error;
 pub mod extract;
 pub mod names;
+pub mod negotiate;
 pub mod openapi;
 pub mod problem_codes;
 pub mod proper_time;

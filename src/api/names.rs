@@ -49,13 +49,23 @@ pub fn instant_pattern() -> String {
     )
 }
 
+/// A comma-separated list of `names`, without spaces.
+fn name_list_pattern(names: &[&str]) -> String {
+    let one = format!("(?:{})", names.join("|"));
+    format!("^{one}(?:,{one})*$")
+}
+
 /// A comma-separated list of scale names or `all`, without spaces.
 pub fn scale_list_pattern() -> String {
     let names: Vec<&str> = std::iter::once(ALL_SCALES)
         .chain(Scale::SPELLINGS.iter().copied())
         .collect();
-    let one = format!("(?:{})", names.join("|"));
-    format!("^{one}(?:,{one})*$")
+    name_list_pattern(&names)
+}
+
+/// A comma-separated list of instant form names, without spaces.
+pub fn form_list_pattern() -> String {
+    name_list_pattern(InstantFormat::SPELLINGS)
 }
 
 /// Three decimal numbers `x,y,z` (exponent allowed), without spaces.
@@ -373,6 +383,27 @@ impl PartialSchema for TargetScaleList {
 impl ToSchema for TargetScaleList {
     fn name() -> Cow<'static, str> {
         Cow::Borrowed("TargetScaleList")
+    }
+}
+
+/// Schema of a comma-separated list of instant forms (a query parameter).
+pub struct FormList;
+
+impl PartialSchema for FormList {
+    fn schema() -> RefOr<Schema> {
+        ObjectBuilder::new()
+            .schema_type(Type::String)
+            .pattern(Some(form_list_pattern()))
+            .description(Some(
+                "Instant form names, comma-separated, no spaces (e.g. `iso,j2000_s`).",
+            ))
+            .into()
+    }
+}
+
+impl ToSchema for FormList {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("FormList")
     }
 }
 

@@ -33,6 +33,7 @@ use utoipa::{Modify, OpenApi};
         // Schemas that query parameters refer to (bodies register theirs themselves).
         crate::api::names::ScaleName,
         crate::api::names::TargetScaleList,
+        crate::api::names::FormList,
         crate::api::names::InstantFormatName,
         crate::api::names::InstantString,
         crate::api::names::ThreeNumbersText,

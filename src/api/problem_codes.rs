@@ -96,6 +96,10 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "No target scale was given; name at least one scale, or `all`.",
     ),
     (
+        "no_form",
+        "`forms` names no form; name at least one of `iso`, `mjd`, `jd`, `j2000_s`, `unix_s`, `gnss_week`, or leave it out for the default forms.",
+    ),
+    (
         "empty_batch",
         "The batch has no epochs; send at least one.",
     ),

@@ -169,12 +169,14 @@ pub async fn get_with(
 
 /// A response header as text ("" when absent).
 pub fn header_text(response: &reqwest::Response, name: &str) -> String {
+    // Several field lines of one name are one comma-separated list (RFC 9110 sec. 5.3).
     response
         .headers()
-        .get(name)
-        .and_then(|v| v.to_str().ok())
-        .unwrap_or("")
-        .to_string()
+        .get_all(name)
+        .iter()
+        .filter_map(|v| v.to_str().ok())
+        .collect::<Vec<_>>()
+        .join(", ")
 }
 
 /// The text of `/metrics`.

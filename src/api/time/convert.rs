@@ -1,28 +1,21 @@
 //! `GET` and `POST /v1/time/convert`.
 
 use axum::extract::State;
-use axum::http::{header, StatusCode};
+use axum::http::{header, HeaderMap, StatusCode};
 use axum::response::{IntoResponse, Response};
-use axum::Json;
 
-use super::types::{
-    Conversion, ConversionBatch, ConvertBatchRequest, ConvertQuery, ConvertedInstant, InstantForms,
-    ObserverInput,
-};
+use super::conversion::convert_one;
+use super::csv::{self, CSV_CONTENT_TYPE};
+use super::forms::FormSelection;
+use super::observer::{observer_from_input, parse_observer_query};
+use super::types::{Conversion, ConversionBatch, ConvertBatchRequest, ConvertQuery};
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, QueryProblems, TimeoutProblem};
 use crate::api::extract::{check_batch_size, compute, JsonBody, QueryParams};
 use crate::api::names::{parse_format, parse_scale, ALL_SCALES};
+use crate::api::negotiate::{answer_type, AnswerType};
 use crate::api::state::AppState;
-use crate::physics::time::calendar::CalendarDate;
-use crate::physics::time::convert::{convert, ConversionContext, TdbEvaluation};
-use crate::physics::time::decimal::format_attos_as_seconds;
-use crate::physics::time::formats::{
-    day_reading, parse_instant, reading_count_attos, write_instant, InstantFormat,
-};
-use crate::physics::time::instant::{attos_to_seconds_f64, Instant};
-use crate::physics::time::leap_seconds::LeapTable;
+use crate::physics::time::convert::{ConversionContext, TdbEvaluation};
 use crate::physics::time::scale::Scale;
-use crate::physics::time::tdb_series::{TopocentricObserver, OBSERVER_RADIUS_RANGE_M};
 
 fn parse_targets<'a>(
     names: impl Iterator<Item = &'a str>,
@@ -47,148 +40,44 @@ fn parse_targets<'a>(
     Ok(scales)
 }
 
-fn observer_from_position(
-    position_m: [f64; 3],
-    field: &str,
-) -> Result<TopocentricObserver, ApiError> {
-    if !position_m.iter().all(|v| v.is_finite()) {
-        return Err(ApiError::unprocessable(
-            "not_finite",
-            "the observer position must be three finite numbers in metres",
-        )
-        .with_field(field));
-    }
-    let radius_m = (position_m[0].powi(2) + position_m[1].powi(2) + position_m[2].powi(2)).sqrt();
-    let (low, high) = OBSERVER_RADIUS_RANGE_M;
-    if !(low..=high).contains(&radius_m) {
-        return Err(ApiError::unprocessable(
-            "observer_not_on_ground",
-            format!(
-                "the observer is {radius_m:.0} m from the geocentre; expected a place near the Earth's surface ({low:.0} to {high:.0} m)"
-            ),
-        )
-        .with_field(field));
-    }
-    Ok(TopocentricObserver::from_itrf_m(position_m))
+fn json_bytes<T: serde::Serialize>(value: &T) -> Result<Vec<u8>, ApiError> {
+    serde_json::to_vec(value)
+        .map_err(|e| ApiError::new(StatusCode::INTERNAL_SERVER_ERROR, "internal", e.to_string()))
 }
 
-fn observer_from_input(
-    input: &ObserverInput,
-    field: &str,
-) -> Result<TopocentricObserver, ApiError> {
-    match (input.itrf_position_m, input.latitude_deg, input.longitude_deg) {
-        (Some(position), None, None) if input.height_m.is_none() => {
-            observer_from_position(position, &format!("{field}.itrf_position_m"))
-        }
-        (None, Some(latitude_deg), Some(longitude_deg)) => {
-            let height_m = input.height_m.unwrap_or(0.0);
-            let position = crate::physics::geodesy::geodetic_to_ecef_m(latitude_deg, longitude_deg, height_m)
-                .map_err(|e| ApiError::unprocessable("invalid_observer", e.to_string()).with_field(field))?;
-            observer_from_position(position, field)
-        }
-        _ => Err(ApiError::unprocessable(
-            "invalid_observer",
-            "give either itrf_position_m, or latitude_deg and longitude_deg (and optionally height_m)",
-        )
-        .with_field(field)),
-    }
+fn respond((content_type, body): (&'static str, Vec<u8>)) -> Response {
+    (
+        [
+            (header::CONTENT_TYPE, content_type),
+            (header::VARY, "accept"),
+        ],
+        body,
+    )
+        .into_response()
 }
 
-fn parse_observer_query(text: &str) -> Result<TopocentricObserver, ApiError> {
-    let field = "observer_itrf_m";
-    let values: Vec<f64> = text
-        .split(',')
-        .map(str::parse::<f64>)
-        .collect::<Result<_, _>>()
-        .map_err(|_| {
-            ApiError::bad_request("invalid_query", "expected three numbers x,y,z in metres")
-                .with_field(field)
-        })?;
-    match values.as_slice() {
-        [x, y, z] => observer_from_position([*x, *y, *z], field),
-        _ => Err(
-            ApiError::bad_request("invalid_query", "expected three numbers x,y,z in metres")
-                .with_field(field),
-        ),
-    }
-}
-
-/// Warnings for a UTC reading past the table's expiry.
-fn expiry_warning(instant: &Instant, table: &LeapTable) -> Option<String> {
-    if instant.scale() != Scale::Utc {
-        return None;
-    }
-    let reading = day_reading(instant, table).ok()?;
-    if reading.mjd < table.expiry_mjd() {
-        return None;
-    }
-    let expiry = CalendarDate::from_mjd(table.expiry_mjd());
-    Some(format!(
-        "UTC on or after {expiry}, the expiry of the leap-second table in use: TAI - UTC is held at its last value, and a leap second announced later would change this answer"
-    ))
-}
-
-fn forms(instant: &Instant, table: &LeapTable, field: &str) -> Result<InstantForms, ApiError> {
-    write_instant(instant, table)
-        .map(InstantForms::from)
-        .map_err(|e| ApiError::from_time(&e, field))
-}
-
-/// Converts one instant, written as text, into each target scale.
-pub fn convert_one(
-    text: &str,
-    format: InstantFormat,
-    from: Scale,
-    targets: &[Scale],
-    context: &ConversionContext<'_>,
-    field: &str,
-) -> Result<Conversion, ApiError> {
-    let table = context.table;
-    let input =
-        parse_instant(text, format, from, table).map_err(|e| ApiError::from_time(&e, field))?;
-    let input_reading =
-        reading_count_attos(&input, table).map_err(|e| ApiError::from_time(&e, field))?;
-    let mut warnings: Vec<String> = expiry_warning(&input, table).into_iter().collect();
-    let mut results = Vec::with_capacity(targets.len());
-    for &target in targets {
-        let output =
-            convert(&input, target, context).map_err(|e| ApiError::from_time(&e, field))?;
-        let difference = reading_count_attos(&output, table)
-            .map_err(|e| ApiError::from_time(&e, field))?
-            - input_reading;
-        if let Some(warning) = expiry_warning(&output, table) {
-            if !warnings.contains(&warning) {
-                warnings.push(warning);
-            }
-        }
-        results.push(ConvertedInstant {
-            instant: forms(&output, table, field)?,
-            difference_s: attos_to_seconds_f64(difference),
-            difference_exact_s: format_attos_as_seconds(difference),
-        });
-    }
-    Ok(Conversion {
-        input: forms(&input, table, field)?,
-        results,
-        warnings,
-    })
-}
+/// An example CSV answer (UTC -> TAI, TDB with `forms=iso,j2000_s`).
+const CSV_EXAMPLE: &str = "epoch,TAI_iso,TAI_j2000_s,TDB_iso,TDB_j2000_s,warnings\r\n2026-03-14T06:30:00.123456789012,2026-03-14T06:30:37.123456789012,826741837.123456789012,2026-03-14T06:31:09.308982770736,826741869.308982770736444629,\r\n";
 
 /// Converts one instant into one or more scales.
 #[utoipa::path(get, path = "/v1/time/convert", tag = "time",
     params(ConvertQuery),
     responses(
-        (status = 200, description = "The instant in each target scale", body = Conversion),
+        (status = 200, description = "The instant in each target scale: JSON, or CSV (RFC 4180, a header row and one row) when `Accept` prefers `text/csv`", content(
+            (Conversion = "application/json"),
+            (String = "text/csv", example = json!(CSV_EXAMPLE)))),
         QueryProblems,
-        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format, no_target_scale, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales), not_finite, observer_not_on_ground", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales), not_finite, observer_not_on_ground", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn convert_get(
     State(state): State<AppState>,
+    headers: HeaderMap,
     QueryParams(query): QueryParams<ConvertQuery>,
-) -> Result<Json<Conversion>, ApiError> {
+) -> Result<Response, ApiError> {
     let from = parse_scale(query.from.as_deref().unwrap_or("UTC"), "from")?;
     let targets = parse_targets(query.to.as_deref().unwrap_or("all").split(','), "to")?;
     let format = parse_format(query.format.as_deref(), "format")?;
+    let forms = FormSelection::from_query(query.forms.as_deref(), "forms")?;
     let table = state.leap_table();
     let observer = query
         .observer_itrf_m
@@ -200,24 +89,41 @@ pub async fn convert_get(
         observer,
         tdb_evaluation: TdbEvaluation::Fitted,
     };
-    convert_one(&query.at, format, from, &targets, &context, "at").map(Json)
+    let converted = convert_one(&query.at, format, from, &targets, &context, "at")?;
+    let written = match answer_type(&headers) {
+        AnswerType::Json => ("application/json", json_bytes(&converted.json(&forms))?),
+        AnswerType::Csv => {
+            let mut out = Vec::with_capacity(256);
+            csv::push_header(&targets, &forms, &mut out);
+            csv::push_row(&query.at, &converted, &forms, &mut out);
+            (CSV_CONTENT_TYPE, out)
+        }
+    };
+    Ok(respond(written))
 }
 
 /// Converts many instants into one or more scales.
 #[utoipa::path(post, path = "/v1/time/convert", tag = "time",
     request_body = ConvertBatchRequest,
     responses(
-        (status = 200, description = "One conversion per epoch, in order", body = ConversionBatch),
+        (status = 200, description = "One conversion per epoch, in order: JSON, or CSV (RFC 4180: a header row `epoch,<SCALE>_<form>...,warnings`, then one row per epoch) when `Accept` prefers `text/csv`", content(
+            (ConversionBatch = "application/json"),
+            (String = "text/csv", example = json!(CSV_EXAMPLE)))),
         JsonBodyProblems,
-        (status = 422, description = "A value cannot be used; `field` names it (e.g. `epochs[3]`) and `code` says why: the codes of `GET /v1/time/convert`, plus empty_batch, batch_too_large (above the configured limit), invalid_observer", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it (e.g. `epochs[3]`, `forms[1]`) and `code` says why: the codes of `GET /v1/time/convert`, plus empty_batch, batch_too_large (above the configured limit), invalid_observer", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn convert_post(
     State(state): State<AppState>,
+    headers: HeaderMap,
     JsonBody(request): JsonBody<ConvertBatchRequest>,
 ) -> Result<Response, ApiError> {
     let from = parse_scale(&request.from, "from")?;
     let targets = parse_targets(request.to.iter().map(String::as_str), "to")?;
     let format = parse_format(request.format.as_deref(), "format")?;
+    let forms = match &request.forms {
+        None => FormSelection::default(),
+        Some(names) => FormSelection::parse(names.iter().map(String::as_str), "forms")?,
+    };
     check_batch_size(
         request.epochs.len(),
         state.limits().batch_limit,
@@ -231,33 +137,47 @@ pub async fn convert_post(
         .transpose()?;
     let table = state.leap_table();
     let items = request.epochs.len();
+    let answer_type = answer_type(&headers);
     let work = move || {
         let context = ConversionContext {
             table: &table,
             observer,
             tdb_evaluation: TdbEvaluation::Fitted,
         };
-        let conversions = request
-            .epochs
-            .iter()
-            .enumerate()
-            .map(|(index, text)| {
-                convert_one(
-                    text,
-                    format,
-                    from,
-                    &targets,
-                    &context,
-                    &format!("epochs[{index}]"),
-                )
-            })
-            .collect::<Result<Vec<_>, _>>()?;
+        let convert_at = |index: usize, text: &str| {
+            convert_one(
+                text,
+                format,
+                from,
+                &targets,
+                &context,
+                &format!("epochs[{index}]"),
+            )
+        };
         // Written here, in the blocking pool: a 100 000-epoch answer takes as long to write as
         // to compute, and written on an async worker it delays the shutdown signal.
-        serde_json::to_vec(&ConversionBatch { conversions }).map_err(|e| {
-            ApiError::new(StatusCode::INTERNAL_SERVER_ERROR, "internal", e.to_string())
-        })
+        match answer_type {
+            AnswerType::Json => {
+                let conversions = request
+                    .epochs
+                    .iter()
+                    .enumerate()
+                    .map(|(index, text)| convert_at(index, text).map(|c| c.json(&forms)))
+                    .collect::<Result<Vec<_>, _>>()?;
+                Ok((
+                    "application/json",
+                    json_bytes(&ConversionBatch { conversions })?,
+                ))
+            }
+            AnswerType::Csv => {
+                let mut out = Vec::with_capacity(64 * request.epochs.len());
+                csv::push_header(&targets, &forms, &mut out);
+                for (index, text) in request.epochs.iter().enumerate() {
+                    csv::push_row(text, &convert_at(index, text)?, &forms, &mut out);
+                }
+                Ok((CSV_CONTENT_TYPE, out))
+            }
+        }
     };
-    let body = compute(items, work).await?;
-    Ok(([(header::CONTENT_TYPE, "application/json")], body).into_response())
+    compute(items, work).await.map(respond)
 }

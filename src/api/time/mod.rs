@@ -1,6 +1,10 @@
 //! The time-scale endpoints: conversion, the scales, the leap-second table and now.
 
+pub mod conversion;
 pub mod convert;
+pub mod csv;
+pub mod forms;
+pub mod observer;
 pub mod reference;
 pub mod types;
 

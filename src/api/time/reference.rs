@@ -9,9 +9,11 @@ use axum::Json;
 use serde::Serialize;
 use utoipa::ToSchema;
 
-use super::convert::convert_one;
-use super::types::Conversion;
-use crate::api::error::ApiError;
+use super::conversion::convert_one;
+use super::forms::FormSelection;
+use super::types::{Conversion, NowQuery};
+use crate::api::error::{ApiError, QueryProblems};
+use crate::api::extract::QueryParams;
 use crate::api::state::unix_now_s;
 use crate::api::state::AppState;
 use crate::physics::time::calendar::CalendarDate;
@@ -186,11 +188,18 @@ pub async fn leap_seconds(State(state): State<AppState>, headers: HeaderMap) -> 
 
 /// The current instant in every scale, from this server's system clock (for dashboards).
 #[utoipa::path(get, path = "/v1/time/now", tag = "time",
+    params(NowQuery),
     responses(
         (status = 200, description = "Now, in every scale (never cached)", body = Conversion,
             headers(("Cache-Control" = String, description = "`no-store`"))),
+        QueryProblems,
+        (status = 422, description = "A name in `forms` is not a form (`unknown_format`, `field` names it)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 503, description = "The server's clock reads before 1970 (`clock_unavailable`), or the request took longer than the configured timeout (`request_timeout`)", body = crate::api::error::Problem, content_type = "application/problem+json")))]
-pub async fn now(State(state): State<AppState>) -> Result<Response, ApiError> {
+pub async fn now(
+    State(state): State<AppState>,
+    QueryParams(query): QueryParams<NowQuery>,
+) -> Result<Response, ApiError> {
+    let forms = FormSelection::from_query(query.forms.as_deref(), "forms")?;
     let since_epoch = std::time::SystemTime::now()
         .duration_since(std::time::UNIX_EPOCH)
         .map_err(|_| {
@@ -215,5 +224,9 @@ pub async fn now(State(state): State<AppState>) -> Result<Response, ApiError> {
         &context,
         "now",
     )?;
-    Ok(([(header::CACHE_CONTROL, "no-store")], Json(conversion)).into_response())
+    Ok((
+        [(header::CACHE_CONTROL, "no-store")],
+        Json(conversion.json(&forms)),
+    )
+        .into_response())
 }

@@ -4,42 +4,76 @@ use serde::{Deserialize, Serialize};
 use utoipa::{IntoParams, ToSchema};
 
 use crate::api::names::{
-    InstantFormatName, InstantString, ObserverPositionM, ScaleName, TargetScaleList,
+    FormList, InstantFormatName, InstantString, ObserverPositionM, ScaleName, TargetScaleList,
     TargetScaleName, ThreeNumbersText,
 };
+use crate::physics::time::format_name::InstantFormat;
 use crate::physics::time::formats::InstantText;
 
-/// An instant in every written form.
-#[derive(Debug, Clone, Serialize, ToSchema)]
+/// An instant in its written forms: every form but `unix_s` unless the request names the forms
+/// it wants (`forms`); a form that does not exist for the scale is absent.
+#[derive(Debug, Clone, Default, Serialize, ToSchema)]
 #[schema(example = json!({
     "scale": "TAI", "iso": "2026-03-14T06:30:37.123456789012", "mjd": "61113.271263003...",
-    "jd": "2461113.771263003...", "j2000_s": "826741837.123456789012", "gnss_week": null
+    "jd": "2461113.771263003...", "j2000_s": "826741837.123456789012"
 }))]
 pub struct InstantForms {
     /// The scale the instant is read in.
     pub scale: String,
     /// ISO 8601 calendar form, 12 decimals (truncated, never rounded into the next second).
-    pub iso: String,
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub iso: Option<String>,
     /// Modified Julian Date, decimal string (24 decimals, trailing zeros trimmed: lossless).
     /// UTC days with a leap second are 86 401 s long (ERFA/SOFA convention).
-    pub mjd: String,
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub mjd: Option<String>,
     /// Julian Date, decimal string (lossless, as `mjd`).
-    pub jd: String,
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub jd: Option<String>,
     /// Seconds since J2000.0 (2000-01-01T12:00:00) of this scale, exact decimal string.
-    pub j2000_s: String,
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub j2000_s: Option<String>,
+    /// Seconds since 1970-01-01T00:00:00 UTC, 86 400 s per day (POSIX time), exact decimal
+    /// string; UTC only, and only when asked for (`forms`).
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub unix_s: Option<String>,
     /// `WEEK:SECONDS_OF_WEEK` for GPST, GST, BDT and QZSST (full week numbers).
     #[serde(skip_serializing_if = "Option::is_none")]
     pub gnss_week: Option<String>,
+}
+
+impl InstantForms {
+    /// No form yet, in the scale named `scale`.
+    pub fn named(scale: &str) -> Self {
+        Self {
+            scale: scale.to_string(),
+            ..Self::default()
+        }
+    }
+
+    /// Sets the text of one form.
+    pub fn set(&mut self, form: InstantFormat, text: String) {
+        let slot = match form {
+            InstantFormat::Iso => &mut self.iso,
+            InstantFormat::Mjd => &mut self.mjd,
+            InstantFormat::Jd => &mut self.jd,
+            InstantFormat::J2000S => &mut self.j2000_s,
+            InstantFormat::UnixS => &mut self.unix_s,
+            InstantFormat::GnssWeek => &mut self.gnss_week,
+        };
+        *slot = Some(text);
+    }
 }
 
 impl From<InstantText> for InstantForms {
     fn from(text: InstantText) -> Self {
         Self {
             scale: text.scale.as_str().to_string(),
-            iso: text.iso,
-            mjd: text.mjd,
-            jd: text.jd,
-            j2000_s: text.j2000_s,
+            iso: Some(text.iso),
+            mjd: Some(text.mjd),
+            jd: Some(text.jd),
+            j2000_s: Some(text.j2000_s),
+            unix_s: None,
             gnss_week: text.gnss_week,
         }
     }
@@ -99,6 +133,11 @@ pub struct ConvertQuery {
     /// otherwise).
     #[param(value_type = Option<ThreeNumbersText>, example = "4346657.2,860661.3,4573718.4")]
     pub observer_itrf_m: Option<String>,
+    /// The forms each instant of the answer carries, comma-separated without spaces, in the
+    /// order wanted: iso, mjd, jd, j2000_s, unix_s (UTC only), gnss_week (GNSS scales only)
+    /// (default: every form but unix_s). In CSV one column per form per target.
+    #[param(value_type = Option<FormList>, example = "iso,j2000_s")]
+    pub forms: Option<String>,
 }
 
 /// Observer on the Earth for the topocentric part of TDB - TT: either `itrf_position_m`, or
@@ -147,4 +186,19 @@ pub struct ConvertBatchRequest {
     pub epochs: Vec<String>,
     /// Observer for the topocentric part of TDB - TT (geocentric when absent).
     pub observer: Option<ObserverInput>,
+    /// The forms each instant of the answer carries, in the order wanted, at least one (default:
+    /// every form but `unix_s`). In CSV one column per form per target.
+    #[schema(value_type = Option<Vec<InstantFormatName>>, min_items = 1)]
+    pub forms: Option<Vec<String>>,
+}
+
+/// Query of `GET /v1/time/now`.
+#[derive(Debug, Clone, Deserialize, IntoParams)]
+#[into_params(parameter_in = Query)]
+#[serde(deny_unknown_fields)]
+pub struct NowQuery {
+    /// The forms each instant of the answer carries, comma-separated without spaces (as for
+    /// `GET /v1/time/convert`; default: every form but unix_s).
+    #[param(value_type = Option<FormList>, example = "iso,unix_s")]
+    pub forms: Option<String>,
 }

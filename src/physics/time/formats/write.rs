@@ -7,17 +7,19 @@
 //! seconds, which is every day but the UTC days of 1961-1971 (their lengths include a drift;
 //! those take the general digit-at-a-time path).
 
+use super::super::calendar::UNIX_EPOCH_MJD;
 use super::super::decimal::write::{
     day_fraction_e24, push_attos_fraction, push_fraction_e24, push_ratio_by_digits, push_u64,
     ATTOS_PER_SECOND_U64,
 };
 use super::super::error::TimeError;
+use super::super::format_name::InstantFormat;
 use super::super::instant::{Instant, ATTOS_MIDNIGHT_TO_J2000, ATTOS_PER_SECOND};
 use super::super::leap_seconds::LeapTable;
 use super::super::scale::Scale;
 use super::gnss_week::{gnss_week_origin_mjd, SECONDS_PER_WEEK};
 use super::iso::push_iso_parts;
-use super::{check_mjd_range, day_reading};
+use super::{check_mjd_range, day_reading, ISO_DECIMALS};
 
 const SECONDS_PER_DAY: i64 = 86_400;
 /// MJD of 2000-01-01, the day of J2000.0.
@@ -199,6 +201,38 @@ impl InstantDigits {
         }
         push_u64(out, whole);
         push_attos_fraction(out, attos);
+    }
+
+    /// Seconds since 1970-01-01T00:00:00 UTC, 86 400 s per day, exact: for UTC only (false,
+    /// nothing written, otherwise). A leap second shares its count with the next second, as in
+    /// POSIX time.
+    pub fn push_unix_s(&self, out: &mut Vec<u8>) -> bool {
+        if self.scale != Scale::Utc {
+            return false;
+        }
+        let unix_to_j2000_s =
+            (J2000_DAY_MJD - UNIX_EPOCH_MJD) * SECONDS_PER_DAY + MIDNIGHT_TO_J2000_S;
+        let shifted = Self {
+            count_seconds: self.count_seconds + unix_to_j2000_s,
+            ..*self
+        };
+        shifted.push_j2000_s(out);
+        true
+    }
+
+    /// Appends the form `form` (ISO with 12 decimals); false (nothing written) when the form
+    /// does not exist for the instant's scale (`unix_s` outside UTC, `gnss_week` outside the
+    /// GNSS scales or before their week 0).
+    pub fn push_form(&self, form: InstantFormat, out: &mut Vec<u8>) -> bool {
+        match form {
+            InstantFormat::Iso => self.push_iso(out, ISO_DECIMALS),
+            InstantFormat::Mjd => self.push_mjd(out),
+            InstantFormat::Jd => self.push_jd(out),
+            InstantFormat::J2000S => self.push_j2000_s(out),
+            InstantFormat::UnixS => return self.push_unix_s(out),
+            InstantFormat::GnssWeek => return self.push_gnss_week(out),
+        }
+        true
     }
 
     /// `WEEK:SECONDS` in a GNSS scale from week 0 on; false (nothing written) otherwise.

@@ -164,3 +164,49 @@ fn every_form_matches_the_previous_writer_on_random_instants() {
         }
     }
 }
+
+fn unix_s_of(instant: &Instant, table: &LeapTable) -> Option<String> {
+    let digits = InstantDigits::new(instant, table).ok()?;
+    let mut out = Vec::new();
+    digits
+        .push_form(InstantFormat::UnixS, &mut out)
+        .then(|| String::from_utf8(out).unwrap_or_default())
+}
+
+#[test]
+fn unix_seconds_are_posix_time_and_read_back() {
+    // POSIX time (IEEE Std 1003.1-2017, 4.16 "Seconds Since the Epoch"): 86 400 s per day
+    // since 1970-01-01; the values checked against Python's calendar.timegm (common practice).
+    let table = LeapTable::builtin();
+    for (iso, unix) in [
+        ("2026-03-14T06:30:00", "1773469800.0"),
+        ("2026-03-14T06:30:00.25", "1773469800.25"),
+        ("2017-01-01T00:00:00", "1483228800.0"),
+        // Inside the leap second of 2016-12-31 the count is that of the next second.
+        ("2016-12-31T23:59:60.5", "1483228800.5"),
+        ("1969-12-31T23:59:59.75", "-0.25"),
+    ] {
+        let instant = parse_instant(iso, InstantFormat::Iso, Scale::Utc, table)
+            .unwrap_or_else(|e| panic!("{iso}: {e}"));
+        assert_eq!(unix_s_of(&instant, table).as_deref(), Some(unix), "{iso}");
+    }
+    // Outside UTC there is no such form.
+    let tai = Instant::from_count_attos(Scale::Tai, 0);
+    assert_eq!(unix_s_of(&tai, table), None);
+    // Random UTC instants outside leap seconds read back exactly.
+    let mut random = SplitMix(7_070_707);
+    let utc_first = uniform_count_attos(table.first_utc_mjd(), 0);
+    let utc_span = (uniform_count_attos(LAST_MJD, 0) - utc_first) as u128;
+    for _ in 0..2_000 {
+        let instant = Instant::from_count_attos(Scale::Utc, utc_first + random.below(utc_span));
+        let Some(reading) = day_reading(&instant, table).ok() else {
+            continue;
+        };
+        if reading.seconds_of_day_attos >= 86_400 * ATTOS_PER_SECOND {
+            continue;
+        }
+        let text = unix_s_of(&instant, table).unwrap_or_default();
+        let back = parse_instant(&text, InstantFormat::UnixS, Scale::Utc, table);
+        assert_eq!(back.ok(), Some(instant), "{text}");
+    }
+}
