@@ -128,6 +128,7 @@ fn with_etag<T: Serialize>(headers: &HeaderMap, tag_basis: &[u8], body: &T) -> R
 
 /// The time scales, what realizes each and how they relate.
 #[utoipa::path(get, path = "/v1/time/scales", tag = "time",
+    params(("If-None-Match" = Option<String>, Header, nullable = false, description = "ETags of the client's copies, comma-separated (`W/` prefixes ignored) or `*`; a match answers 304")),
     responses(
         (status = 200, description = "The scales (with an ETag)", body = ScaleList,
             headers(("ETag" = String, description = "Weak validator of the list"), ("Cache-Control" = String, description = "`public, max-age=300`"))),
@@ -152,6 +153,7 @@ pub async fn scales(headers: HeaderMap) -> Response {
 
 /// The leap-second table in use, its source and its expiry.
 #[utoipa::path(get, path = "/v1/time/leap-seconds", tag = "time",
+    params(("If-None-Match" = Option<String>, Header, nullable = false, description = "ETags of the client's copies, comma-separated (`W/` prefixes ignored) or `*`; a match answers 304")),
     responses(
         (status = 200, description = "The table (with an ETag)", body = LeapSecondTable,
             headers(("ETag" = String, description = "Weak validator of the table (not of the countdown)"), ("Cache-Control" = String, description = "`public, max-age=300`"))),
