@@ -49,30 +49,46 @@ where
 }
 
 /// Reads JSON into `T`; a failure is a 400 problem naming the JSON path at fault.
+///
+/// A body that reads is parsed once, by serde_json alone; only a failing body is read again
+/// with `serde_path_to_error` to name the path (tracking the path of every element costs more
+/// than the parse itself: half the time of a 100 000-epoch batch).
 pub fn parse_json<T: DeserializeOwned>(bytes: &[u8]) -> Result<T, ApiError> {
+    match serde_json::from_slice(bytes) {
+        Ok(value) => Ok(value),
+        Err(_) => Err(json_problem::<T>(bytes)),
+    }
+}
+
+/// The problem for a body that does not read as `T`, with the JSON path at fault.
+fn json_problem<T: DeserializeOwned>(bytes: &[u8]) -> ApiError {
     let mut deserializer = serde_json::Deserializer::from_slice(bytes);
-    let value = serde_path_to_error::deserialize(&mut deserializer).map_err(|error| {
-        let path = error.path().to_string();
-        let inner = error.into_inner();
-        let (code, what) = if inner.is_data() {
-            ("invalid_body", "the JSON body does not match the schema")
-        } else {
-            ("invalid_json", "the body is not valid JSON")
-        };
-        let problem = ApiError::bad_request(code, format!("{what}: {inner}"));
-        if path == "." || path.is_empty() {
-            problem
-        } else {
-            problem.with_field(path)
+    let parsed: Result<T, _> = serde_path_to_error::deserialize(&mut deserializer);
+    let error = match parsed {
+        Err(error) => error,
+        Ok(_) => {
+            return match deserializer.end() {
+                Err(error) => ApiError::bad_request(
+                    "invalid_json",
+                    format!("the body is not valid JSON: {error}"),
+                ),
+                Ok(()) => ApiError::bad_request("invalid_json", "the body is not valid JSON"),
+            }
         }
-    })?;
-    deserializer.end().map_err(|error| {
-        ApiError::bad_request(
-            "invalid_json",
-            format!("the body is not valid JSON: {error}"),
-        )
-    })?;
-    Ok(value)
+    };
+    let path = error.path().to_string();
+    let inner = error.into_inner();
+    let (code, what) = if inner.is_data() {
+        ("invalid_body", "the JSON body does not match the schema")
+    } else {
+        ("invalid_json", "the body is not valid JSON")
+    };
+    let problem = ApiError::bad_request(code, format!("{what}: {inner}"));
+    if path == "." || path.is_empty() {
+        problem
+    } else {
+        problem.with_field(path)
+    }
 }
 
 /// The problem answered when a body is above the configured limit.
