@@ -34,7 +34,7 @@ mod tests_readers;
 mod tests_reference;
 
 pub use c04::parse_c04;
-pub use error::{EopErrorCode, EopFileError, EopLookupError};
+pub use error::{EopErrorCode, EopFileError, EopLookupError, EopLookupErrorKind};
 pub use finals::parse_finals2000a;
 pub use interp::{lagrange_weights, EopValues};
 pub use snapshot::parse_snapshot;
