@@ -10,7 +10,7 @@
 
 mod common;
 
-use common::{assert_problem, get_json, TestServer};
+use common::{assert_problem, get_json, metric_value, metrics_text, TestServer};
 use eigenzeit::physics::time::calendar::CalendarDate;
 
 const REFERENCE: &str = include_str!("reference/eop_interp_reference.csv");
@@ -63,6 +63,36 @@ async fn summary_of_the_built_in_table() {
     assert_eq!(body["last_mjd"], 61_707);
     assert_eq!(body["day_count"], 24_043);
     assert!(body.get("at").is_none(), "{body}");
+
+    // /readyz and /metrics state the same days.
+    let (status, _, ready) = get_json(&server, "/readyz").await;
+    assert_eq!(status, 200);
+    assert_eq!(ready["eop"]["source"], body["source"]);
+    assert_eq!(ready["eop"]["last_observed"], "2026-10-22");
+    assert_eq!(ready["eop"]["last_observed_mjd"], 61_335);
+    assert_eq!(ready["eop"]["end_of_predictions"], "2027-10-29");
+    assert_eq!(ready["eop"]["end_of_predictions_mjd"], 61_707);
+    assert!(ready["eop"].get("last_refresh_error").is_none(), "{ready}");
+    let text = metrics_text(&server).await;
+    let series = [
+        ("eigenzeit_eop_last_observed_mjd", 61_335.0),
+        ("eigenzeit_eop_end_of_predictions_mjd", 61_707.0),
+        ("eigenzeit_eop_refresh_failures_total", 0.0),
+        ("eigenzeit_eop_refresh_successes_total", 0.0),
+    ];
+    for (name, value) in series {
+        assert_eq!(metric_value(&text, name), Some(value), "{name}: {text}");
+    }
+    let info = format!(
+        "eigenzeit_eop_table_info{{source=\"{}\"}}",
+        body["source"].as_str().unwrap_or("")
+    );
+    assert_eq!(metric_value(&text, &info), Some(1.0), "{text}");
+    // Days to 2027-10-29 from the test's clock: MJD 61707 - (40587 + unix days) (Unix epoch
+    // = MJD 40587, common practice), within the 90 s the gauge is rounded to.
+    let now_mjd = 40_587.0 + eigenzeit::api::state::unix_now_s() / 86_400.0;
+    let days = metric_value(&text, "eigenzeit_eop_table_end_days").expect("days");
+    assert!((days - (61_707.0 - now_mjd)).abs() < 0.002, "{days}");
 }
 
 #[tokio::test]

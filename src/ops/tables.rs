@@ -121,7 +121,7 @@ impl ServedTable for EopTable {
     }
 
     fn builtin() -> Self {
-        EopTable::builtin().clone()
+        EopTable::builtin_owned()
     }
 
     fn parse(text: &str) -> Result<Self, String> {

@@ -45,6 +45,12 @@ impl EopTable {
     pub fn builtin() -> &'static EopTable {
         snapshot::builtin()
     }
+
+    /// The built-in table as an owned value, parsed anew and not kept for the process (for an
+    /// owner that may replace it, such as the service: no second copy stays behind).
+    pub fn builtin_owned() -> EopTable {
+        snapshot::parse_builtin()
+    }
 }
 
 /// Reads any supported format, recognized from the text: the snapshot (`eop-snapshot` line),
