@@ -9,6 +9,7 @@ use axum::http::Request;
 use criterion::{black_box, criterion_group, criterion_main, Criterion};
 use eigenzeit::ops::config::Settings;
 use eigenzeit::ops::ServiceState;
+use eigenzeit::physics::earth::eop::EopTable;
 use eigenzeit::physics::time::leap_seconds::LeapTable;
 use tower::ServiceExt;
 
@@ -22,6 +23,7 @@ fn bench(c: &mut Criterion) {
     let state = ServiceState::new(
         Settings::default(),
         LeapTable::builtin().clone(),
+        EopTable::builtin().clone(),
         eigenzeit::ops::openapi::document_json(),
     );
     state.set_ready(true);

@@ -48,7 +48,7 @@ fn main() -> ExitCode {
     let cli = Cli::parse();
     let outcome = match cli.command {
         None => serve(cli.settings),
-        Some(Command::Serve(settings)) => serve(settings),
+        Some(Command::Serve(settings)) => serve(*settings),
         Some(Command::Openapi) => {
             println!("{}", eigenzeit::ops::openapi::document_json());
             Ok(())

@@ -5,58 +5,13 @@
 mod common;
 
 use std::sync::{Arc, Mutex};
-use std::time::{Duration, Instant};
 
-use axum::routing::get;
+use common::file_server::{eventually, file_server, Served};
 use common::{get_json, get_with, header_text, metric_value, metrics_text, TestServer};
 use eigenzeit::ops::config::Settings;
 
 /// The IERS file committed for the parser tests (see tests/reference/leap_second_files_versions.txt).
 const IERS_FILE: &str = include_str!("reference/Leap_Second.dat");
-
-/// What the test's file server answers: (status, body), changed by the test between polls.
-type Served = Arc<Mutex<(u16, String)>>;
-
-/// Starts a file server on 127.0.0.1:0 answering `GET /Leap_Second.dat` with `served`, and
-/// counting the requests; returns the file's URL and the request count.
-async fn file_server(served: Served) -> (String, Arc<Mutex<u32>>) {
-    let hits = Arc::new(Mutex::new(0_u32));
-    let counter = Arc::clone(&hits);
-    let app = axum::Router::new().route(
-        "/Leap_Second.dat",
-        get(move || {
-            let served = Arc::clone(&served);
-            let counter = Arc::clone(&counter);
-            async move {
-                *counter.lock().expect("lock") += 1;
-                let (status, body) = served.lock().expect("lock").clone();
-                let status = axum::http::StatusCode::from_u16(status).expect("status");
-                (status, body)
-            }
-        }),
-    );
-    let listener = tokio::net::TcpListener::bind("127.0.0.1:0")
-        .await
-        .expect("bind");
-    let address = listener.local_addr().expect("address");
-    tokio::spawn(async move {
-        let _ = axum::serve(listener, app).await;
-    });
-    (format!("http://{address}/Leap_Second.dat"), hits)
-}
-
-/// Polls `check` on the server every 50 ms until it holds (at most 10 s).
-async fn eventually<F, Fut>(what: &str, mut check: F)
-where
-    F: FnMut() -> Fut,
-    Fut: std::future::Future<Output = bool>,
-{
-    let deadline = Instant::now() + Duration::from_secs(10);
-    while !check().await {
-        assert!(Instant::now() < deadline, "timed out waiting for: {what}");
-        tokio::time::sleep(Duration::from_millis(50)).await;
-    }
-}
 
 async fn failures(server: &TestServer) -> Option<f64> {
     metric_value(
@@ -76,7 +31,7 @@ async fn refresh_takes_a_newer_table_and_keeps_it_against_bad_ones() {
         "File expires on 28 December 2027",
     );
     let served: Served = Arc::new(Mutex::new((200, newer.clone())));
-    let (url, hits) = file_server(Arc::clone(&served)).await;
+    let (url, hits) = file_server("Leap_Second.dat", Arc::clone(&served)).await;
     let settings = Settings {
         leap_seconds_url: Some(url.clone()),
         leap_seconds_refresh_s: 0.2,
@@ -215,7 +170,7 @@ async fn refresh_changes_the_etag_of_the_table() {
         "File expires on 28 December 2027",
     );
     let served: Served = Arc::new(Mutex::new((404, "not yet".to_string())));
-    let (url, _) = file_server(Arc::clone(&served)).await;
+    let (url, _) = file_server("Leap_Second.dat", Arc::clone(&served)).await;
     let settings = Settings {
         leap_seconds_url: Some(url),
         leap_seconds_refresh_s: 0.2,

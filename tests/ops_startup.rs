@@ -120,14 +120,7 @@ async fn valid_leap_second_file_starts_and_requests_are_logged() {
         "--leap-seconds-file",
         file.path(),
     ]);
-    let (status, _, table) = common::split(
-        client()
-            .get(service.url("/v1/time/leap-seconds"))
-            .send()
-            .await
-            .expect("get"),
-    )
-    .await;
+    let (status, _, table) = service.get_json("/v1/time/leap-seconds").await;
     assert_eq!(status, 200);
     assert_eq!(table["source"], format!("file {}", file.path()));
     // 28 December 2027 = MJD 61767 (MJD 0 = 1858-11-17, Explanatory Supplement).
@@ -175,9 +168,54 @@ async fn pretty_logs_carry_no_terminal_colours_when_captured() {
         serving.contains(&format!("addr={}", service.host_port)),
         "{serving}"
     );
-    service.terminate();
-    assert_eq!(
-        service.wait_exit(Duration::from_secs(30)).await.code(),
-        Some(0)
+    assert_eq!(service.stop().await.code(), Some(0));
+}
+
+/// An excerpt of IERS Bulletin A `finals2000A.all` (astropy-iers-data 0.2026.11.2.0.34.55, see
+/// tests/reference/eop_reference_versions.txt).
+const FINALS: &str = include_str!("reference/eop_finals2000A_2026_2027.all");
+
+#[test]
+fn start_up_refuses_a_malformed_or_truncated_eop_file_naming_the_line() {
+    // readme.finals2000A: x_p in columns 19-27; a letter there is not a number (line 62,
+    // 2026-10-01).
+    let broken = FINALS.replacen(" 0.174596 ", " 0.17x596 ", 1);
+    assert_ne!(broken, FINALS);
+    // The file cut in the middle of line 62, before y_p (columns 38-46).
+    let cut = FINALS
+        .lines()
+        .position(|l| l.get(7..15) == Some("61314.00"))
+        .expect("2026-10-01");
+    let lines: Vec<&str> = FINALS.lines().collect();
+    let truncated = format!("{}\n{}", lines[..cut].join("\n"), &lines[cut][..30]);
+    for (name, text) in [("broken.all", broken), ("truncated.all", truncated)] {
+        let file = TempFile::new(name, &text);
+        let (status, stderr) = run_to_exit(&["--addr", "127.0.0.1:0", "--eop-file", file.path()]);
+        assert_eq!(status.code(), Some(1), "{stderr}");
+        let message = format!(
+            "eigenzeit: the EOP file {} is not valid: line 62: ",
+            file.path()
+        );
+        assert!(stderr.contains(&message), "{name}: {stderr}");
+        assert!(!stderr.contains("eigenzeit serving"), "{stderr}");
+    }
+    let (status, stderr) = run_to_exit(&["--addr", "127.0.0.1:0", "--eop-refresh-s", "0"]);
+    assert_eq!(status.code(), Some(1), "{stderr}");
+    assert!(
+        stderr.contains("--eop-refresh-s must be a positive number of seconds"),
+        "{stderr}"
     );
+}
+
+#[tokio::test]
+async fn valid_eop_file_from_the_environment_is_the_table_in_force() {
+    let file = TempFile::new("finals.all", FINALS);
+    let mut service = Service::start_with_env(&[], &[("EIGENZEIT_EOP_FILE", file.path())]);
+    let (status, _, table) = service.get_json("/v1/earth/eop").await;
+    assert_eq!(status, 200);
+    assert_eq!(table["source"], format!("file {}", file.path()));
+    // The excerpt: 2026-08-01 (MJD 61253) on, observed to 2026-10-22 (MJD 61335).
+    assert_eq!(table["first_mjd"], 61_253);
+    assert_eq!(table["last_observed_mjd"], 61_335);
+    assert_eq!(service.stop().await.code(), Some(0));
 }

@@ -3,10 +3,11 @@
 //!
 //! Handlers parse and validate, call the physics library, and shape the answer. Nothing here
 //! computes physics, and nothing here knows the service around it: limits, the leap-second
-//! table and the OpenAPI document come in as values ([`AppState`]); see tests/layers.rs.
+//! and Earth orientation tables and the OpenAPI document come in as values ([`AppState`]); see tests/layers.rs.
 
 pub mod clock;
 pub mod docs;
+pub mod earth;
 pub mod error;
 pub mod extract;
 pub mod names;
@@ -20,7 +21,7 @@ pub mod time;
 
 use axum::Router;
 
-pub use state::{AppState, LeapTableHandle, Limits};
+pub use state::{AppState, EopTableHandle, LeapTableHandle, Limits, TableHandle};
 
 /// The API's routes with their state: every endpoint group, `/openapi.json` and `/docs`.
 /// The service (`crate::ops::app`) adds its own routes (health, readiness, metrics), the
@@ -29,6 +30,7 @@ pub fn router(state: AppState) -> Router {
     Router::new()
         .merge(time::router())
         .merge(clock::router())
+        .merge(earth::router())
         .merge(proper_time::router())
         .merge(signal::router())
         .merge(docs::router())

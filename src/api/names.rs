@@ -45,7 +45,8 @@ const ISO_TIME: &str =
 /// the scale are checked by the engine (422).
 pub fn instant_pattern() -> String {
     format!(
-        r"^(?:{ISO_DATE}(?:[T ]{ISO_TIME})?Z?|{DECIMAL}|[0-9]{{1,7}}:\+?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+))$"
+        r"^(?:{}|{DECIMAL}|[0-9]{{1,7}}:\+?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+))$",
+        iso_instant()
     )
 }
 
@@ -53,6 +54,16 @@ pub fn instant_pattern() -> String {
 fn name_list_pattern(names: &[&str]) -> String {
     let one = format!("(?:{})", names.join("|"));
     format!("^{one}(?:,{one})*$")
+}
+
+/// An ISO 8601 date with optional time (`T` or a space) and `Z`, unanchored.
+fn iso_instant() -> String {
+    format!(r"{ISO_DATE}(?:[T ]{ISO_TIME})?Z?")
+}
+
+/// The text of an ISO 8601 instant alone (the `iso` format of [`instant_pattern`]).
+pub fn iso_instant_pattern() -> String {
+    format!("^(?:{})$", iso_instant())
 }
 
 /// A comma-separated list of scale names or `all`, without spaces.

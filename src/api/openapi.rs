@@ -27,6 +27,7 @@ use utoipa::{Modify, OpenApi};
         crate::api::proper_time::proper_time,
         crate::api::signal::path::signal_path,
         crate::api::signal::two_way::two_way,
+        crate::api::earth::eop::eop,
     ),
     components(schemas(
         crate::api::error::Problem,
@@ -37,12 +38,14 @@ use utoipa::{Modify, OpenApi};
         crate::api::names::InstantFormatName,
         crate::api::names::InstantString,
         crate::api::names::ThreeNumbersText,
+        crate::api::earth::types::UtcIsoInstant,
     )),
     modifiers(&CrossFieldRules),
     tags(
         (name = "time", description = "Time scales: conversions, the scales, the leap-second table"),
         (name = "clock", description = "Clock rates against TT or TCG: state vectors, orbits, ground and lunar sites; comparisons between clocks"),
-        (name = "signal", description = "Signal paths: light time with Sagnac, Shapiro and clock terms; two-way time-transfer Sagnac correction")
+        (name = "signal", description = "Signal paths: light time with Sagnac, Shapiro and clock terms; two-way time-transfer Sagnac correction"),
+        (name = "earth", description = "Earth orientation: the IERS EOP table in force (UT1 - UTC, polar motion, celestial pole offsets, length of day) and its values at an instant")
     )
 )]
 pub struct ApiDoc;

@@ -12,6 +12,7 @@
 //!
 //! The unit tests below check that codes are unique, well formed and explained.
 
+use crate::physics::earth::eop::EopLookupErrorKind;
 use crate::physics::proper_time::ProperTimeErrorKind;
 use crate::physics::rate::RateErrorKind;
 use crate::physics::signal::SignalErrorKind;
@@ -122,6 +123,23 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     (
         "clock_unavailable",
         "The server's own clock cannot give the current time; the operators need to check the host clock.",
+    ),
+    // Earth orientation (the EOP table in force).
+    (
+        EopLookupErrorKind::BeforeTable.as_str(),
+        "The instant is before the first day of the Earth orientation table in force; `detail` names that day.",
+    ),
+    (
+        EopLookupErrorKind::AfterTable.as_str(),
+        "The instant is after the last day of the Earth orientation table in force (the end of its predictions); the operators can give a newer file (`--eop-file`, `--eop-url`).",
+    ),
+    (
+        EopLookupErrorKind::NotFinite.as_str(),
+        "The second of day of an Earth orientation lookup is not a finite number.",
+    ),
+    (
+        EopLookupErrorKind::BadUtc.as_str(),
+        "The UTC reading of an Earth orientation lookup does not exist in the leap-second table (before 1960, or a second outside its day).",
     ),
     // Clock rates, comparisons and signal paths.
     (
@@ -447,7 +465,8 @@ mod tests {
             .iter()
             .chain(&RateErrorKind::NAMES)
             .chain(&SignalErrorKind::NAMES)
-            .chain(&ProperTimeErrorKind::NAMES);
+            .chain(&ProperTimeErrorKind::NAMES)
+            .chain(&EopLookupErrorKind::NAMES);
         for code in codes {
             assert!(
                 meaning(code).is_some(),
@@ -533,6 +552,16 @@ mod tests {
             .map(|kind| kind.as_str())
             .collect();
         expect("post", "/v1/clock/proper-time", &proper_time);
+        // `eop_not_finite` and `eop_bad_utc` cannot reach the endpoint: the instant is read and
+        // checked against the leap-second table before the lookup.
+        expect(
+            "get",
+            "/v1/earth/eop",
+            &[
+                EopLookupErrorKind::BeforeTable.as_str(),
+                EopLookupErrorKind::AfterTable.as_str(),
+            ],
+        );
         let paths = document["paths"].as_object().cloned().unwrap_or_default();
         let mut checked = 0;
         for (path, operations) in paths {

@@ -1,10 +1,11 @@
-//! The state shared by every handler: the limits the handlers check, the leap-second table in
-//! force and the OpenAPI document. The service (`crate::ops`) builds it from its settings and
+//! The state shared by every handler: the limits the handlers check, the leap-second and Earth
+//! orientation tables in force and the OpenAPI document. The service (`crate::ops`) builds it from its settings and
 //! hands it over as plain values; nothing here reads the service's configuration. Cloning is
 //! cheap (one `Arc`).
 
 use std::sync::{Arc, RwLock};
 
+use crate::physics::earth::eop::EopTable;
 use crate::physics::time::leap_seconds::LeapTable;
 
 /// The default of [`Limits::batch_limit`], and the `maxItems` the OpenAPI document states for
@@ -32,23 +33,31 @@ impl Default for Limits {
     }
 }
 
-/// The leap-second table in force, shared between the handlers (who read it) and whoever
-/// refreshes it. Clones share one table.
-#[derive(Debug, Clone)]
-pub struct LeapTableHandle {
-    table: Arc<RwLock<Arc<LeapTable>>>,
+/// A table in force (leap seconds, Earth orientation), shared between the handlers (who read
+/// it) and whoever refreshes it. Clones share one table.
+#[derive(Debug)]
+pub struct TableHandle<T> {
+    table: Arc<RwLock<Arc<T>>>,
 }
 
-impl LeapTableHandle {
+impl<T> Clone for TableHandle<T> {
+    fn clone(&self) -> Self {
+        Self {
+            table: Arc::clone(&self.table),
+        }
+    }
+}
+
+impl<T> TableHandle<T> {
     /// A handle holding `table`.
-    pub fn new(table: LeapTable) -> Self {
+    pub fn new(table: T) -> Self {
         Self {
             table: Arc::new(RwLock::new(Arc::new(table))),
         }
     }
 
     /// The table in force (a snapshot: a refresh does not change it under a request).
-    pub fn current(&self) -> Arc<LeapTable> {
+    pub fn current(&self) -> Arc<T> {
         match self.table.read() {
             Ok(guard) => Arc::clone(&guard),
             Err(poisoned) => Arc::clone(&poisoned.into_inner()),
@@ -56,7 +65,7 @@ impl LeapTableHandle {
     }
 
     /// Replaces the table for every clone of the handle.
-    pub fn replace(&self, table: LeapTable) {
+    pub fn replace(&self, table: T) {
         let table = Arc::new(table);
         match self.table.write() {
             Ok(mut guard) => *guard = table,
@@ -64,6 +73,12 @@ impl LeapTableHandle {
         }
     }
 }
+
+/// The leap-second table in force.
+pub type LeapTableHandle = TableHandle<LeapTable>;
+
+/// The Earth orientation (EOP) table in force.
+pub type EopTableHandle = TableHandle<EopTable>;
 
 /// The current time as Unix seconds (0 when the system clock reads before 1970).
 pub fn unix_now_s() -> f64 {
@@ -82,17 +97,24 @@ pub struct AppState {
 struct Inner {
     limits: Limits,
     leap_table: LeapTableHandle,
+    eop_table: EopTableHandle,
     openapi_json: String,
 }
 
 impl AppState {
-    /// State with the given limits, leap-second table and OpenAPI document (served as
+    /// State with the given limits, leap-second and EOP tables and OpenAPI document (served as
     /// `/openapi.json`: the service's whole document, which this layer does not assemble).
-    pub fn new(limits: Limits, leap_table: LeapTableHandle, openapi_json: String) -> Self {
+    pub fn new(
+        limits: Limits,
+        leap_table: LeapTableHandle,
+        eop_table: EopTableHandle,
+        openapi_json: String,
+    ) -> Self {
         Self {
             inner: Arc::new(Inner {
                 limits,
                 leap_table,
+                eop_table,
                 openapi_json,
             }),
         }
@@ -106,6 +128,12 @@ impl AppState {
     /// The leap-second table in force (a snapshot: a refresh does not change it under a request).
     pub fn leap_table(&self) -> Arc<LeapTable> {
         self.inner.leap_table.current()
+    }
+
+    /// The Earth orientation table in force (a snapshot: a refresh does not change it under a
+    /// request).
+    pub fn eop_table(&self) -> Arc<EopTable> {
+        self.inner.eop_table.current()
     }
 
     /// The OpenAPI document as JSON text.

@@ -30,7 +30,7 @@ pub struct Cli {
 #[derive(Debug, Subcommand)]
 pub enum Command {
     /// Serve the HTTP API (the default; takes the same settings).
-    Serve(Settings),
+    Serve(Box<Settings>),
     /// Print the OpenAPI document and exit.
     Openapi,
     /// Ask a running instance for /healthz and exit 0 when it answers 200 (for container health checks).
@@ -113,6 +113,17 @@ pub struct Settings {
         default_value_t = 86_400.0
     )]
     pub leap_seconds_refresh_s: f64,
+    /// Earth orientation (EOP) file to use instead of the built-in table (IERS Bulletin A
+    /// `finals2000A` or IERS EOP 14/20 C04, recognized from the text).
+    #[arg(long, env = "EIGENZEIT_EOP_FILE")]
+    pub eop_file: Option<PathBuf>,
+    /// URL polled for a newer EOP file (same formats); a file whose last observed day is older
+    /// than the table's in force is refused.
+    #[arg(long, env = "EIGENZEIT_EOP_URL")]
+    pub eop_url: Option<String>,
+    /// Interval between polls of the EOP URL, in seconds.
+    #[arg(long, env = "EIGENZEIT_EOP_REFRESH_S", default_value_t = 86_400.0)]
+    pub eop_refresh_s: f64,
     /// Longest gap between ephemeris states accepted, in seconds.
     #[arg(long, env = "EIGENZEIT_MAX_EPHEMERIS_GAP_S", default_value_t = DEFAULT_MAX_EPHEMERIS_GAP_S)]
     pub max_ephemeris_gap_s: f64,
@@ -133,6 +144,9 @@ impl Default for Settings {
             leap_seconds_file: None,
             leap_seconds_url: None,
             leap_seconds_refresh_s: 86_400.0,
+            eop_file: None,
+            eop_url: None,
+            eop_refresh_s: 86_400.0,
             max_ephemeris_gap_s: DEFAULT_MAX_EPHEMERIS_GAP_S,
         }
     }
@@ -153,6 +167,7 @@ impl Settings {
             ("--request-timeout-s", self.request_timeout_s),
             ("--drain-timeout-s", self.drain_timeout_s),
             ("--leap-seconds-refresh-s", self.leap_seconds_refresh_s),
+            ("--eop-refresh-s", self.eop_refresh_s),
             ("--max-ephemeris-gap-s", self.max_ephemeris_gap_s),
         ] {
             if !(value.is_finite() && value > 0.0 && value <= MAX_DURATION_S) {

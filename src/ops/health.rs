@@ -9,9 +9,10 @@ use serde::Serialize;
 use utoipa::ToSchema;
 
 use crate::api::state::unix_now_s;
+use crate::api::time::reference::iso_date;
 
 use super::metrics::Gauges;
-use super::state::ServiceState;
+use super::state::{RefreshStatus, ServiceState};
 
 /// Liveness answer.
 #[derive(Debug, Serialize, ToSchema)]
@@ -29,6 +30,8 @@ pub struct Readiness {
     pub status: String,
     /// The leap-second table in force and its refresh.
     pub leap_seconds: LeapReadiness,
+    /// The Earth orientation (EOP) table in force and its refresh.
+    pub eop: EopReadiness,
 }
 
 /// The leap-second part of the readiness answer.
@@ -40,12 +43,51 @@ pub struct LeapReadiness {
     pub expires: String,
     /// Days from now to the expiry (negative once expired).
     pub expires_in_days: f64,
+    /// How the refresh from the configured URL went.
+    #[serde(flatten)]
+    pub refresh: RefreshReadiness,
+}
+
+/// The EOP part of the readiness answer.
+#[derive(Debug, Serialize, ToSchema)]
+pub struct EopReadiness {
+    /// Where the table came from.
+    pub source: String,
+    /// Last day with observed polar motion and UT1 (UTC, ISO date).
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub last_observed: Option<String>,
+    /// MJD of that day.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub last_observed_mjd: Option<i64>,
+    /// Last predicted day (UTC, ISO date); absent when the table holds no predictions.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub end_of_predictions: Option<String>,
+    /// MJD of that day.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub end_of_predictions_mjd: Option<i64>,
+    /// How the refresh from the configured URL went.
+    #[serde(flatten)]
+    pub refresh: RefreshReadiness,
+}
+
+/// How the refresh of a table from its configured URL went.
+#[derive(Debug, Serialize, ToSchema)]
+pub struct RefreshReadiness {
     /// Unix time of the last successful refresh from the configured URL.
     #[serde(skip_serializing_if = "Option::is_none")]
     pub last_refresh_unix_s: Option<u64>,
     /// Why the last refresh failed (the table in force was kept).
     #[serde(skip_serializing_if = "Option::is_none")]
     pub last_refresh_error: Option<String>,
+}
+
+impl From<RefreshStatus> for RefreshReadiness {
+    fn from(status: RefreshStatus) -> Self {
+        Self {
+            last_refresh_unix_s: status.last_success_unix_s,
+            last_refresh_error: status.last_error,
+        }
+    }
 }
 
 /// Liveness: the process is up and serving.
@@ -60,14 +102,23 @@ pub async fn healthz() -> Json<Health> {
 
 fn leap_readiness(state: &ServiceState) -> LeapReadiness {
     let table = state.leap_table();
-    let refresh = state.leap_refresh_status();
-    let expiry = crate::physics::time::calendar::CalendarDate::from_mjd(table.expiry_mjd());
     LeapReadiness {
         source: table.source().to_string(),
-        expires: expiry.to_string(),
+        expires: iso_date(table.expiry_mjd()),
         expires_in_days: table.days_to_expiry(unix_now_s()),
-        last_refresh_unix_s: refresh.last_success_unix_s,
-        last_refresh_error: refresh.last_error,
+        refresh: state.leap().refresh_status().into(),
+    }
+}
+
+fn eop_readiness(state: &ServiceState) -> EopReadiness {
+    let table = state.eop_table();
+    EopReadiness {
+        source: table.source().to_string(),
+        last_observed: table.last_observed_mjd().map(iso_date),
+        last_observed_mjd: table.last_observed_mjd(),
+        end_of_predictions: table.end_of_predictions_mjd().map(iso_date),
+        end_of_predictions_mjd: table.end_of_predictions_mjd(),
+        refresh: state.eop().refresh_status().into(),
     }
 }
 
@@ -81,6 +132,7 @@ pub async fn readyz(State(state): State<ServiceState>) -> Response {
     let body = Readiness {
         status: if ready { "ready" } else { "draining" }.to_string(),
         leap_seconds: leap_readiness(&state),
+        eop: eop_readiness(&state),
     };
     let status = if ready {
         StatusCode::OK
@@ -95,9 +147,15 @@ pub async fn readyz(State(state): State<ServiceState>) -> Response {
     responses((status = 200, description = "Prometheus text format 0.0.4", body = String, content_type = "text/plain")))]
 pub async fn metrics(State(state): State<ServiceState>) -> Response {
     let table = state.leap_table();
+    let eop = state.eop_table();
+    let now_s = unix_now_s();
     let gauges = Gauges {
         leap_source: table.source().to_string(),
-        leap_expiry_days: table.days_to_expiry(unix_now_s()),
+        leap_expiry_days: table.days_to_expiry(now_s),
+        eop_source: eop.source().to_string(),
+        eop_last_observed_mjd: eop.last_observed_mjd(),
+        eop_end_of_predictions_mjd: eop.end_of_predictions_mjd(),
+        eop_table_end_days: eop.days_to_end(now_s),
         ready: state.is_ready(),
     };
     (

@@ -39,17 +39,62 @@ pub struct Metrics {
     requests: Family<RequestLabels, Counter>,
     durations: Family<RequestLabels, Histogram, fn() -> Histogram>,
     in_flight: Gauge,
-    leap_refresh_failures: Counter,
-    leap_refresh_successes: Counter,
+    leap_refresh: RefreshCounters,
+    eop_refresh: RefreshCounters,
+}
+
+/// The counters of one table's refresh: `<prefix>_refresh_failures_total` and
+/// `<prefix>_refresh_successes_total`.
+#[derive(Debug, Clone, Default)]
+pub struct RefreshCounters {
+    failures: Counter,
+    successes: Counter,
+}
+
+impl RefreshCounters {
+    /// New counters registered as `<prefix>_refresh_failures` and `_successes` (help texts
+    /// naming `table`).
+    fn registered(registry: &mut Registry, prefix: &str, table: &str) -> Self {
+        let counters = Self::default();
+        registry.register(
+            format!("{prefix}_refresh_failures"),
+            format!("Failed refreshes of {table}"),
+            counters.failures.clone(),
+        );
+        registry.register(
+            format!("{prefix}_refresh_successes"),
+            format!("Successful refreshes of {table}"),
+            counters.successes.clone(),
+        );
+        counters
+    }
+
+    /// Counts a failed refresh.
+    pub fn failed(&self) {
+        self.failures.inc();
+    }
+
+    /// Counts a successful refresh.
+    pub fn succeeded(&self) {
+        self.successes.inc();
+    }
 }
 
 /// Values read at render time from elsewhere in the service.
-#[derive(Debug, Clone)]
+#[derive(Debug, Clone, Default)]
 pub struct Gauges {
     /// Where the leap-second table in force came from.
     pub leap_source: String,
     /// Days from now to the table's expiry (negative once expired).
     pub leap_expiry_days: f64,
+    /// Where the Earth orientation table in force came from.
+    pub eop_source: String,
+    /// Last day of the EOP table with observed values (MJD).
+    pub eop_last_observed_mjd: Option<i64>,
+    /// Last predicted day of the EOP table (MJD).
+    pub eop_end_of_predictions_mjd: Option<i64>,
+    /// Days from now to the end of the EOP table (negative: past its last day).
+    pub eop_table_end_days: Option<f64>,
     /// Whether the service is ready.
     pub ready: bool,
 }
@@ -67,8 +112,6 @@ impl Metrics {
         let durations: Family<RequestLabels, Histogram, fn() -> Histogram> =
             Family::new_with_constructor(latency_histogram);
         let in_flight = Gauge::default();
-        let leap_refresh_failures = Counter::default();
-        let leap_refresh_successes = Counter::default();
         let mut registry = Registry::default();
         registry.register(
             "eigenzeit_build",
@@ -90,23 +133,23 @@ impl Metrics {
             "Time to answer, by route, method and status",
             durations.clone(),
         );
-        registry.register(
-            "eigenzeit_leap_seconds_refresh_failures",
-            "Failed refreshes of the leap-second table",
-            leap_refresh_failures.clone(),
+        let leap_refresh = RefreshCounters::registered(
+            &mut registry,
+            "eigenzeit_leap_seconds",
+            "the leap-second table",
         );
-        registry.register(
-            "eigenzeit_leap_seconds_refresh_successes",
-            "Successful refreshes of the leap-second table",
-            leap_refresh_successes.clone(),
+        let eop_refresh = RefreshCounters::registered(
+            &mut registry,
+            "eigenzeit_eop",
+            "the Earth orientation (EOP) table",
         );
         Self {
             registry,
             requests,
             durations,
             in_flight,
-            leap_refresh_failures,
-            leap_refresh_successes,
+            leap_refresh,
+            eop_refresh,
         }
     }
 
@@ -131,14 +174,14 @@ impl Metrics {
         self.in_flight.get()
     }
 
-    /// Counts a failed leap-second refresh.
-    pub fn leap_refresh_failed(&self) {
-        self.leap_refresh_failures.inc();
+    /// The refresh counters of the leap-second table.
+    pub fn leap_refresh(&self) -> &RefreshCounters {
+        &self.leap_refresh
     }
 
-    /// Counts a successful leap-second refresh.
-    pub fn leap_refresh_succeeded(&self) {
-        self.leap_refresh_successes.inc();
+    /// The refresh counters of the Earth orientation table.
+    pub fn eop_refresh(&self) -> &RefreshCounters {
+        &self.eop_refresh
     }
 
     /// Renders every metric in the Prometheus text format (0.0.4), the values of `gauges`
@@ -165,8 +208,41 @@ impl Metrics {
             "Days until the leap-second table expires (negative: expired)",
             ConstGauge::new(days),
         );
+        register_eop(&mut scrape, gauges);
         let _ = encode(&mut out, &scrape);
         out
+    }
+}
+
+/// The Earth orientation gauges of one scrape (a day not known, e.g. no predicted day, is left
+/// out rather than given a made-up value).
+fn register_eop(scrape: &mut Registry, gauges: &Gauges) {
+    scrape.register(
+        "eigenzeit_eop_table",
+        "The Earth orientation (EOP) table in force",
+        Info::new([("source", gauges.eop_source.clone())]),
+    );
+    if let Some(mjd) = gauges.eop_last_observed_mjd {
+        scrape.register(
+            "eigenzeit_eop_last_observed_mjd",
+            "Last day of the EOP table with observed values (MJD, 0h UTC)",
+            ConstGauge::new(mjd),
+        );
+    }
+    if let Some(mjd) = gauges.eop_end_of_predictions_mjd {
+        scrape.register(
+            "eigenzeit_eop_end_of_predictions_mjd",
+            "Last predicted day of the EOP table (MJD, 0h UTC)",
+            ConstGauge::new(mjd),
+        );
+    }
+    if let Some(days) = gauges.eop_table_end_days {
+        // Three decimals (about 90 s), as the leap-second expiry.
+        scrape.register(
+            "eigenzeit_eop_table_end_days",
+            "Days until the last day of the EOP table, the end of its predictions when it has any (negative: past it)",
+            ConstGauge::new((days * 1000.0).round() / 1000.0),
+        );
     }
 }
 
@@ -183,6 +259,7 @@ mod tests {
             leap_source: "built-in".into(),
             leap_expiry_days: 10.0,
             ready: true,
+            ..Gauges::default()
         });
         // Prometheus exposition format: buckets are cumulative, +Inf equals _count.
         assert!(text.contains(

@@ -124,12 +124,14 @@ pub async fn observe(State(state): State<ServiceState>, request: Request, next: 
 mod tests {
     use super::*;
     use crate::ops::config::Settings;
+    use crate::physics::earth::eop::EopTable;
     use crate::physics::time::leap_seconds::LeapTable;
 
     fn state() -> ServiceState {
         ServiceState::new(
             Settings::default(),
             LeapTable::builtin().clone(),
+            EopTable::builtin().clone(),
             String::new(),
         )
     }
@@ -151,6 +153,7 @@ mod tests {
             leap_source: "built-in".into(),
             leap_expiry_days: 1.0,
             ready: true,
+            ..crate::ops::metrics::Gauges::default()
         });
         // 499: nginx's "client closed request" (common practice).
         assert!(text.contains(
@@ -174,6 +177,7 @@ mod tests {
             leap_source: "built-in".into(),
             leap_expiry_days: 1.0,
             ready: true,
+            ..crate::ops::metrics::Gauges::default()
         });
         // Prometheus exposition format: one sample per label set.
         assert!(text.contains(

@@ -5,29 +5,55 @@ use std::future::Future;
 
 use tokio::net::TcpListener;
 
+use crate::physics::earth::eop::EopTable;
+use crate::physics::time::leap_seconds::LeapTable;
+
 use super::config::{duration_from_s, Settings};
-use super::leap_source;
+use super::refresh::{initial_table, spawn_poller};
 use super::state::ServiceState;
 
-/// Resolves on SIGTERM or SIGINT.
-pub async fn shutdown_signal() {
-    let interrupt = async {
-        let _ = tokio::signal::ctrl_c().await;
-    };
+/// Resolves on SIGTERM or SIGINT. The handlers are installed when this is called, not when the
+/// future is first polled, so that a signal sent right after start-up is not lost (it would
+/// otherwise end the process with the default action, without draining).
+pub fn shutdown_signal() -> impl Future<Output = ()> + Send + 'static {
     #[cfg(unix)]
-    let terminate = async {
-        match tokio::signal::unix::signal(tokio::signal::unix::SignalKind::terminate()) {
-            Ok(mut signal) => {
-                signal.recv().await;
-            }
-            Err(_) => std::future::pending::<()>().await,
-        }
+    let (terminate, interrupt) = {
+        use tokio::signal::unix::{signal, SignalKind};
+        (
+            signal(SignalKind::terminate()).ok(),
+            signal(SignalKind::interrupt()).ok(),
+        )
     };
-    #[cfg(not(unix))]
-    let terminate = std::future::pending::<()>();
-    tokio::select! {
-        _ = interrupt => {},
-        _ = terminate => {},
+    async move {
+        #[cfg(unix)]
+        {
+            let terminate = async {
+                match terminate {
+                    Some(mut signal) => {
+                        signal.recv().await;
+                    }
+                    None => std::future::pending::<()>().await,
+                }
+            };
+            let interrupt = async {
+                match interrupt {
+                    Some(mut signal) => {
+                        signal.recv().await;
+                    }
+                    None => {
+                        let _ = tokio::signal::ctrl_c().await;
+                    }
+                }
+            };
+            tokio::select! {
+                _ = terminate => {},
+                _ = interrupt => {},
+            }
+        }
+        #[cfg(not(unix))]
+        {
+            let _ = tokio::signal::ctrl_c().await;
+        }
     }
 }
 
@@ -41,10 +67,13 @@ pub async fn serve(
     shutdown: impl Future<Output = ()> + Send + 'static,
 ) -> std::io::Result<()> {
     let settings = state.settings().clone();
-    let poller = settings.leap_seconds_url.clone().map(|url| {
-        let interval = duration_from_s(settings.leap_seconds_refresh_s);
-        tokio::spawn(leap_source::poll_forever(state.clone(), url, interval))
-    });
+    let pollers: Vec<_> = [
+        spawn_poller::<LeapTable>(&state),
+        spawn_poller::<EopTable>(&state),
+    ]
+    .into_iter()
+    .flatten()
+    .collect();
     let (begin_drain, drain_started) = tokio::sync::watch::channel(false);
     let app = super::app(state.clone());
     let server = axum::serve(listener, app).with_graceful_shutdown(async move {
@@ -56,7 +85,7 @@ pub async fn serve(
         finished = &mut server => Some(finished),
         () = shutdown => None,
     };
-    if let Some(poller) = poller {
+    for poller in pollers {
         poller.abort();
     }
     if let Some(finished) = outcome {
@@ -94,11 +123,12 @@ fn joined(finished: Result<std::io::Result<()>, tokio::task::JoinError>) -> std:
     finished.unwrap_or_else(|join_error| Err(std::io::Error::other(join_error.to_string())))
 }
 
-/// Starts the service with `settings`: logs, leap-second table, listener, serve until a signal.
+/// Starts the service with `settings`: logs, leap-second and EOP tables, listener, serve until
+/// a signal.
 pub async fn run(settings: Settings) -> Result<(), String> {
     settings.validate()?;
     super::telemetry::init_logging(&settings);
-    let table = leap_source::initial_table(&settings)?;
+    let table = initial_table::<LeapTable>(&settings)?;
     let expires_in_days = table.days_to_expiry(crate::api::state::unix_now_s());
     tracing::info!(
         source = table.source(),
@@ -113,15 +143,39 @@ pub async fn run(settings: Settings) -> Result<(), String> {
              give a newer file (--leap-seconds-file) or a URL to poll (--leap-seconds-url)"
         );
     }
+    let eop_table = initial_table::<EopTable>(&settings)?;
+    log_eop_table(&eop_table);
     let listener = TcpListener::bind(settings.addr)
         .await
         .map_err(|e| format!("cannot listen on {}: {e}", settings.addr))?;
     let local = listener.local_addr().map_err(|e| e.to_string())?;
+    // Built before the `serving` line, which callers take as ready for requests and signals.
+    let state = ServiceState::new(settings, table, eop_table, super::openapi::document_json());
+    let shutdown = shutdown_signal();
     tracing::info!(addr = %local, "eigenzeit serving");
-    let state = ServiceState::new(settings, table, super::openapi::document_json());
-    serve(listener, state, shutdown_signal())
+    serve(listener, state, shutdown)
         .await
         .map_err(|e| format!("server error: {e}"))?;
     tracing::info!("eigenzeit stopped");
     Ok(())
+}
+
+/// Logs the EOP table at start-up, with a warning when its last day is already past.
+fn log_eop_table(table: &EopTable) {
+    let days_to_end = table.days_to_end(crate::api::state::unix_now_s());
+    tracing::info!(
+        source = table.source(),
+        first_mjd = table.first_mjd(),
+        last_observed_mjd = table.last_observed_mjd(),
+        end_of_predictions_mjd = table.end_of_predictions_mjd(),
+        days_to_end,
+        "EOP table loaded"
+    );
+    if days_to_end.is_some_and(|days| days < 0.0) {
+        tracing::warn!(
+            last_mjd = table.last_mjd(),
+            "the EOP table ends before today: Earth orientation lookups after its last day are \
+             refused; give a newer file (--eop-file) or a URL to poll (--eop-url)"
+        );
+    }
 }

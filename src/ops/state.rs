@@ -1,22 +1,65 @@
-//! The service's state: its settings, the API's state built from them, readiness, the
-//! leap-second refresh status and the metrics. Cloning is cheap (one `Arc`).
+//! The service's state: its settings, the API's state built from them, readiness, the tables
+//! in force (leap seconds, Earth orientation) with the status of their refresh, and the
+//! metrics. Cloning is cheap (one `Arc`).
 
 use std::sync::atomic::{AtomicBool, Ordering};
 use std::sync::{Arc, Mutex};
 
-use crate::api::{AppState, LeapTableHandle};
+use crate::api::{AppState, TableHandle};
+use crate::physics::earth::eop::EopTable;
 use crate::physics::time::leap_seconds::LeapTable;
 
 use super::config::Settings;
 use super::metrics::Metrics;
 
-/// How the last refresh of the leap-second table went.
+/// How the last refresh of a table went.
 #[derive(Debug, Clone, Default)]
-pub struct LeapRefreshStatus {
+pub struct RefreshStatus {
     /// Unix time of the last successful refresh, if any.
     pub last_success_unix_s: Option<u64>,
     /// The last failure's message, cleared by a success.
     pub last_error: Option<String>,
+}
+
+/// One table in force (shared with the API through its handle) and how its last refresh went.
+pub struct TableSlot<T> {
+    handle: TableHandle<T>,
+    refresh: Mutex<RefreshStatus>,
+}
+
+impl<T> TableSlot<T> {
+    fn new(table: T) -> Self {
+        Self {
+            handle: TableHandle::new(table),
+            refresh: Mutex::new(RefreshStatus::default()),
+        }
+    }
+
+    /// The table in force (a snapshot: a refresh does not change it under a request).
+    pub fn current(&self) -> Arc<T> {
+        self.handle.current()
+    }
+
+    /// Replaces the table (for the API too).
+    pub fn replace(&self, table: T) {
+        self.handle.replace(table);
+    }
+
+    /// The status of the refresh.
+    pub fn refresh_status(&self) -> RefreshStatus {
+        match self.refresh.lock() {
+            Ok(guard) => guard.clone(),
+            Err(poisoned) => poisoned.into_inner().clone(),
+        }
+    }
+
+    /// Records the outcome of a refresh.
+    pub fn set_refresh_status(&self, status: RefreshStatus) {
+        match self.refresh.lock() {
+            Ok(mut guard) => *guard = status,
+            Err(poisoned) => *poisoned.into_inner() = status,
+        }
+    }
 }
 
 /// Shared state of the service; clone freely.
@@ -28,25 +71,37 @@ pub struct ServiceState {
 struct Inner {
     settings: Settings,
     api: AppState,
-    leap_table: LeapTableHandle,
-    leap_refresh: Mutex<LeapRefreshStatus>,
+    leap: TableSlot<LeapTable>,
+    eop: TableSlot<EopTable>,
     ready: AtomicBool,
     metrics: Metrics,
 }
 
 impl ServiceState {
-    /// New state with the given settings, leap-second table and OpenAPI document (the whole
-    /// one: [`super::openapi::document_json`]), ready to serve. The API's state gets the
-    /// limits from the settings, a handle on the same table and the document.
-    pub fn new(settings: Settings, leap_table: LeapTable, openapi_json: String) -> Self {
-        let leap_table = LeapTableHandle::new(leap_table);
-        let api = AppState::new(settings.limits(), leap_table.clone(), openapi_json);
+    /// New state with the given settings, leap-second table, Earth orientation table and
+    /// OpenAPI document (the whole one: [`super::openapi::document_json`]), ready to serve.
+    /// The API's state gets the limits from the settings, handles on the same tables and the
+    /// document.
+    pub fn new(
+        settings: Settings,
+        leap_table: LeapTable,
+        eop_table: EopTable,
+        openapi_json: String,
+    ) -> Self {
+        let leap = TableSlot::new(leap_table);
+        let eop = TableSlot::new(eop_table);
+        let api = AppState::new(
+            settings.limits(),
+            leap.handle.clone(),
+            eop.handle.clone(),
+            openapi_json,
+        );
         Self {
             inner: Arc::new(Inner {
                 settings,
                 api,
-                leap_table,
-                leap_refresh: Mutex::new(LeapRefreshStatus::default()),
+                leap,
+                eop,
                 ready: AtomicBool::new(true),
                 metrics: Metrics::new(),
             }),
@@ -63,30 +118,24 @@ impl ServiceState {
         &self.inner.api
     }
 
+    /// The leap-second table in force and its refresh.
+    pub fn leap(&self) -> &TableSlot<LeapTable> {
+        &self.inner.leap
+    }
+
+    /// The Earth orientation table in force and its refresh.
+    pub fn eop(&self) -> &TableSlot<EopTable> {
+        &self.inner.eop
+    }
+
     /// The leap-second table in force (a snapshot: a refresh does not change it under a request).
     pub fn leap_table(&self) -> Arc<LeapTable> {
-        self.inner.leap_table.current()
+        self.inner.leap.current()
     }
 
-    /// Replaces the leap-second table (for the API too).
-    pub fn set_leap_table(&self, table: LeapTable) {
-        self.inner.leap_table.replace(table);
-    }
-
-    /// The status of the leap-second refresh.
-    pub fn leap_refresh_status(&self) -> LeapRefreshStatus {
-        match self.inner.leap_refresh.lock() {
-            Ok(guard) => guard.clone(),
-            Err(poisoned) => poisoned.into_inner().clone(),
-        }
-    }
-
-    /// Records the outcome of a leap-second refresh.
-    pub fn set_leap_refresh_status(&self, status: LeapRefreshStatus) {
-        match self.inner.leap_refresh.lock() {
-            Ok(mut guard) => *guard = status,
-            Err(poisoned) => *poisoned.into_inner() = status,
-        }
+    /// The Earth orientation table in force (a snapshot, as [`Self::leap_table`]).
+    pub fn eop_table(&self) -> Arc<EopTable> {
+        self.inner.eop.current()
     }
 
     /// Whether the service takes new work (false while draining).

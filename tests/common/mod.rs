@@ -1,12 +1,15 @@
 //! Shared harness: the real server on 127.0.0.1:0, called with reqwest.
 #![allow(dead_code)]
 
+pub mod file_server;
 pub mod kepler;
 
 pub mod process;
 
 use eigenzeit::ops::config::Settings;
+use eigenzeit::ops::refresh::initial_table;
 use eigenzeit::ops::ServiceState;
+use eigenzeit::physics::earth::eop::EopTable;
 use eigenzeit::physics::time::leap_seconds::LeapTable;
 use tokio::net::TcpListener;
 use tokio::sync::oneshot;
@@ -30,18 +33,26 @@ impl TestServer {
 
     /// Starts a server with the given settings (the address is replaced by 127.0.0.1:0).
     pub async fn start_with(settings: Settings) -> Self {
-        let table = eigenzeit::ops::leap_source::initial_table(&settings)
-            .unwrap_or_else(|_| LeapTable::builtin().clone());
+        let table =
+            initial_table::<LeapTable>(&settings).unwrap_or_else(|_| LeapTable::builtin().clone());
         Self::start_with_table(settings, table).await
     }
 
-    /// Starts a server with the given settings and leap-second table.
+    /// Starts a server with the given settings and leap-second table (the EOP table from the
+    /// settings, or the built-in one).
     pub async fn start_with_table(settings: Settings, table: LeapTable) -> Self {
+        let eop =
+            initial_table::<EopTable>(&settings).unwrap_or_else(|_| EopTable::builtin().clone());
         let listener = TcpListener::bind("127.0.0.1:0")
             .await
             .expect("bind loopback");
         let address = listener.local_addr().expect("local address");
-        let state = ServiceState::new(settings, table, eigenzeit::ops::openapi::document_json());
+        let state = ServiceState::new(
+            settings,
+            table,
+            eop,
+            eigenzeit::ops::openapi::document_json(),
+        );
         let (stop, stopped) = oneshot::channel::<()>();
         let shutdown = async move {
             let _ = stopped.await;

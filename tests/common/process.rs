@@ -41,10 +41,16 @@ fn address_in(line: &str) -> Option<String> {
 impl Service {
     /// Starts the binary on 127.0.0.1:0 with `args` and waits (at most 60 s) for its address.
     pub fn start(args: &[&str]) -> Self {
+        Self::start_with_env(args, &[])
+    }
+
+    /// Starts the binary as [`Service::start`] does, with environment variables `env` set.
+    pub fn start_with_env(args: &[&str], env: &[(&str, &str)]) -> Self {
         let mut child = Command::new(BINARY)
             .args(args)
             .args(["--addr", "127.0.0.1:0"])
             .env_remove("EIGENZEIT_LOG_FORMAT")
+            .envs(env.iter().copied())
             .stdout(Stdio::null())
             .stderr(Stdio::piped())
             .spawn()
@@ -89,6 +95,18 @@ impl Service {
 
     pub fn url(&self, path: &str) -> String {
         format!("{}{path}", self.base)
+    }
+
+    /// GETs `path` and returns (status, content type, JSON body).
+    pub async fn get_json(&self, path: &str) -> (u16, String, serde_json::Value) {
+        let response = client().get(self.url(path)).send().await.expect("get");
+        super::split(response).await
+    }
+
+    /// Sends SIGTERM and waits (at most 30 s) for the exit.
+    pub async fn stop(&mut self) -> ExitStatus {
+        self.terminate();
+        self.wait_exit(Duration::from_secs(30)).await
     }
 
     /// Sends SIGTERM with the system's `kill` (POSIX `kill -TERM PID`).

@@ -78,7 +78,8 @@ pub struct LeapSecondTable {
     pub entries: Vec<LeapEntry>,
 }
 
-fn iso_date(mjd: i64) -> String {
+/// The ISO date (`YYYY-MM-DD`) of the UTC day `mjd`.
+pub fn iso_date(mjd: i64) -> String {
     let date = CalendarDate::from_mjd(mjd);
     date.to_string()
 }

@@ -4,6 +4,7 @@
 use std::fmt;
 
 use crate::physics::time::leap_seconds::UtcRangeError;
+use crate::physics::vocabulary::vocabulary;
 
 /// What is wrong with an EOP file, as a stable code (for logs, metrics and problem+json).
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
@@ -84,6 +85,22 @@ impl fmt::Display for EopFileError {
 
 impl std::error::Error for EopFileError {}
 
+vocabulary! {
+    /// The kinds of [`EopLookupError`]; each spelling is the stable problem code, written only
+    /// here.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum EopLookupErrorKind {
+        /// [`EopLookupError::BeforeTable`].
+        BeforeTable = "eop_before_table",
+        /// [`EopLookupError::AfterTable`].
+        AfterTable = "eop_after_table",
+        /// [`EopLookupError::NotFinite`].
+        NotFinite = "eop_not_finite",
+        /// [`EopLookupError::Utc`].
+        BadUtc = "eop_bad_utc",
+    }
+}
+
 /// Why a lookup has no answer from the table.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
 pub enum EopLookupError {
@@ -99,14 +116,19 @@ pub enum EopLookupError {
 }
 
 impl EopLookupError {
-    /// Stable code text.
-    pub fn code(&self) -> &'static str {
+    /// What kind of error this is.
+    pub const fn kind(&self) -> EopLookupErrorKind {
         match self {
-            Self::BeforeTable { .. } => "eop_before_table",
-            Self::AfterTable { .. } => "eop_after_table",
-            Self::NotFinite => "eop_not_finite",
-            Self::Utc(_) => "eop_bad_utc",
+            Self::BeforeTable { .. } => EopLookupErrorKind::BeforeTable,
+            Self::AfterTable { .. } => EopLookupErrorKind::AfterTable,
+            Self::NotFinite => EopLookupErrorKind::NotFinite,
+            Self::Utc(_) => EopLookupErrorKind::BadUtc,
         }
+    }
+
+    /// Stable code text.
+    pub const fn code(&self) -> &'static str {
+        self.kind().as_str()
     }
 }
 

@@ -34,7 +34,7 @@ mod tests_readers;
 mod tests_reference;
 
 pub use c04::parse_c04;
-pub use error::{EopErrorCode, EopFileError, EopLookupError};
+pub use error::{EopErrorCode, EopFileError, EopLookupError, EopLookupErrorKind};
 pub use finals::parse_finals2000a;
 pub use interp::{lagrange_weights, EopValues};
 pub use snapshot::parse_snapshot;
@@ -44,6 +44,12 @@ impl EopTable {
     /// The table built into the binary (see the `snapshot` module for its source).
     pub fn builtin() -> &'static EopTable {
         snapshot::builtin()
+    }
+
+    /// The built-in table as an owned value, parsed anew and not kept for the process (for an
+    /// owner that may replace it, such as the service: no second copy stays behind).
+    pub fn builtin_owned() -> EopTable {
+        snapshot::parse_builtin()
     }
 }
 

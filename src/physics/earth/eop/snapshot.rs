@@ -247,8 +247,11 @@ fn assemble(
 /// its source.
 pub(crate) fn builtin() -> &'static EopTable {
     static TABLE: OnceLock<EopTable> = OnceLock::new();
-    TABLE.get_or_init(|| {
-        parse_snapshot(SNAPSHOT)
-            .unwrap_or_else(|e| EopTable::empty(format!("built-in EOP snapshot unreadable: {e}")))
-    })
+    TABLE.get_or_init(parse_builtin)
+}
+
+/// The built-in table parsed anew (as [`builtin`], without keeping it for the process).
+pub(crate) fn parse_builtin() -> EopTable {
+    parse_snapshot(SNAPSHOT)
+        .unwrap_or_else(|e| EopTable::empty(format!("built-in EOP snapshot unreadable: {e}")))
 }

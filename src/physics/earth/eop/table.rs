@@ -1,14 +1,17 @@
 //! The daily Earth orientation table and its metadata.
 
 use super::error::{EopErrorCode, EopFileError};
+use crate::physics::vocabulary::vocabulary;
 
-/// Whether a day's values are measured or forecast.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum EopStatus {
-    /// Observed (IERS flag `I`, or any C04 day).
-    Observed,
-    /// Predicted (IERS Bulletin A flag `P`).
-    Predicted,
+vocabulary! {
+    /// Whether a day's values are measured or forecast.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum EopStatus {
+        /// Observed (IERS flag `I`, or any C04 day).
+        Observed = "observed",
+        /// Predicted (IERS Bulletin A flag `P`).
+        Predicted = "predicted",
+    }
 }
 
 /// The 1-sigma errors the file states for a day (IERS Bulletin A / C04 error columns).
@@ -143,5 +146,13 @@ impl EopTable {
             .last()
             .filter(|d| d.status == EopStatus::Predicted)
             .map(|d| d.mjd)
+    }
+
+    /// Days from the Unix time `unix_s` to the last tabulated day (0h UTC), negative once past
+    /// it; None for an empty table. (MJD 40587 = 1970-01-01, as in the leap-second table's
+    /// `days_to_expiry`; UTC days counted as 86 400 s.)
+    pub fn days_to_end(&self, unix_s: f64) -> Option<f64> {
+        let now_mjd = crate::physics::time::calendar::UNIX_EPOCH_MJD as f64 + unix_s / 86_400.0;
+        self.last_mjd().map(|last| last as f64 - now_mjd)
     }
 }

@@ -23,6 +23,8 @@ fn builtin_snapshot_is_complete() {
     assert_eq!(t.last_observed_mjd(), Some(61_335)); // 2026-10-22, last I line of finals2000A
     assert_eq!(t.end_of_predictions_mjd(), Some(61_707)); // 2027-10-29, last P line
     assert_eq!(t.days().len(), 61_707 - 37_665 + 1);
+    // The owned copy is the same table, day for day (the same parse of the same text).
+    assert_eq!(&EopTable::builtin_owned(), t);
 }
 
 #[test]
