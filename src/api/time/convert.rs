@@ -4,9 +4,10 @@ use axum::extract::State;
 use axum::http::{header, HeaderMap, StatusCode};
 use axum::response::{IntoResponse, Response};
 
-use super::conversion::convert_one;
+use super::conversion::{convert_one, FieldName};
 use super::csv::{self, CSV_CONTENT_TYPE};
 use super::forms::FormSelection;
+use super::json_view::{BatchJson, ConversionJson};
 use super::observer::{observer_from_input, parse_observer_query};
 use super::types::{Conversion, ConversionBatch, ConvertBatchRequest, ConvertQuery};
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, QueryProblems, TimeoutProblem};
@@ -89,9 +90,19 @@ pub async fn convert_get(
         observer,
         tdb_evaluation: TdbEvaluation::Fitted,
     };
-    let converted = convert_one(&query.at, format, from, &targets, &context, "at")?;
+    let converted = convert_one(
+        &query.at,
+        format,
+        from,
+        &targets,
+        &context,
+        FieldName::Named("at"),
+    )?;
     let written = match answer_type(&headers) {
-        AnswerType::Json => ("application/json", json_bytes(&converted.json(&forms))?),
+        AnswerType::Json => (
+            "application/json",
+            json_bytes(&ConversionJson(&converted, &forms))?,
+        ),
         AnswerType::Csv => {
             let mut out = Vec::with_capacity(256);
             csv::push_header(&targets, &forms, &mut out);
@@ -151,7 +162,7 @@ pub async fn convert_post(
                 from,
                 &targets,
                 &context,
-                &format!("epochs[{index}]"),
+                FieldName::Item("epochs", index),
             )
         };
         // Written here, in the blocking pool: a 100 000-epoch answer takes as long to write as
@@ -162,11 +173,11 @@ pub async fn convert_post(
                     .epochs
                     .iter()
                     .enumerate()
-                    .map(|(index, text)| convert_at(index, text).map(|c| c.json(&forms)))
+                    .map(|(index, text)| convert_at(index, text))
                     .collect::<Result<Vec<_>, _>>()?;
                 Ok((
                     "application/json",
-                    json_bytes(&ConversionBatch { conversions })?,
+                    json_bytes(&BatchJson(&conversions, &forms))?,
                 ))
             }
             AnswerType::Csv => {

@@ -9,8 +9,9 @@ use axum::Json;
 use serde::Serialize;
 use utoipa::ToSchema;
 
-use super::conversion::convert_one;
+use super::conversion::{convert_one, FieldName};
 use super::forms::FormSelection;
+use super::json_view::ConversionJson;
 use super::types::{Conversion, NowQuery};
 use crate::api::error::{ApiError, QueryProblems};
 use crate::api::extract::QueryParams;
@@ -225,11 +226,11 @@ pub async fn now(
         Scale::Utc,
         &Scale::ALL,
         &context,
-        "now",
+        FieldName::Named("now"),
     )?;
     Ok((
         [(header::CACHE_CONTROL, "no-store")],
-        Json(conversion.json(&forms)),
+        Json(ConversionJson(&conversion, &forms)),
     )
         .into_response())
 }
