@@ -25,6 +25,8 @@ mod value;
 #[cfg(test)]
 mod tests_erfa;
 #[cfg(test)]
+mod tests_erfa_matrices;
+#[cfg(test)]
 mod tests_fast;
 #[cfg(test)]
 mod tests_reference;
@@ -77,5 +79,24 @@ impl JulianDate {
     /// every series here (ERFA's expression, in this order).
     pub fn julian_centuries_since_j2000(&self) -> f64 {
         ((self.jd1 - J2000_JD) + self.jd2) / DAYS_PER_JULIAN_CENTURY
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    /// J2000.0 is JD 2451545.0 (IAU 1976 / IERS Conventions (2010) ch. 5): a count of -1.5 days
+    /// is JD 2451543.5, split as 2451543.0 + 0.5; one attosecond after J2000.0 stays on its day.
+    #[test]
+    fn julian_date_from_attosecond_count() {
+        let day = 86_400 * 1_000_000_000_000_000_000i128;
+        let jd = JulianDate::from_count_attos_since_j2000(-3 * day / 2);
+        assert_eq!((jd.jd1, jd.jd2), (2_451_543.0, 0.5));
+        let jd = JulianDate::from_count_attos_since_j2000(1);
+        assert_eq!(jd.jd1, J2000_JD);
+        assert!(jd.jd2 > 0.0 && jd.jd2 < 1e-22);
+        let century = JulianDate::new(J2000_JD, DAYS_PER_JULIAN_CENTURY);
+        assert_eq!(century.julian_centuries_since_j2000(), 1.0);
     }
 }
