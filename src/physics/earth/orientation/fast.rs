@@ -8,9 +8,11 @@
 //! Clenshaw recurrences. Each interval has its own `OnceLock`, so threads share the work without
 //! locks on the hot path. Outside the span the full series is used.
 //!
-//! The nutation series has no term with a period below about 5 days, so 8-day intervals with 14
-//! coefficients leave a truncation error far below the 1e-12 rad required; the tests compare with
-//! the full series at random epochs 1962-2100 and on interval boundaries.
+//! The shortest period in the nutation tables is 3.5 days (a 1.5 uas luni-solar term); the
+//! terms near 5.6 days (a few mas) set the truncation error of 8-day intervals with 14
+//! coefficients, about 1e-14 rad (a Chebyshev coefficient of sin(w t) on a half-width a is
+//! 2 J_n(w a)). The tests compare with the full series at random epochs 1962-2100 and across
+//! interval boundaries: worst 4.1e-14 rad, against the 1e-12 rad required.
 //!
 //! Reference: Press, W.H. et al., Numerical Recipes, 3rd ed., section 5.8 (Chebyshev
 //! approximation and Clenshaw's recurrence).
