@@ -9,9 +9,9 @@
 //! locks on the hot path. Outside the span the full series is used.
 //!
 //! The shortest period in the nutation tables is 3.5 days (a 1.5 uas luni-solar term); the
-//! terms near 5.6 days (a few mas) set the truncation error of 8-day intervals with 14
-//! coefficients, about 1e-14 rad (a Chebyshev coefficient of sin(w t) on a half-width a is
-//! 2 J_n(w a)). The tests compare with the full series at random epochs 1962-2100 and across
+//! terms of 5.5-6.9 days (up to 3.1 mas, at 6.86 days) set the truncation error of 8-day
+//! intervals with 14 coefficients, of order 1e-14 rad (a Chebyshev coefficient of sin(w t) on a
+//! half-width a is 2 J_n(w a)). The tests compare with the full series at random epochs 1962-2100 and across
 //! interval boundaries: worst 4.1e-14 rad, against the 1e-12 rad required.
 //!
 //! Reference: Press, W.H. et al., Numerical Recipes, 3rd ed., section 5.8 (Chebyshev
