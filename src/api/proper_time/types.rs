@@ -64,7 +64,7 @@ pub struct ProperTimeOptionsInput {
 }
 
 /// The options of a JSON body: the query parameters of the same names, which they override.
-#[derive(Debug, Clone, Default, Deserialize, ToSchema)]
+#[derive(Debug, Clone, Default, Deserialize, Serialize, ToSchema)]
 #[schema(as = ProperTimeOptions)]
 #[serde(deny_unknown_fields)]
 pub struct ProperTimeBodyOptions {
@@ -111,7 +111,10 @@ impl From<ProperTimeBodyOptions> for ProperTimeOptionsInput {
 }
 
 /// One state of a JSON ephemeris.
-#[derive(Debug, Clone, Deserialize, ToSchema)]
+// The schema of the body only: bodies are read into `trajectory::json::JsonEphemeris` (the
+// one type and rule set of the JSON ephemeris); `tests/json_ephemeris_schema.rs` holds the two
+// to the same members. `Serialize` only lets utoipa read the `serde` attributes.
+#[derive(Debug, Clone, Serialize, ToSchema)]
 #[schema(as = EphemerisStateInput)]
 #[serde(deny_unknown_fields)]
 pub struct StateInput {
@@ -130,7 +133,10 @@ pub struct StateInput {
 }
 
 /// One object of a JSON ephemeris.
-#[derive(Debug, Clone, Deserialize, ToSchema)]
+// The schema of the body only: bodies are read into `trajectory::json::JsonEphemeris` (the
+// one type and rule set of the JSON ephemeris); `tests/json_ephemeris_schema.rs` holds the two
+// to the same members. `Serialize` only lets utoipa read the `serde` attributes.
+#[derive(Debug, Clone, Serialize, ToSchema)]
 #[schema(as = EphemerisObjectInput)]
 #[serde(deny_unknown_fields)]
 pub struct ObjectInput {
@@ -144,7 +150,10 @@ pub struct ObjectInput {
 }
 
 /// A JSON ephemeris: one or many objects in one frame and time scale.
-#[derive(Debug, Clone, Deserialize, ToSchema)]
+// The schema of the body only: bodies are read into `trajectory::json::JsonEphemeris` (the
+// one type and rule set of the JSON ephemeris); `tests/json_ephemeris_schema.rs` holds the two
+// to the same members. `Serialize` only lets utoipa read the `serde` attributes.
+#[derive(Debug, Clone, Serialize, ToSchema)]
 #[serde(deny_unknown_fields)]
 #[schema(example = json!({
     "frame": "GCRF", "time_scale": "UTC",
