@@ -160,7 +160,7 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     ),
     (
         "unknown_gravity_model",
-        "The gravity model is not `point_mass` or `j2`.",
+        "The gravity model is not `point_mass`, `j2` or `grs80`.",
     ),
     (
         RateErrorKind::UnsupportedGravityModel.as_str(),
