@@ -171,6 +171,10 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "The frame is not one the endpoint takes (`GCRS` inertial or `ITRF` Earth-fixed).",
     ),
     (
+        "unknown_motion",
+        "The transmitter motion is not `free_fall` (a satellite) or `uniform` (anything else given with a velocity).",
+    ),
+    (
         "unknown_height_reference",
         "The height reference is not `ellipsoid` or `geoid`.",
     ),
@@ -494,6 +498,7 @@ mod tests {
         check::<GravityModel>("unknown_gravity_model");
         check::<Frame>("unknown_frame");
         check::<HeightReference>("unknown_height_reference");
+        check::<crate::physics::signal::TransmitterMotion>("unknown_motion");
     }
 
     #[test]
