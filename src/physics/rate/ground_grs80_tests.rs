@@ -169,6 +169,10 @@ fn j2_misses_the_normal_field_by_the_reviewed_amounts() {
             GravityModel::Grs80,
         );
         let difference = j2.total() - (grs80.total() - offset);
+        println!(
+            "lat {latitude_deg}: j2 - closed form (T = 0) = {difference:.3e}; j2 - grs80 (N = 0) = {:.3e}",
+            j2.total() - grs80.total()
+        );
         assert!(
             (difference - review).abs() < 0.06e-16,
             "lat {latitude_deg}: {difference:e}"
