@@ -103,7 +103,7 @@ pub fn grs80_normal_potential_m2_s2(position_m: [f64; 3]) -> Result<f64, RateErr
 /// without the centrifugal term omega^2 (x^2 + y^2)/2), m^2/s^2, at an Earth-fixed point.
 ///
 /// Reference: Heiskanen & Moritz, Physical Geodesy (1967) eq. 2-126 less the centrifugal
-/// potential of eq. 2-37; GRS80 constants (Moritz 2000). The GM is GRS80's, 3.986 005e14, not
+/// potential (eq. 2-37, from memory); GRS80 constants (Moritz 2000). The GM is GRS80's, 3.986 005e14, not
 /// the IERS 3.986 004 418e14: the degree-0 terms differ by 1.5e-9 of GM/r (about 9 m^2/s^2,
 /// 1e-16 of a rate, on the ground).
 pub fn grs80_normal_gravitational_potential_m2_s2(position_m: [f64; 3]) -> Result<f64, RateError> {

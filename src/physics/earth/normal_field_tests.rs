@@ -172,7 +172,7 @@ fn the_far_field_has_the_defining_j2_of_grs80() {
 
 #[test]
 fn the_gravitational_part_is_the_normal_potential_less_the_centrifugal_one() {
-    // Heiskanen & Moritz (1967) eq. 2-37: U = V + omega^2 (x^2 + y^2)/2; at the pole the
+    // Heiskanen & Moritz (1967) eq. 2-37 (from memory): U = V + omega^2 (x^2 + y^2)/2; at the pole the
     // centrifugal term vanishes.
     let pole = [0.0, 0.0, GRS80_SEMI_MINOR_AXIS_M];
     let equator = [GRS80_SEMI_MAJOR_AXIS_M, 0.0, 0.0];

@@ -130,7 +130,7 @@ fn the_rate_gradient_is_the_published_normal_gravity() {
 #[test]
 fn an_ellipsoidal_height_equals_the_same_geoid_height_when_n_is_zero() {
     // With geoid undulation N = 0 the orthometric and ellipsoidal heights agree (Heiskanen &
-    // Moritz 1967 eq. 4-24, h = H + N), and so must the rates.
+    // Moritz 1967 eq. 4-24, h = H + N; from memory), and so must the rates.
     for (latitude_deg, height_m) in [(0.0, 0.0), (45.0, 1000.0), (-70.0, 100e3), (30.0, 1e8)] {
         let ellipsoidal = rate(
             latitude_deg,

@@ -61,7 +61,7 @@ fn add_scaled(base: [f64; 3], scale: f64, direction: [f64; 3]) -> [f64; 3] {
 /// by classical fourth-order Runge-Kutta steps of at most [`MAX_FREE_FALL_STEP_S`] in the
 /// field of [`j2_acceleration_m_s2`].
 ///
-/// Reference: Press et al., Numerical Recipes (3rd ed. 2007) eq. 17.1.3 (the classical
+/// Reference: Press et al., Numerical Recipes (3rd ed. 2007) eq. 17.1.3 (from memory; the classical
 /// Runge-Kutta method).
 pub fn free_fall_state(
     position_m: [f64; 3],
@@ -115,9 +115,10 @@ pub struct Emission {
 /// * [`TransmitterMotion::FreeFall`]: the inertial state (ITRF: v + omega_E x r) integrated
 ///   back by [`free_fall_state`] in the point-mass plus J2 field (IERS Conventions (2010)
 ///   table 1.1 GM, J2, a_E; the frame's z axis as the Earth's, so for GCRS the pole's
-///   0.15 deg precession-nutation tilt changes the J2 acceleration by below 3e-3 of itself).
-///   The higher zonal terms (J4/J2 = 1.5e-3) and the Moon and Sun (about 5e-6 m/s^2 of tidal
-///   acceleration at navigation orbits) move the transmitter by below 1e-8 m over 0.07 s.
+///   0.15 deg precession-nutation tilt changes the J2 acceleration by about 1e-2 of itself,
+///   5e-7 m/s^2 at navigation orbits, 1e-9 m over 0.07 s). The higher zonal terms (J4/J2
+///   about 2e-3) and the Moon and Sun (about 5e-6 m/s^2 of tidal acceleration at navigation
+///   orbits) move the transmitter by about 1e-8 m over 0.07 s.
 ///
 /// The Earth-fixed position at emission is the inertial one rotated by +omega_E tau about z
 /// (IS-GPS-200 20.3.3.4.3.3.2, the inverse of the rotation applied to a fixed point).
