@@ -39,7 +39,8 @@ pub struct ProperTimeOptionsInput {
     /// Coordinate time the clock is compared with: `TT` (default) or `TCG`.
     #[param(value_type = Option<ReferenceName>, example = "TT")]
     pub reference: Option<String>,
-    /// Earth potential: `point_mass` (default) or `j2` (IERS Conventions (2010) GM, J2, a_E).
+    /// Earth potential: `point_mass` (default), `j2` (IERS Conventions (2010) GM, J2, a_E) or
+    /// `grs80` (the GRS80 normal field in closed form).
     #[param(value_type = Option<GravityModelName>, example = "point_mass")]
     pub gravity_model: Option<String>,
     /// Answer every `step_s` seconds (of TT) from the first epoch instead of at the input
@@ -74,7 +75,7 @@ pub struct ProperTimeBodyOptions {
     /// Coordinate time the clock is compared with: `TT` (default) or `TCG`.
     #[schema(value_type = Option<ReferenceName>)]
     pub reference: Option<String>,
-    /// Earth potential: `point_mass` (default) or `j2`.
+    /// Earth potential: `point_mass` (default), `j2` or `grs80`.
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
     /// Output step, seconds of TT, from 0.001 to 315 537 897 600.
@@ -247,7 +248,7 @@ pub struct ObjectOutput {
 pub struct ProperTimeAnswer {
     /// `TT` or `TCG`.
     pub reference: String,
-    /// `point_mass` or `j2`.
+    /// `point_mass`, `j2` or `grs80`.
     pub gravity_model: String,
     /// The objects, in the order of the ephemeris.
     pub objects: Vec<ObjectOutput>,
