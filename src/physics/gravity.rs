@@ -76,6 +76,19 @@ pub fn earth_j2_potential_m2_s2(position_m: [f64; 3]) -> Result<f64, RateError> 
     Ok(GM_EARTH_M3_S2 / r_m * (1.0 - J2_EARTH * ratio * ratio * p2))
 }
 
+/// The position in a frame whose z axis is `axis_unit` (a unit vector in the position's frame),
+/// for fields symmetric about that axis: `[rho, 0, z']` with `z' = r . axis` and
+/// `rho = sqrt(r^2 - z'^2)`, so that |r| and the latitude about the axis are kept.
+///
+/// Used to evaluate the Earth's zonal fields (J2, GRS80) about the Celestial Intermediate Pole
+/// for GCRS positions: in the GCRS the CIP is the unit vector (X, Y, sqrt(1 - X^2 - Y^2))
+/// (IERS Conventions (2010) sec. 5.4.4).
+pub fn position_about_axis_m(position_m: [f64; 3], axis_unit: [f64; 3]) -> [f64; 3] {
+    let along_m = dot(position_m, axis_unit);
+    let across_squared_m2 = (dot(position_m, position_m) - along_m * along_m).max(0.0);
+    [across_squared_m2.sqrt(), 0.0, along_m]
+}
+
 /// Earth point-mass potential with the IERS Conventions (2010) table 1.1 GM (TCG-compatible).
 pub fn earth_point_mass_potential_m2_s2(position_m: [f64; 3]) -> Result<f64, RateError> {
     point_mass_potential_m2_s2(GM_EARTH_M3_S2, position_m)

@@ -29,3 +29,12 @@ pub fn celestial_pole_series(tt: JulianDate) -> CelestialPole {
         eo_rad: equation_of_the_origins_rad(&npb, s),
     }
 }
+
+impl CelestialPole {
+    /// The CIP as a unit vector of the GCRS, (X, Y, sqrt(1 - X^2 - Y^2)): X and Y are the
+    /// GCRS coordinates of the CIP unit vector (IERS Conventions (2010) sec. 5.4.4).
+    pub fn unit_vector_gcrs(&self) -> [f64; 3] {
+        let (x, y) = (self.x_rad, self.y_rad);
+        [x, y, (1.0 - x * x - y * y).sqrt()]
+    }
+}
