@@ -312,8 +312,8 @@ async fn settings_resolve_item_over_request_over_default() {
         &server,
         json!({"items": [
             circular_orbit(NAV_A_M),
-            {"state": {"frame": "GCRS", "position_m": [7.0e6, 0.0, 0.0], "velocity_m_s": [0.0, 7546.05, 0.0]}},
-            {"state": {"frame": "GCRS", "position_m": [7.0e6, 0.0, 0.0], "velocity_m_s": [0.0, 7546.05, 0.0]}, "gravity_model": "point_mass"},
+            {"state": {"frame": "ITRF", "position_m": [7.0e6, 0.0, 0.0], "velocity_m_s": [0.0, 7546.05, 0.0]}},
+            {"state": {"frame": "ITRF", "position_m": [7.0e6, 0.0, 0.0], "velocity_m_s": [0.0, 7546.05, 0.0]}, "gravity_model": "point_mass"},
             {"lunar_site": {"latitude_deg": 0.0, "longitude_deg": 0.0}}
         ], "gravity_model": "j2"}),
     )
@@ -322,7 +322,7 @@ async fn settings_resolve_item_over_request_over_default() {
     assert_eq!(results[0]["gravity_model"], "point_mass");
     let notes = results[0]["model_notes"].to_string();
     assert!(notes.contains("request-level gravity_model j2"), "{notes}");
-    // A state takes the request's j2 unless the item says otherwise; at the equator of a 7000 km
+    // A state takes the request's j2 unless the item says otherwise (ITRF: the z axis is the pole); at the equator of a 7000 km
     // orbit J2 raises U by GM J2 (a_E/r)^2 / (2r) (IERS Conventions (2010) table 1.1), so the
     // clock runs slower by that over c^2, about 2.8e-13 (computed from the formula).
     assert_eq!(results[1]["gravity_model"], "j2");
@@ -358,4 +358,53 @@ async fn a_site_at_the_geostationary_radius_ticks_as_a_geostationary_orbit() {
         us(0),
         us(1)
     );
+}
+
+#[tokio::test]
+async fn a_gcrs_state_with_j2_is_taken_about_the_cip_at_its_epoch() {
+    let server = TestServer::start().await;
+    // Without its epoch a GCRS state with a zonal model is refused, naming the field.
+    let request = json!({"items": [{"state": {"frame": "GCRS", "position_m": [7.0e6, 0.0, 0.0],
+        "velocity_m_s": [0.0, 7546.05, 0.0]}, "gravity_model": "j2"}]});
+    let answer = common::post_json(&server, "/v1/clock/rate", &request).await;
+    let body = common::assert_problem(&answer, 422, "epoch_required");
+    assert_eq!(body["field"], "items[0].state.epoch");
+    // A position on the true equator (perpendicular to the CIP at the epoch, from the
+    // orientation library, itself checked against ERFA) has the equatorial J2 potential, as the
+    // same radius on the ITRF equator (IERS Conventions (2010) eq. 6.6 at degree 2).
+    use eigenzeit::physics::earth::orientation::{fast::celestial_pole_fast, JulianDate};
+    // 2026-05-20T00:01:09.184 TT = 2026-05-20T00:00:00 UTC (TT - UTC = 69.184 s, IERS Bulletin C).
+    let tt = JulianDate::new(2_461_180.5, 69.184 / 86_400.0);
+    let k = celestial_pole_fast(tt).unit_vector_gcrs();
+    let across = {
+        let v = [k[1], -k[0], 0.0];
+        let n = (v[0] * v[0] + v[1] * v[1]).sqrt();
+        [v[0] / n * 7.0e6, v[1] / n * 7.0e6, 0.0]
+    };
+    let results = rate_of(
+        &server,
+        json!({"items": [
+            {"state": {"frame": "GCRS", "position_m": across, "velocity_m_s": [0.0, 0.0, 0.0],
+                "epoch": "2026-05-20T00:00:00", "epoch_scale": "UTC"}, "gravity_model": "j2"},
+            {"state": {"frame": "ITRF", "position_m": [7.0e6, 0.0, 0.0], "velocity_m_s": [0.0, 0.0, 0.0]},
+                "gravity_model": "j2"},
+            {"state": {"frame": "GCRS", "position_m": [7.0e6, 0.0, 0.0], "velocity_m_s": [0.0, 0.0, 0.0],
+                "epoch": "2026-05-20T00:00:00"}, "gravity_model": "j2"}
+        ]}),
+    )
+    .await;
+    let gr = |i: usize| num(&results[i]["fractional"]["gr"]);
+    assert!((gr(0) - gr(1)).abs() < 1e-22, "{:e} vs {:e}", gr(0), gr(1));
+    // [7e6, 0, 0] of the GCRS is off the true equator by X: its J2 term is smaller by
+    // (3/2) X^2 of the equatorial one, which the check must see.
+    let j2_term = GM_M3_S2 * 1.082_635_9e-3 * (6_378_136.6f64 / 7.0e6).powi(2)
+        / (2.0 * 7.0e6)
+        / 299_792_458.0f64.powi(2);
+    let expected = 3.0 * j2_term * k[0] * k[0];
+    assert!(
+        ((gr(2) - gr(1)) - expected).abs() < 0.01 * expected,
+        "{:e} vs {expected:e}",
+        gr(2) - gr(1)
+    );
+    assert!(expected > 1e-19, "{expected:e}");
 }

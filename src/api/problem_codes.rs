@@ -171,6 +171,10 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "The frame is not one the endpoint takes (`GCRS` inertial or `ITRF` Earth-fixed).",
     ),
     (
+        "epoch_required",
+        "A GCRS state with the `j2` or `grs80` model needs its `epoch`: the field is taken about the Earth's true pole (the CIP), which moves in the GCRS.",
+    ),
+    (
         "unknown_motion",
         "The transmitter motion is not `free_fall` (a satellite) or `uniform` (anything else given with a velocity).",
     ),

@@ -5,13 +5,20 @@ use super::answer::{FrequencyAnswer, PeriodicAnswer, RateAnswer, RateSplit};
 use super::notes;
 use super::types::{GroundSiteInput, LunarSiteInput, OrbitInput, RateItem, StateInput};
 use crate::api::error::ApiError;
-use crate::api::names::parse_named;
+use crate::api::names::{parse_named, parse_scale};
+use crate::physics::earth::orientation::fast::celestial_pole_fast;
+use crate::physics::earth::orientation::JulianDate;
+use crate::physics::rate::state::state_rate_about_axis;
 use crate::physics::rate::{
-    frequency_offset, ground_site_rate, lunar_site_rate, orbit_rate, state_rate, Anomaly, Frame,
-    GravityModel, GroundSite, HeightReference, KeplerianOrbit, LunarSite, RateError, RateParts,
-    RateReference, StateVector,
+    frequency_offset, ground_site_rate, lunar_site_rate, orbit_rate, Anomaly, Frame, GravityModel,
+    GroundSite, HeightReference, KeplerianOrbit, LunarSite, RateError, RateParts, RateReference,
+    StateVector,
 };
 use crate::physics::readable::readable;
+use crate::physics::time::convert::{convert, ConversionContext};
+use crate::physics::time::formats::{parse_instant, InstantFormat};
+use crate::physics::time::leap_seconds::LeapTable;
+use crate::physics::time::scale::Scale;
 
 /// Settings given at the request level, already read.
 #[derive(Debug, Clone, Copy, Default)]
@@ -260,6 +267,53 @@ pub fn evaluate_item(
     Ok(Evaluated { answer, parts })
 }
 
+/// The Earth's figure axis in the state's frame: the ITRF z axis, or for a GCRS state with a
+/// zonal model the CIP at the state's epoch (required then).
+fn figure_axis(
+    state: &StateInput,
+    frame: Frame,
+    model: GravityModel,
+    path: &str,
+) -> Result<[f64; 3], ApiError> {
+    let scale = parse_scale(
+        state.epoch_scale.as_deref().unwrap_or("UTC"),
+        &format!("{path}.state.epoch_scale"),
+    )?;
+    let field = format!("{path}.state.epoch");
+    // The built-in leap-second table: the pole moves about 1e-11 rad a second, so a leap
+    // second announced after this build would change the axis by far less than any term here.
+    let table = LeapTable::builtin();
+    let tt = match &state.epoch {
+        Some(text) => {
+            let instant = parse_instant(text, InstantFormat::Iso, scale, table)
+                .map_err(|e| ApiError::from_time(&e, &field))?;
+            let context = ConversionContext::geocentric(table);
+            Some(
+                convert(&instant, Scale::Tt, &context)
+                    .map_err(|e| ApiError::from_time(&e, &field))?,
+            )
+        }
+        None => None,
+    };
+    if frame == Frame::Itrf || model == GravityModel::PointMass {
+        return Ok([0.0, 0.0, 1.0]);
+    }
+    let tt = tt.ok_or_else(|| {
+        ApiError::unprocessable(
+            "epoch_required",
+            format!(
+                "a GCRS state with the {} model needs its epoch: the field is taken about the Earth's true pole (the CIP), which is 0.15 deg from the GCRS z axis in 2026 and moves; give `epoch` (ISO 8601, in `epoch_scale`, default UTC)",
+                model.as_str()
+            ),
+        )
+        .with_field(field)
+    })?;
+    Ok(
+        celestial_pole_fast(JulianDate::from_count_attos_since_j2000(tt.count_attos()))
+            .unit_vector_gcrs(),
+    )
+}
+
 fn state_answer(
     state: &StateInput,
     reference: RateReference,
@@ -278,7 +332,9 @@ fn state_answer(
         position_m: state.position_m,
         velocity_m_s: state.velocity_m_s,
     };
-    let rate = state_rate(&vector, reference, model).map_err(|e| origins.error(e))?;
+    let axis = figure_axis(state, frame, model, path)?;
+    let rate =
+        state_rate_about_axis(&vector, reference, model, axis).map_err(|e| origins.error(e))?;
     Ok((
         rate.parts,
         PeriodicAnswer {

@@ -3,7 +3,9 @@
 use serde::Deserialize;
 use utoipa::ToSchema;
 
-use crate::api::names::{FrameName, HeightReferenceName, PositionM, VelocityMS};
+use crate::api::names::{
+    FrameName, HeightReferenceName, InstantString, PositionM, ScaleName, VelocityMS,
+};
 pub use crate::api::names::{GravityModelName, ReferenceName};
 
 /// A geocentric state vector.
@@ -23,6 +25,14 @@ pub struct StateInput {
     /// Velocity [vx, vy, vz] in `frame`, metres per second (inertial speed below c).
     #[schema(value_type = VelocityMS)]
     pub velocity_m_s: [f64; 3],
+    /// The state's epoch, ISO 8601 in `epoch_scale`. Required for a GCRS state with the `j2` or
+    /// `grs80` model (their field is taken about the Celestial Intermediate Pole, which moves in
+    /// the GCRS: 422 `epoch_required` without it); accepted and unused otherwise.
+    #[schema(value_type = Option<InstantString>, example = "2026-05-20T00:00:00")]
+    pub epoch: Option<String>,
+    /// Scale of `epoch` (default UTC).
+    #[schema(value_type = Option<ScaleName>)]
+    pub epoch_scale: Option<String>,
 }
 
 /// A Keplerian orbit around the Earth (point mass). Give at most one anomaly; with one, the

@@ -7,7 +7,9 @@ use crate::physics::constants::{
 use crate::physics::geodesy::{
     is_deep_inside_earth, itrf_to_inertial_velocity_m_s, GRS80_SEMI_MINOR_AXIS_M,
 };
-use crate::physics::gravity::{dot, earth_potential_m2_s2, norm, GravityModel};
+use crate::physics::gravity::{
+    dot, earth_potential_m2_s2, norm, position_about_axis_m, GravityModel,
+};
 use crate::physics::rate::error::{require_finite_vector, RateError, RateErrorKind};
 use crate::physics::rate::{RateParts, RateReference};
 use crate::physics::readable::readable;
@@ -62,10 +64,10 @@ pub const STATE_NOTES: [&str; 2] = [
     "periodic.value_at_state_s = -2 (r . v)/c^2 (IS-GPS-200 20.3.3.3.3.1); periodic.amplitude_s is that of the osculating point-mass Keplerian orbit (IERS Conventions (2010) GM), absent when the state is not on a closed orbit above the Earth",
 ];
 /// The model note of [`state_rate`] with [`GravityModel::J2`].
-pub const STATE_J2_NOTE: &str = "J2 about the frame's z axis: exact for ITRF; for GCRS the precession-nutation tilt of the pole changes the rate by less than 3e-15 for low orbits";
+pub const STATE_J2_NOTE: &str = "J2 about the Earth's figure axis: the ITRF z axis (polar motion, below 1e-6 rad, not applied), or for GCRS the Celestial Intermediate Pole at the state's epoch (IAU 2006/2000A, IERS Conventions (2010) ch. 5, without dX, dY)";
 
 /// The model note of [`state_rate`] with [`GravityModel::Grs80`].
-pub const STATE_GRS80_NOTE: &str = "GRS80 normal field in closed form about the frame's z axis (Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)), with no disturbing potential and the GRS80 GM 3.986005e14 (1.5e-9 above the IERS Conventions (2010) GM, about 1e-16 of rate near the Earth): a state at rest on the ellipsoid gets (W0 - U0)/c^2 = -5.4e-17 where a ground_site (taken on the geoid) gets 0; for GCRS the pole's precession-nutation tilt applies as for j2";
+pub const STATE_GRS80_NOTE: &str = "GRS80 normal field in closed form about the Earth's figure axis (Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)), with no disturbing potential and the GRS80 GM 3.986005e14 (1.5e-9 above the IERS Conventions (2010) GM, about 1e-16 of rate near the Earth): a state at rest on the ellipsoid gets (W0 - U0)/c^2 = -5.4e-17 where a ground_site (taken on the geoid) gets 0; the axis is that of j2 (ITRF z axis, or the CIP at the state's epoch for GCRS)";
 
 /// Instantaneous fractional rate of a clock at a geocentric state (first post-Newtonian order).
 ///
@@ -90,6 +92,18 @@ pub fn state_rate(
     reference: RateReference,
     model: GravityModel,
 ) -> Result<StateRate, RateError> {
+    state_rate_about_axis(state, reference, model, [0.0, 0.0, 1.0])
+}
+
+/// [`state_rate`] with the Earth's figure axis along `axis_unit` (a unit vector in the state's
+/// frame; the CIP at the state's epoch for GCRS states): the zonal fields are evaluated at
+/// [`position_about_axis_m`].
+pub fn state_rate_about_axis(
+    state: &StateVector,
+    reference: RateReference,
+    model: GravityModel,
+    axis_unit: [f64; 3],
+) -> Result<StateRate, RateError> {
     let position_m = require_finite_vector("position_m", state.position_m)?;
     let velocity_m_s = require_finite_vector("velocity_m_s", state.velocity_m_s)?;
     validate_position(state.frame, position_m)?;
@@ -108,7 +122,8 @@ pub fn state_rate(
         )
         .with_kind(RateErrorKind::SpeedNotBelowC));
     }
-    let potential_m2_s2 = earth_potential_m2_s2(model, position_m)?;
+    let potential_m2_s2 =
+        earth_potential_m2_s2(model, position_about_axis_m(position_m, axis_unit))?;
     let parts =
         RateParts::from_speed_and_potential(reference, speed_m_s * speed_m_s, potential_m2_s2);
     Ok(StateRate {
