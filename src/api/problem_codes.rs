@@ -569,7 +569,11 @@ mod tests {
             TimeErrorKind::UnknownFormat.as_str(),
         ];
         expect("get", "/v1/earth/orientation", &orientation);
-        expect("post", "/v1/earth/orientation", &["empty_batch", "batch_too_large"]);
+        expect(
+            "post",
+            "/v1/earth/orientation",
+            &["empty_batch", "batch_too_large"],
+        );
         let paths = document["paths"].as_object().cloned().unwrap_or_default();
         let mut checked = 0;
         for (path, operations) in paths {
