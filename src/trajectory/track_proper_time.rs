@@ -45,6 +45,7 @@ fn from_physics(error: ProperTimeError, object: &str) -> TrajectoryError {
         line: None,
         object: Some(object.to_string()),
         index: error.index,
+        field: None,
     }
 }
 

@@ -6,11 +6,10 @@ use super::body::{ephemeris_problem, ProperTimeRequest};
 use super::types::{ObjectOutput, ProperTimeAnswer, SampleOutput, SummaryOutput};
 use crate::api::error::ApiError;
 use crate::api::time::types::InstantForms;
-use crate::physics::gravity::GravityModel;
 use crate::physics::proper_time::{
     relative_to_tcg, ProperTimeOptions, EARTH_FIXED_NOTE, INTEGRATION_NOTE, PERIODIC_NOTE,
 };
-use crate::physics::rate::{inertial_rate_function, RateReference, INERTIAL_J2_NOTE};
+use crate::physics::rate::{inertial_model_note, inertial_rate_function, RateReference};
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::formats::{day_reading, write_instant, write_iso, ISO_DECIMALS};
 use crate::physics::time::instant::Instant;
@@ -19,7 +18,7 @@ use crate::trajectory::track_proper_time::COORDINATE_TIME_NOTE;
 use crate::trajectory::{proper_time_of_ephemeris, Frame, TrackProperTime};
 
 fn model_notes(request: &ProperTimeRequest) -> Vec<String> {
-    let j2 = (request.gravity_model == GravityModel::J2).then_some(INERTIAL_J2_NOTE);
+    let j2 = inertial_model_note(request.gravity_model);
     [
         INTEGRATION_NOTE,
         COORDINATE_TIME_NOTE,

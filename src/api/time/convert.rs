@@ -1,13 +1,13 @@
 //! `GET` and `POST /v1/time/convert`.
 
 use axum::extract::State;
-use axum::http::{header, HeaderMap, StatusCode};
+use axum::http::{header, HeaderMap};
 use axum::response::{IntoResponse, Response};
 
 use super::conversion::{convert_one, FieldName};
 use super::csv::{self, CSV_CONTENT_TYPE};
 use super::forms::FormSelection;
-use super::json_view::{BatchJson, ConversionJson};
+use super::json_view::{conversion_bytes_hint, json_bytes, BatchJson, ConversionJson};
 use super::observer::{observer_from_input, parse_observer_query};
 use super::types::{Conversion, ConversionBatch, ConvertBatchRequest, ConvertQuery};
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, QueryProblems, TimeoutProblem};
@@ -39,11 +39,6 @@ fn parse_targets<'a>(
     }
     scales.dedup();
     Ok(scales)
-}
-
-fn json_bytes<T: serde::Serialize>(value: &T) -> Result<Vec<u8>, ApiError> {
-    serde_json::to_vec(value)
-        .map_err(|e| ApiError::new(StatusCode::INTERNAL_SERVER_ERROR, "internal", e.to_string()))
 }
 
 fn respond((content_type, body): (&'static str, Vec<u8>)) -> Response {
@@ -101,7 +96,10 @@ pub async fn convert_get(
     let written = match answer_type(&headers) {
         AnswerType::Json => (
             "application/json",
-            json_bytes(&ConversionJson(&converted, &forms))?,
+            json_bytes(
+                &ConversionJson(&converted, &forms),
+                conversion_bytes_hint(targets.len()),
+            )?,
         ),
         AnswerType::Csv => {
             let mut out = Vec::with_capacity(256);
@@ -177,7 +175,10 @@ pub async fn convert_post(
                     .collect::<Result<Vec<_>, _>>()?;
                 Ok((
                     "application/json",
-                    json_bytes(&BatchJson(&conversions, &forms))?,
+                    json_bytes(
+                        &BatchJson(&conversions, &forms),
+                        conversion_bytes_hint(targets.len()) * conversions.len(),
+                    )?,
                 ))
             }
             AnswerType::Csv => {

@@ -3,11 +3,13 @@
 //! form first. The documented types stay the schema; the tests below hold the two to the same
 //! bytes.
 
+use axum::http::StatusCode;
 use serde::ser::{SerializeMap, SerializeSeq};
 use serde::{Serialize, Serializer};
 
 use super::conversion::Converted;
 use super::forms::FormSelection;
+use crate::api::error::ApiError;
 use crate::physics::time::decimal::format_attos_as_seconds;
 use crate::physics::time::format_name::InstantFormat;
 use crate::physics::time::formats::InstantDigits;
@@ -111,6 +113,20 @@ impl Serialize for BatchJson<'_> {
         map.serialize_entry("conversions", &Items(self.0, self.1))?;
         map.end()
     }
+}
+
+/// Writes `value` as JSON into a buffer sized for `bytes_hint` bytes (an answer grown from
+/// serde_json's default 128 bytes is copied several times on the way).
+pub fn json_bytes<T: serde::Serialize>(value: &T, bytes_hint: usize) -> Result<Vec<u8>, ApiError> {
+    let mut out = Vec::with_capacity(bytes_hint);
+    serde_json::to_writer(&mut out, value)
+        .map_err(|e| ApiError::new(StatusCode::INTERNAL_SERVER_ERROR, "internal", e.to_string()))?;
+    Ok(out)
+}
+
+/// About the size of one conversion's JSON: 300 bytes per instant with every form.
+pub fn conversion_bytes_hint(targets: usize) -> usize {
+    300 * (targets + 1) + 64
 }
 
 #[cfg(test)]

@@ -131,6 +131,18 @@ pub struct MicrosecondsPerDay {
 /// The model note of [`inertial_rate_function`] with [`GravityModel::J2`].
 pub const INERTIAL_J2_NOTE: &str = "J2 potential with the IERS Conventions (2010) GM, J2 and a_E; the GCRS pole stands in for the Earth's axis for inertial tracks";
 
+/// The model note of [`inertial_rate_function`] with [`GravityModel::Grs80`].
+pub const INERTIAL_GRS80_NOTE: &str = "GRS80 normal field in closed form (every zonal term of the level ellipsoid; Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)) with the GRS80 GM 3.986005e14, 1.5e-9 above the IERS Conventions (2010) GM (about 1e-16 of rate near the Earth); the GCRS pole stands in for the Earth's axis for inertial tracks";
+
+/// The model note of an inertial rate with `model`, if it has one (J2 or GRS80).
+pub fn inertial_model_note(model: GravityModel) -> Option<&'static str> {
+    match model {
+        GravityModel::PointMass => None,
+        GravityModel::J2 => Some(INERTIAL_J2_NOTE),
+        GravityModel::Grs80 => Some(INERTIAL_GRS80_NOTE),
+    }
+}
+
 /// The rate function of a clock at an inertial geocentric state, for `reference` and `model`:
 /// `rate(position_m, velocity_m_s)` gives the (velocity, gravity) parts of d(tau)/dt - 1, i.e.
 /// `-v^2/(2c^2)` and `-U/c^2` (+ L_G against TT), IERS Conventions (2010) eq. 10.6 through
