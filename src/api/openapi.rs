@@ -28,6 +28,8 @@ use utoipa::{Modify, OpenApi};
         crate::api::signal::path::signal_path,
         crate::api::signal::two_way::two_way,
         crate::api::earth::eop::eop,
+        crate::api::earth::orientation::orientation_get,
+        crate::api::earth::orientation::orientation_post,
     ),
     components(schemas(
         crate::api::error::Problem,
@@ -45,7 +47,7 @@ use utoipa::{Modify, OpenApi};
         (name = "time", description = "Time scales: conversions, the scales, the leap-second table"),
         (name = "clock", description = "Clock rates against TT or TCG: state vectors, orbits, ground and lunar sites; comparisons between clocks"),
         (name = "signal", description = "Signal paths: light time with Sagnac, Shapiro and clock terms; two-way time-transfer Sagnac correction"),
-        (name = "earth", description = "Earth orientation: the IERS EOP table in force (UT1 - UTC, polar motion, celestial pole offsets, length of day) and its values at an instant")
+        (name = "earth", description = "Earth orientation: the IERS EOP table in force (UT1 - UTC, polar motion, celestial pole offsets, length of day) and its values at an instant; the Earth rotation angle, sidereal times, CIP and the GCRS <-> ITRS rotation (IAU 2006/2000A) at an instant")
     )
 )]
 pub struct ApiDoc;

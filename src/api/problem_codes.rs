@@ -571,6 +571,18 @@ mod tests {
                 EopLookupErrorKind::AfterTable.as_str(),
             ],
         );
+        let orientation = [
+            EopLookupErrorKind::BeforeTable.as_str(),
+            EopLookupErrorKind::AfterTable.as_str(),
+            TimeErrorKind::UnknownScale.as_str(),
+            TimeErrorKind::UnknownFormat.as_str(),
+        ];
+        expect("get", "/v1/earth/orientation", &orientation);
+        expect(
+            "post",
+            "/v1/earth/orientation",
+            &["empty_batch", "batch_too_large"],
+        );
         let paths = document["paths"].as_object().cloned().unwrap_or_default();
         let mut checked = 0;
         for (path, operations) in paths {

@@ -316,6 +316,54 @@ def two_way(api, m, document):
     assert answer.elevation_a_deg > answer.elevation_b_deg > 0.0, answer
 
 
+@operation("orientation_get")
+def orientation_get(api, m, document):
+    answer = expect(
+        api.call(
+            "orientation_get",
+            at="2015-06-29T00:00:00",
+            scale=m.ScaleName.UTC,
+            format_=m.InstantFormatName.ISO,
+            pole_offsets=False,
+        ),
+        200,
+    )
+    # pyerfa era00, gst06a at this instant with the IERS EOP 20 C04 values of MJD 57202
+    # (tests/reference/orientation_endpoint_erfa.csv, from its seeded script).
+    near(answer.ut1_minus_utc_s, -0.6753559, 1e-12, "UT1 - UTC of 2015-06-29 (C04)")
+    near(answer.era_rad, 4.8268706507516725, 1e-12, "ERA (pyerfa era00)")
+    near(answer.gast_rad, 4.830342314743621, 1e-12, "GAST (pyerfa gst06a)")
+    assert answer.eop.status == "observed" and answer.warnings == [], answer
+    # A rotation matrix times its transpose is the identity (from memory).
+    rows = answer.gcrs_to_itrs
+    for i in range(3):
+        for j in range(3):
+            dot = sum(rows[i][k] * rows[j][k] for k in range(3))
+            near(dot, 1.0 if i == j else 0.0, 1e-15, f"M M^T [{i}][{j}]")
+    # After the end of the predictions (2027-10-29, src/physics/earth/data/eop_README.md).
+    expect_problem(
+        api.call("orientation_get", at="2030-01-01T00:00:00"), 422, "eop_after_table", field="at"
+    )
+
+
+@operation("orientation_post")
+def orientation_post(api, m, document):
+    body = m.OrientationBatchRequest.from_dict(
+        {"epochs": ["2015-06-29T00:00:00", "2027-09-14T22:40:59.151291754"]}
+    )
+    batch = expect(api.call("orientation_post", body=body), 200)
+    observed, predicted = batch.orientations
+    # The built-in table is observed to 2026-10-22 and predicted after it (IERS Bulletin A
+    # flags, src/physics/earth/data/eop_README.md); a predicted answer warns with its error.
+    assert observed.eop.status == "observed", observed.eop
+    assert predicted.eop.status == "predicted", predicted.eop
+    assert any("x_p" in w and "mas" in w for w in predicted.warnings), predicted.warnings
+    body = m.OrientationBatchRequest.from_dict({"epochs": ["2026-03-14T06:30:00", "1961-01-01"]})
+    expect_problem(
+        api.call("orientation_post", body=body), 422, "eop_before_table", field="epochs[1]"
+    )
+
+
 @operation("metrics")
 def metrics(api, m, document):
     text = expect(api.call("metrics"), 200, "text/plain")

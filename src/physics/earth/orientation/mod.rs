@@ -13,6 +13,7 @@
 
 pub mod arguments;
 pub mod cio;
+pub mod epoch;
 pub mod fast;
 pub mod matrix;
 pub mod nutation;

@@ -1,6 +1,9 @@
 //! The fast path against the full series, and the vector rotations.
 
-use super::fast::{celestial_pole_fast, FIRST_INTERVAL_START_DAYS, INTERVAL_COUNT, INTERVAL_DAYS};
+use super::fast::{
+    cache_bound_bytes, celestial_pole_fast, fitted_interval_count, FIRST_INTERVAL_START_DAYS,
+    INTERVAL_COUNT, INTERVAL_DAYS,
+};
 use super::matrix::apply;
 use super::rotation::EARTH_ROTATION_RATE_RAD_S;
 use super::{celestial_pole_series, earth_orientation, JulianDate, J2000_JD};
@@ -123,4 +126,28 @@ fn rotations_of_positions_and_velocities() {
 #[test]
 fn earth_rotation_rate_is_erfa_value() {
     assert!((EARTH_ROTATION_RATE_RAD_S - 7.292_115_146_706_979e-5).abs() < 1e-18);
+}
+
+/// The fits stay bounded in a long-running process: never more fitted intervals than the span
+/// has, epochs far outside 1900-2200 answered by the full series itself (bit for bit, nothing
+/// kept), and the bound of the whole span below 7 MB (the module documents 6.4 MB).
+#[test]
+fn fit_cache_is_bounded() {
+    assert!(cache_bound_bytes() < 7_000_000, "{}", cache_bound_bytes());
+    let day = 9_500.5; // 2026-01-04 TT, inside one interval
+    celestial_pole_fast(JulianDate::new(J2000_JD, day));
+    let before = fitted_interval_count();
+    assert!(before >= 1);
+    for i in 0..200 {
+        celestial_pole_fast(JulianDate::new(J2000_JD, day + i as f64 * 1e-3));
+        celestial_pole_fast(JulianDate::new(J2000_JD, 1.0e6 + i as f64));
+        celestial_pole_fast(JulianDate::new(J2000_JD, -1.0e6 - i as f64));
+    }
+    // Other tests may fit intervals meanwhile, but never more than the span holds.
+    assert!(fitted_interval_count() <= INTERVAL_COUNT);
+    let tt = |d: f64| JulianDate::new(J2000_JD, d);
+    assert_eq!(
+        celestial_pole_fast(tt(1.0e6)),
+        celestial_pole_series(tt(1.0e6))
+    );
 }
