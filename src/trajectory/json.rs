@@ -91,6 +91,12 @@ pub fn from_document(
         .time_scale
         .parse()
         .map_err(|e| TrajectoryError::new("unknown_scale", format!("time_scale: {e}")))?;
+    if scale.needs_earth_orientation() {
+        return Err(TrajectoryError::new(
+            "unsupported_time_scale",
+            format!("time_scale: {scale} follows the Earth's rotation and is not taken for trajectories; give the epochs in UTC or a uniform scale (TAI, TT, TDB, GPST, ...)"),
+        ));
+    }
     let format = match &document.epoch_format {
         Some(name) => name
             .parse::<InstantFormat>()
@@ -125,7 +131,9 @@ pub fn from_document(
                 )
             })?;
             states.push(TrajectoryState {
-                epoch: to_storage(epoch, context),
+                epoch: to_storage(epoch, context).map_err(|e| {
+                    TrajectoryError::at_state("bad_epoch", &object.id, index, e.to_string())
+                })?,
                 position_m: state.position_m,
                 velocity_m_s: state.velocity_m_s,
             });

@@ -122,7 +122,8 @@ fn output_grid(
     if epochs_s.last().is_some_and(|t| *t < end_s) {
         epochs_s.push(end_s);
     }
-    let start_tt = to_tt_attos(&start, context);
+    let start_tt = to_tt_attos(&start, context)
+        .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(&track.id))?;
     let epochs = epochs_s
         .iter()
         .map(|t_s| {

@@ -104,6 +104,7 @@ pub fn convert_one(
             difference_attos,
         });
     }
+    warnings.extend(super::ut1_warning::ut1_warning(&input, targets, context));
     Ok(Converted {
         input: digits(&input, table, field)?,
         results,

@@ -24,7 +24,7 @@ fn parse_targets<'a>(
     let mut scales = Vec::new();
     for (index, name) in names.enumerate() {
         if name == ALL_SCALES {
-            scales.extend(Scale::ALL);
+            scales.extend(Scale::without_earth_orientation());
         } else {
             scales.push(parse_scale(name, &format!("{field}[{index}]"))?);
         }
@@ -67,7 +67,7 @@ const CSV_EXAMPLE: &str = "epoch,TAI_iso,TAI_j2000_s,TDB_iso,TDB_j2000_s,warning
             (Conversion = "application/json"),
             (String = "text/csv", example = json!(CSV_EXAMPLE)))),
         QueryProblems,
-        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales), not_finite, observer_not_on_ground", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales), ut1_outside_eop_table (UT1 asked for, or given, at an epoch the Earth orientation table does not cover: before 1962 or after the end of its predictions), not_finite, observer_not_on_ground", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn convert_get(
     State(state): State<AppState>,
@@ -84,10 +84,12 @@ pub async fn convert_get(
         .as_deref()
         .map(parse_observer_query)
         .transpose()?;
+    let eop = state.eop_table();
     let context = ConversionContext {
         table: &table,
         observer,
         tdb_evaluation: TdbEvaluation::Fitted,
+        ut1: Some(&*eop),
     };
     let converted = convert_one(&query.at, format, from, &targets, &context, "at")?;
     let written = match answer_type(&headers) {
@@ -136,6 +138,7 @@ pub async fn convert_post(
         .map(|o| observer_from_input(o, "observer"))
         .transpose()?;
     let table = state.leap_table();
+    let eop = state.eop_table();
     let items = request.epochs.len();
     let answer_type = answer_type(&headers);
     let work = move || {
@@ -143,6 +146,7 @@ pub async fn convert_post(
             table: &table,
             observer,
             tdb_evaluation: TdbEvaluation::Fitted,
+            ut1: Some(&*eop),
         };
         let convert_at = |index: usize, text: &str| {
             convert_one(

@@ -7,6 +7,7 @@ pub mod forms;
 pub mod observer;
 pub mod reference;
 pub mod types;
+pub mod ut1_warning;
 
 use axum::routing::get;
 use axum::Router;

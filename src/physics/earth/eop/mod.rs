@@ -25,6 +25,7 @@ mod finals;
 mod interp;
 mod snapshot;
 mod table;
+mod ut1;
 
 #[cfg(test)]
 mod tests_interp;
@@ -32,6 +33,8 @@ mod tests_interp;
 mod tests_readers;
 #[cfg(test)]
 mod tests_reference;
+#[cfg(test)]
+mod tests_ut1;
 
 pub use c04::parse_c04;
 pub use error::{EopErrorCode, EopFileError, EopLookupError, EopLookupErrorKind};
