@@ -60,19 +60,30 @@ fn unavailable(reason: &str) -> TimeError {
     ))
 }
 
-/// UT1 - UTC at the event of TAI count `tai_attos`, with the UTC reading's day and second.
+/// UT1 - UTC at the event of TAI count `tai_attos`.
 pub fn ut1_offset_at_tai(
     tai_attos: i128,
     leaps: &LeapTable,
     source: Option<&dyn Ut1Source>,
 ) -> Result<Ut1Offset, TimeError> {
+    offset_and_utc_reading(tai_attos, leaps, source).map(|(offset, _)| offset)
+}
+
+/// UT1 - UTC at the event of TAI count `tai_attos`, and the UTC reading's uniform count
+/// (86 400 s per day since J2000.0; a leap second shares the next day's first second).
+fn offset_and_utc_reading(
+    tai_attos: i128,
+    leaps: &LeapTable,
+    source: Option<&dyn Ut1Source>,
+) -> Result<(Ut1Offset, i128), TimeError> {
     let source = source.ok_or_else(|| unavailable("no Earth orientation table is given"))?;
     let (mjd, sod) = leaps
         .utc_from_tai(tai_attos)
         .map_err(|e| unavailable(&e.to_string()))?;
-    source
+    let offset = source
         .ut1_minus_utc(leaps, mjd, sod)
-        .map_err(|reason| unavailable(&reason))
+        .map_err(|reason| unavailable(&reason))?;
+    Ok((offset, uniform_count_attos(mjd, sod)))
 }
 
 /// UT1 - TAI in attoseconds at TAI count `tai_attos`: UT1 = UTC + (UT1 - UTC) with the UTC
@@ -82,11 +93,7 @@ pub fn ut1_minus_tai_attos(
     leaps: &LeapTable,
     source: Option<&dyn Ut1Source>,
 ) -> Result<i128, TimeError> {
-    let offset = ut1_offset_at_tai(tai_attos, leaps, source)?;
-    let (mjd, sod) = leaps
-        .utc_from_tai(tai_attos)
-        .map_err(|e| unavailable(&e.to_string()))?;
-    let utc_reading = uniform_count_attos(mjd, sod);
+    let (offset, utc_reading) = offset_and_utc_reading(tai_attos, leaps, source)?;
     Ok(utc_reading + seconds_f64_to_attos(offset.ut1_minus_utc_s) - tai_attos)
 }
 
@@ -149,12 +156,11 @@ fn start_guess(
         .tai_from_utc(reading.mjd, reading.seconds_of_day_attos)
         .map_err(|e| unavailable(&e.to_string()))?;
     let margin = MAX_UT1_MINUS_UTC_ATTOS;
-    let first = ut1_minus_tai_attos(tai, leaps, source);
-    if first.is_ok() {
-        return Ok(tai);
+    match ut1_minus_tai_attos(tai, leaps, source) {
+        Ok(_) => Ok(tai),
+        Err(error) => [tai + margin, tai - margin]
+            .into_iter()
+            .find(|candidate| ut1_minus_tai_attos(*candidate, leaps, source).is_ok())
+            .ok_or(error),
     }
-    [tai + margin, tai - margin]
-        .into_iter()
-        .find(|candidate| ut1_minus_tai_attos(*candidate, leaps, source).is_ok())
-        .ok_or_else(|| first.err().unwrap_or_else(|| unavailable("no value")))
 }
