@@ -133,34 +133,39 @@ pub(crate) fn solve_tai_from_ut1(
     leaps: &LeapTable,
     source: Option<&dyn Ut1Source>,
 ) -> Result<(i128, usize), TimeError> {
-    let mut tai = start_guess(ut1_attos, leaps, source)?;
+    let (mut tai, mut ut1_minus_tai) = start_guess(ut1_attos, leaps, source)?;
     for steps in 0..UT1_INVERSE_MAX_ITERATIONS {
-        let next = ut1_attos - ut1_minus_tai_attos(tai, leaps, source)?;
+        let next = ut1_attos - ut1_minus_tai;
         if next == tai {
             return Ok((tai, steps));
         }
         tai = next;
+        ut1_minus_tai = ut1_minus_tai_attos(tai, leaps, source)?;
     }
     Ok((tai, UT1_INVERSE_MAX_ITERATIONS))
 }
 
 /// The start of [`tai_from_ut1_attos`]: the TAI count of the UTC reading equal to the UT1
-/// reading, or 0.9 s after or before it, the first the source covers.
+/// reading, or 0.9 s after or before it, the first the source covers; with UT1 - TAI there.
 fn start_guess(
     ut1_attos: i128,
     leaps: &LeapTable,
     source: Option<&dyn Ut1Source>,
-) -> Result<i128, TimeError> {
+) -> Result<(i128, i128), TimeError> {
     let reading = uniform_day_reading(ut1_attos);
     let tai = leaps
         .tai_from_utc(reading.mjd, reading.seconds_of_day_attos)
         .map_err(|e| unavailable(&e.to_string()))?;
     let margin = MAX_UT1_MINUS_UTC_ATTOS;
     match ut1_minus_tai_attos(tai, leaps, source) {
-        Ok(_) => Ok(tai),
+        Ok(value) => Ok((tai, value)),
         Err(error) => [tai + margin, tai - margin]
             .into_iter()
-            .find(|candidate| ut1_minus_tai_attos(*candidate, leaps, source).is_ok())
+            .find_map(|candidate| {
+                ut1_minus_tai_attos(candidate, leaps, source)
+                    .ok()
+                    .map(|value| (candidate, value))
+            })
             .ok_or(error),
     }
 }
