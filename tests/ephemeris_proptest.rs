@@ -65,7 +65,7 @@ fn read_and_integrate(
             &InterpolationOptions::default(),
             &ProperTimeOptions::default(),
             &context,
-            rate,
+            |_| rate,
         );
     }
 }

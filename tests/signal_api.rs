@@ -105,10 +105,11 @@ async fn moving_navigation_satellite_converges_with_a_clock_term() {
     let answer = path(
         &server,
         json!({"frame": "ITRF", "position_m": [15_600_000.0, 7_540_000.0, 20_140_000.0],
-               "velocity_m_s": [-2000.0, 2800.0, 500.0]}),
+               "velocity_m_s": [-2000.0, 2800.0, 500.0], "motion": "uniform"}),
         json!({"ground_site": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0}}),
     )
     .await;
+    // Uniform motion keeps the given velocity at emission, so the clock term below is exact.
     // Common practice: the GNSS light-time iteration converges in a few steps, and MEO light
     // times lie between 0.067 s (zenith) and 0.086 s (horizon).
     let iterations = answer["iterations"].as_u64().unwrap_or(99);
@@ -186,6 +187,62 @@ async fn two_way_transatlantic_magnitude() {
 }
 
 #[tokio::test]
+async fn a_free_falling_satellite_moves_by_its_acceleration_over_the_flight() {
+    // The default motion of a transmitter with a velocity is free fall: over the 0.07 s flight
+    // it departs from the straight line by a tau^2/2, at most about 1.9 mm for a navigation
+    // satellite (independent review; a about 0.6 m/s^2 in the rotating frame too, with the
+    // Coriolis and centrifugal terms): the light time changes by at most that over c, and by
+    // more than 0.1 mm here (the satellite's acceleration has a large line-of-sight part).
+    let server = TestServer::start().await;
+    let satellite = |motion: Option<&str>| {
+        let mut endpoint = json!({"frame": "ITRF",
+            "position_m": [15_600_000.0, 7_540_000.0, 20_140_000.0],
+            "velocity_m_s": [-2000.0, 2800.0, 500.0]});
+        if let Some(motion) = motion {
+            endpoint["motion"] = json!(motion);
+        }
+        endpoint
+    };
+    let site =
+        json!({"ground_site": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0}});
+    let default = path(&server, satellite(None), site.clone()).await;
+    let free = path(&server, satellite(Some("free_fall")), site.clone()).await;
+    let uniform = path(&server, satellite(Some("uniform")), site).await;
+    assert_eq!(default["light_time_s"], free["light_time_s"]);
+    let change_m = (number(&free["light_time_s"]) - number(&uniform["light_time_s"])).abs() * C_M_S;
+    println!("free fall - uniform light time (ITRF satellite): {change_m:.4e} m");
+    assert!((1.0e-4..1.9e-3).contains(&change_m), "{change_m:e} m");
+}
+
+#[tokio::test]
+async fn the_same_free_falling_satellite_in_gcrs_and_itrf_has_one_light_time() {
+    // The ITRF axes taken as the GCRS ones at reception: v_GCRS = v_ITRF + omega x r (IERS
+    // Conventions (2010) table 1.1 omega_E); the receiver is at the same point at reception,
+    // so the light time is the same (to 1 ps, the bound; the iteration converges to
+    // 1e-15 s).
+    let server = TestServer::start().await;
+    let omega = 7.292_115e-5;
+    let r = [15_600_000.0, 7_540_000.0, 20_140_000.0];
+    let v = [-2000.0, 2800.0, 500.0];
+    let receiver = [4_383_000.0, 868_000.0, 4_564_000.0];
+    let itrf = path(
+        &server,
+        json!({"frame": "ITRF", "position_m": r, "velocity_m_s": v}),
+        json!({"frame": "ITRF", "position_m": receiver}),
+    )
+    .await;
+    let gcrs = path(
+        &server,
+        json!({"frame": "GCRS", "position_m": r,
+               "velocity_m_s": [v[0] - omega * r[1], v[1] + omega * r[0], v[2]]}),
+        json!({"frame": "GCRS", "position_m": receiver}),
+    )
+    .await;
+    let difference_s = number(&itrf["light_time_s"]) - number(&gcrs["light_time_s"]);
+    assert!(difference_s.abs() < 1e-12, "{difference_s:e} s");
+}
+
+#[tokio::test]
 async fn bad_inputs_are_422_problems_naming_the_field() {
     // Input validation (common practice; api_conventions: 422 with the field at fault).
     let server = TestServer::start().await;
@@ -250,6 +307,30 @@ async fn bad_inputs_are_422_problems_naming_the_field() {
             request(&json!({"position_m": [NAV_RADIUS_M, 0.0, 0.0]}), &ground),
             "invalid_endpoint",
             "transmitter.frame",
+        ),
+        (
+            request(
+                &json!({"frame": "GCRS", "position_m": [NAV_RADIUS_M, 0.0, 0.0], "velocity_m_s": [0.0, 3000.0, 0.0], "motion": "ballistic"}),
+                &ground,
+            ),
+            "unknown_motion",
+            "transmitter.motion",
+        ),
+        (
+            request(
+                &json!({"frame": "GCRS", "position_m": [NAV_RADIUS_M, 0.0, 0.0], "motion": "uniform"}),
+                &ground,
+            ),
+            "invalid_endpoint",
+            "transmitter.motion",
+        ),
+        (
+            request(
+                &sat,
+                &json!({"frame": "GCRS", "position_m": [GROUND_M, 0.0, 0.0], "velocity_m_s": [0.0, 0.0, 0.0], "motion": "uniform"}),
+            ),
+            "invalid_endpoint",
+            "receiver.motion",
         ),
         (
             request(

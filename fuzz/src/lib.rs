@@ -67,6 +67,6 @@ where
         &InterpolationOptions::default(),
         &ProperTimeOptions::default(),
         &context,
-        rate,
+        |_| rate,
     );
 }

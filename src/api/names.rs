@@ -14,6 +14,7 @@ use utoipa::{PartialSchema, ToSchema};
 use crate::api::error::ApiError;
 use crate::physics::constants::{MAX_GEOCENTRIC_DISTANCE_M, SPEED_OF_LIGHT_M_S};
 use crate::physics::rate::{Frame, GravityModel, HeightReference, RateReference};
+use crate::physics::signal::TransmitterMotion;
 use crate::physics::time::error::TimeError;
 use crate::physics::time::formats::InstantFormat;
 use crate::physics::time::scale::Scale;
@@ -277,6 +278,23 @@ impl PartialSchema for HeightReferenceName {
 impl ToSchema for HeightReferenceName {
     fn name() -> Cow<'static, str> {
         Cow::Borrowed("HeightReferenceName")
+    }
+}
+
+/// Schema of a transmitter motion name.
+pub struct TransmitterMotionName;
+
+impl PartialSchema for TransmitterMotionName {
+    fn schema() -> RefOr<Schema> {
+        vocabulary_schema::<TransmitterMotion>(
+            "`free_fall` (in the Earth's point-mass plus J2 field: a satellite) or `uniform` (straight at constant velocity in the endpoint's frame).",
+        )
+    }
+}
+
+impl ToSchema for TransmitterMotionName {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("TransmitterMotionName")
     }
 }
 

@@ -164,7 +164,7 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     ),
     (
         "unknown_gravity_model",
-        "The gravity model is not `point_mass` or `j2`.",
+        "The gravity model is not `point_mass`, `j2` or `grs80`.",
     ),
     (
         RateErrorKind::UnsupportedGravityModel.as_str(),
@@ -173,6 +173,10 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     (
         "unknown_frame",
         "The frame is not one the endpoint takes (`GCRS` inertial or `ITRF` Earth-fixed).",
+    ),
+    (
+        "unknown_motion",
+        "The transmitter motion is not `free_fall` (a satellite) or `uniform` (anything else given with a velocity).",
     ),
     (
         "unknown_height_reference",
@@ -502,6 +506,7 @@ mod tests {
         check::<GravityModel>("unknown_gravity_model");
         check::<Frame>("unknown_frame");
         check::<HeightReference>("unknown_height_reference");
+        check::<crate::physics::signal::TransmitterMotion>("unknown_motion");
     }
 
     #[test]

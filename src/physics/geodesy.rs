@@ -67,7 +67,7 @@ pub fn require_height_m(field: &'static str, height_m: f64) -> Result<f64, RateE
     if height_m > MAX_SITE_HEIGHT_M {
         return Err(RateError::new(
             field,
-            format!("must be at most {MAX_SITE_HEIGHT_M} m for a site fixed to the body, got {height_m}", height_m = readable(height_m)),
+            format!("must be at most {MAX_SITE_HEIGHT_M} m for a site fixed to the body (give a `state` for a clock farther out), got {height_m}", height_m = readable(height_m)),
         )
         .with_kind(RateErrorKind::BeyondModelRange));
     }

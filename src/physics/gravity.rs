@@ -8,6 +8,7 @@
 use crate::physics::constants::{
     EARTH_ROTATION_RAD_S, EQUATORIAL_RADIUS_EARTH_M, GM_EARTH_M3_S2, GM_MOON_M3_S2, J2_EARTH,
 };
+use crate::physics::earth::normal_field::grs80_normal_gravitational_potential_m2_s2;
 use crate::physics::rate_error::{require_finite, require_finite_vector, RateError, RateErrorKind};
 use crate::physics::readable::readable;
 use crate::physics::vocabulary::vocabulary;
@@ -75,6 +76,19 @@ pub fn earth_j2_potential_m2_s2(position_m: [f64; 3]) -> Result<f64, RateError> 
     Ok(GM_EARTH_M3_S2 / r_m * (1.0 - J2_EARTH * ratio * ratio * p2))
 }
 
+/// The position in a frame whose z axis is `axis_unit` (a unit vector in the position's frame),
+/// for fields symmetric about that axis: `[rho, 0, z']` with `z' = r . axis` and
+/// `rho = sqrt(r^2 - z'^2)`, so that |r| and the latitude about the axis are kept.
+///
+/// Used to evaluate the Earth's zonal fields (J2, GRS80) about the Celestial Intermediate Pole
+/// for GCRS positions: in the GCRS the CIP is the unit vector (X, Y, sqrt(1 - X^2 - Y^2))
+/// (IERS Conventions (2010) sec. 5.4.4).
+pub fn position_about_axis_m(position_m: [f64; 3], axis_unit: [f64; 3]) -> [f64; 3] {
+    let along_m = dot(position_m, axis_unit);
+    let across_squared_m2 = (dot(position_m, position_m) - along_m * along_m).max(0.0);
+    [across_squared_m2.sqrt(), 0.0, along_m]
+}
+
 /// Earth point-mass potential with the IERS Conventions (2010) table 1.1 GM (TCG-compatible).
 pub fn earth_point_mass_potential_m2_s2(position_m: [f64; 3]) -> Result<f64, RateError> {
     point_mass_potential_m2_s2(GM_EARTH_M3_S2, position_m)
@@ -101,14 +115,24 @@ vocabulary! {
         PointMass = "point_mass",
         /// U = GM/r (1 - J2 (a_E/r)^2 P2(sin phi)).
         J2 = "j2",
+        /// The GRS80 normal field in closed form: the potential of the level ellipsoid with
+        /// every zonal term (Heiskanen & Moritz 1967 eq. 2-126; Moritz 2000), the default for
+        /// ground sites.
+        Grs80 = "grs80",
     }
 }
 
-/// The Earth's Newtonian potential U(x) for the chosen model (m^2/s^2).
+/// The Earth's Newtonian potential U(x) for the chosen model (m^2/s^2). For
+/// [`GravityModel::Grs80`] the attraction of the GRS80 level ellipsoid, V = U_normal - Phi
+/// (no disturbing potential: T = 0); `position_m` has the Earth's axis as z, as for J2.
 pub fn earth_potential_m2_s2(model: GravityModel, position_m: [f64; 3]) -> Result<f64, RateError> {
     match model {
         GravityModel::PointMass => earth_point_mass_potential_m2_s2(position_m),
         GravityModel::J2 => earth_j2_potential_m2_s2(position_m),
+        GravityModel::Grs80 => {
+            distance_m("position_m", position_m)?;
+            grs80_normal_gravitational_potential_m2_s2(position_m)
+        }
     }
 }
 

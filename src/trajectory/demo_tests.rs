@@ -38,7 +38,7 @@ fn demo_files_give_the_expected_rates() {
             &InterpolationOptions::default(),
             &ProperTimeOptions::default(),
             &context,
-            rate_tt,
+            |_| rate_tt,
         )
         .unwrap_or_else(|e| panic!("{e}"))
     };

@@ -17,6 +17,8 @@ pub struct TrajectoryError {
     pub object: Option<String>,
     /// 0-based index of the state within the object's track.
     pub index: Option<usize>,
+    /// The member of a JSON document at fault (`frame`, `time_scale`, `epoch_format`).
+    pub field: Option<&'static str>,
 }
 
 impl TrajectoryError {
@@ -28,7 +30,14 @@ impl TrajectoryError {
             line: None,
             object: None,
             index: None,
+            field: None,
         }
+    }
+
+    /// The same error, attributed to a member of a JSON document.
+    pub fn with_field(mut self, field: &'static str) -> Self {
+        self.field = Some(field);
+        self
     }
 
     /// An error at a line of the input.

@@ -16,22 +16,41 @@ use super::error::TrajectoryError;
 use super::text::to_storage;
 use super::{Frame, ObjectTrack, TrajectorySet, TrajectoryState};
 use crate::physics::time::convert::ConversionContext;
+use crate::physics::time::error::TimeError;
 use crate::physics::time::formats::{parse_instant, InstantFormat};
 use crate::physics::time::scale::Scale;
 
-/// The document as sent.
+/// The document as sent. `O` is what a layer that embeds the document in a request reads from
+/// its `options` member (the HTTP API's computation options); a file read by [`read_json`]
+/// takes none ([`NoOptions`]). This is the one type of the JSON ephemeris: the API reads its
+/// bodies into it and documents it with a schema-only twin that a test holds to these fields.
 #[derive(Debug, Clone, Deserialize)]
-#[serde(deny_unknown_fields)]
-pub struct JsonEphemeris {
-    /// Frame name (GCRF, EME2000, ICRF, ITRF...).
+#[serde(deny_unknown_fields, bound(deserialize = "O: Deserialize<'de>"))]
+pub struct JsonEphemeris<O = NoOptions> {
+    /// Frame name (GCRF, GCRS, EME2000, ICRF, ITRF...), written exactly.
     pub frame: String,
-    /// Time scale of the epochs.
+    /// Time scale of the epochs, written exactly.
     pub time_scale: String,
-    /// Instant format of the epochs (default `iso`).
+    /// Instant format of the epochs (default `iso`), written exactly.
     #[serde(default)]
     pub epoch_format: Option<String>,
     /// The objects.
     pub objects: Vec<JsonObject>,
+    /// What the embedding layer reads (absent in files).
+    #[serde(default)]
+    pub options: Option<O>,
+}
+
+/// The `options` of a document read as a file: none may be given.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum NoOptions {}
+
+impl<'de> Deserialize<'de> for NoOptions {
+    fn deserialize<D: serde::Deserializer<'de>>(_: D) -> Result<Self, D::Error> {
+        Err(serde::de::Error::custom(
+            "`options` are request options of the HTTP API, not part of an ephemeris file",
+        ))
+    }
 }
 
 /// One object of the document.
@@ -62,7 +81,7 @@ pub fn read_json(
     text: &str,
     context: &ConversionContext<'_>,
 ) -> Result<TrajectorySet, TrajectoryError> {
-    let document: JsonEphemeris = serde_json::from_str(text).map_err(|error| {
+    let document: JsonEphemeris<NoOptions> = serde_json::from_str(text).map_err(|error| {
         TrajectoryError::at_line(
             "json_invalid",
             error.line(),
@@ -73,8 +92,10 @@ pub fn read_json(
 }
 
 /// Converts an already deserialized document (for an HTTP layer that embeds it in a request).
-pub fn from_document(
-    document: &JsonEphemeris,
+/// Names are read exactly as written (the spellings the API documents); a wrong one is an
+/// error naming its member.
+pub fn from_document<O>(
+    document: &JsonEphemeris<O>,
     context: &ConversionContext<'_>,
 ) -> Result<TrajectorySet, TrajectoryError> {
     let frame = Frame::from_name(&document.frame).ok_or_else(|| {
@@ -86,21 +107,27 @@ pub fn from_document(
                 Frame::names_in_words()
             ),
         )
+        .with_field("frame")
     })?;
-    let scale: Scale = document
-        .time_scale
-        .parse()
-        .map_err(|e| TrajectoryError::new("unknown_scale", format!("time_scale: {e}")))?;
+    let time_error = |error: TimeError, field: &'static str| {
+        TrajectoryError::new(error.code(), error.to_string()).with_field(field)
+    };
+    let scale = Scale::from_name(&document.time_scale).ok_or_else(|| {
+        time_error(
+            TimeError::UnknownScale(document.time_scale.clone()),
+            "time_scale",
+        )
+    })?;
     if scale.needs_earth_orientation() {
         return Err(TrajectoryError::new(
             "unsupported_time_scale",
             format!("time_scale: {scale} follows the Earth's rotation and is not taken for trajectories; give the epochs in UTC or a uniform scale (TAI, TT, TDB, GPST, ...)"),
-        ));
+        )
+        .with_field("time_scale"));
     }
     let format = match &document.epoch_format {
-        Some(name) => name
-            .parse::<InstantFormat>()
-            .map_err(|e| TrajectoryError::new("unknown_format", format!("epoch_format: {e}")))?,
+        Some(name) => InstantFormat::from_name(name)
+            .ok_or_else(|| time_error(TimeError::UnknownFormat(name.clone()), "epoch_format"))?,
         None => InstantFormat::Iso,
     };
     let mut objects = Vec::with_capacity(document.objects.len());

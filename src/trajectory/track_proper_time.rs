@@ -45,6 +45,7 @@ fn from_physics(error: ProperTimeError, object: &str) -> TrajectoryError {
         line: None,
         object: Some(object.to_string()),
         index: error.index,
+        field: None,
     }
 }
 
@@ -134,16 +135,26 @@ fn output_grid(
     Ok((epochs_s, epochs))
 }
 
+/// TT (attoseconds since J2000.0) half-way between a track's first and last epochs; `None`
+/// without states, or when an epoch has no TT (only UT1 outside the EOP table can fail, and
+/// the readers refuse UT1 tracks).
+pub fn middle_tt_attos(track: &ObjectTrack, context: &ConversionContext<'_>) -> Option<i128> {
+    let first = to_tt_attos(&track.states.first()?.epoch, context).ok()?;
+    let last = to_tt_attos(&track.states.last()?.epoch, context).ok()?;
+    Some(first + (last - first) / 2)
+}
+
 /// Integrates every track of an ephemeris (see [`proper_time_of_track`]); stops at the first
 /// error, which names the object.
-pub fn proper_time_of_ephemeris<R>(
+pub fn proper_time_of_ephemeris<F, R>(
     ephemeris: &TrajectorySet,
     interpolation: &InterpolationOptions,
     options: &ProperTimeOptions,
     context: &ConversionContext<'_>,
-    rate: R,
+    rate_for_track: F,
 ) -> Result<Vec<TrackProperTime>, TrajectoryError>
 where
+    F: Fn(&ObjectTrack) -> R,
     R: Fn(&[f64; 3], &[f64; 3]) -> (f64, f64),
 {
     if ephemeris.objects.is_empty() {
@@ -155,6 +166,9 @@ where
     ephemeris
         .objects
         .iter()
-        .map(|track| proper_time_of_track(track, interpolation, options, context, &rate))
+        .map(|track| {
+            let rate = rate_for_track(track);
+            proper_time_of_track(track, interpolation, options, context, &rate)
+        })
         .collect()
 }

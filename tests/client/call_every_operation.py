@@ -163,6 +163,23 @@ def convert_post(api, m, document):
     expect_problem(api.call("convert_post", body=body), 422, "impossible_date", field="epochs[1]")
 
 
+@operation("eop")
+def eop(api, m, document):
+    table = expect(api.call("eop"), 200)
+    assert table.source and table.day_count > 0, table
+    answer = expect(api.call("eop", at="2026-10-01T00:00:00Z"), 200)
+    values = answer.at
+    # IERS Bulletin A (finals2000A.all, astropy-iers-data 0.2026.11.2.0.34.55), MJD 61314:
+    # UT1 - UTC = -0.0225232 s, x_p = 0.174596", y_p = 0.325269" (observed, flag I); the line
+    # is committed as tests/reference/eop_finals2000A_2026_2027.all line 62.
+    assert values.status == "observed", values
+    assert abs(values.ut1_minus_utc_s - -0.0225232) < 1e-9, values.ut1_minus_utc_s
+    assert abs(values.xp_arcsec - 0.174596) < 1e-9, values.xp_arcsec
+    assert abs(values.yp_arcsec - 0.325269) < 1e-9, values.yp_arcsec
+    # Before the table (it starts 1962-01-01 with IERS EOP 20 C04): a 422 naming `at`.
+    expect_problem(api.call("eop", at="1961-06-01T00:00:00Z"), 422, "eop_before_table", field="at")
+
+
 @operation("rate")
 def rate(api, m, document):
     body = m.RateRequest.from_dict(

@@ -61,8 +61,9 @@ pub struct RateAnswer {
     pub subject: String,
     /// The reference scale: `TT` or `TCG`.
     pub reference: String,
-    /// The model actually used: `point_mass`, `j2`, or `grs80_normal_gravity` (ground sites
-    /// with heights above the geoid).
+    /// The model actually used: `point_mass`, `j2`, `grs80` (the default for ground sites with
+    /// ellipsoidal heights), or `grs80_normal_gravity` (ground sites with heights above the
+    /// geoid).
     pub gravity_model: String,
     /// Fractional rate d(tau)/dt - 1 (dimensionless). Positive = the clock runs fast relative
     /// to the reference.

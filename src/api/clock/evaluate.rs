@@ -68,7 +68,7 @@ pub fn parse_reference(text: &str, field: &str) -> Result<RateReference, ApiErro
     parse_named(text, "unknown_reference", "reference", field)
 }
 
-/// Reads `point_mass` or `j2` (written exactly so); 422 `unknown_gravity_model` naming `field`.
+/// Reads `point_mass`, `j2` or `grs80` (written exactly so); 422 `unknown_gravity_model` naming `field`.
 pub fn parse_gravity_model(text: &str, field: &str) -> Result<GravityModel, ApiError> {
     parse_named(text, "unknown_gravity_model", "gravity model", field)
 }
@@ -197,6 +197,10 @@ pub fn evaluate_item(
                     notes.push(notes::ORBIT_REQUEST_J2.to_string());
                     GravityModel::PointMass
                 }
+                (None, Some(GravityModel::Grs80)) => {
+                    notes.push(notes::ORBIT_REQUEST_GRS80.to_string());
+                    GravityModel::PointMass
+                }
                 _ => GravityModel::PointMass,
             };
             let (parts, periodic, inclination) =
@@ -217,7 +221,9 @@ pub fn evaluate_item(
                 height_m: site.height_m.unwrap_or(0.0),
             };
             let parts = lunar_site_rate(&lunar, reference).map_err(|e| origins.error(e))?;
-            notes.extend(notes::lunar(requested_model == Some(GravityModel::J2)));
+            notes.extend(notes::lunar(
+                requested_model.is_some_and(|m| m != GravityModel::PointMass),
+            ));
             (parts, "point_mass", None, None)
         }
     };
@@ -347,7 +353,7 @@ fn ground_answer(
             format!("{path}.ground_site.height_reference"),
         )?,
     };
-    let model = requested_model.unwrap_or(GravityModel::J2);
+    let model = requested_model.unwrap_or(GravityModel::Grs80);
     let height = height_reference.height(site.height_m);
     let label = match height_reference {
         HeightReference::Geoid => "grs80_normal_gravity",

@@ -6,9 +6,10 @@ use crate::physics::gravity::GravityModel;
 use crate::physics::rate::ground::{ground_height_note, GROUND_NOTE};
 use crate::physics::rate::lunar::{LUNAR_EARTH_J2_NOTE, LUNAR_NOTES};
 use crate::physics::rate::orbit::ORBIT_NOTES;
-use crate::physics::rate::state::{STATE_J2_NOTE, STATE_NOTES};
+use crate::physics::rate::state::{STATE_GRS80_NOTE, STATE_J2_NOTE, STATE_NOTES};
 use crate::physics::rate::{HeightReference, FIRST_ORDER_NOTE};
 
+pub use crate::physics::rate::orbit::ORBIT_GRS80_NOT_APPLIED_NOTE as ORBIT_REQUEST_GRS80;
 pub use crate::physics::rate::orbit::ORBIT_J2_NOT_APPLIED_NOTE as ORBIT_REQUEST_J2;
 
 fn owned<'a>(notes: impl IntoIterator<Item = &'a str>) -> Vec<String> {
@@ -17,7 +18,11 @@ fn owned<'a>(notes: impl IntoIterator<Item = &'a str>) -> Vec<String> {
 
 /// Notes for a state vector.
 pub fn state(model: GravityModel) -> Vec<String> {
-    let j2 = (model == GravityModel::J2).then_some(STATE_J2_NOTE);
+    let j2 = match model {
+        GravityModel::PointMass => None,
+        GravityModel::J2 => Some(STATE_J2_NOTE),
+        GravityModel::Grs80 => Some(STATE_GRS80_NOTE),
+    };
     owned(
         std::iter::once(FIRST_ORDER_NOTE)
             .chain(STATE_NOTES)

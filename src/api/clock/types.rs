@@ -114,8 +114,8 @@ pub struct RateItem {
     /// Reference scale for this clock (`TT` or `TCG`); overrides the request's.
     #[schema(value_type = Option<ReferenceName>)]
     pub reference: Option<String>,
-    /// Gravity model for this clock (`point_mass` or `j2`); overrides the request's. Orbits
-    /// offer only `point_mass`.
+    /// Gravity model for this clock (`point_mass`, `j2` or `grs80`); overrides the request's.
+    /// Orbits offer only `point_mass`.
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
     /// Nominal oscillator frequency for this clock, Hz, in (0, 9e15]; overrides the request's.
@@ -144,10 +144,11 @@ pub struct RateRequest {
     /// Reference scale for every item without its own: `TT` (default) or `TCG`.
     #[schema(value_type = Option<ReferenceName>)]
     pub reference: Option<String>,
-    /// Gravity model for every item without its own: `point_mass` or `j2`. Without any, ground
-    /// sites (ellipsoidal height) use `j2` (a point-mass Earth is off by up to about 7e-13 on the
-    /// ground) and the other subjects `point_mass`. Orbits always use `point_mass` (a
-    /// request-level `j2` does not apply to them; their answer says so); the Earth's J2 is
+    /// Gravity model for every item without its own: `point_mass`, `j2` or `grs80` (the GRS80
+    /// normal field in closed form). Without any, ground sites (ellipsoidal height) use `grs80`
+    /// (`j2` is off by up to 1.8e-15 and a point-mass Earth by up to about 7e-13 on the ground)
+    /// and the other subjects `point_mass`. Orbits always use `point_mass` (a request-level
+    /// `j2` or `grs80` does not apply to them; their answer says so); the Earth's flattening is
     /// below 1e-17 of rate at the Moon.
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,

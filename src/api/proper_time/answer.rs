@@ -6,20 +6,24 @@ use super::body::{ephemeris_problem, ProperTimeRequest};
 use super::types::{ObjectOutput, ProperTimeAnswer, SampleOutput, SummaryOutput};
 use crate::api::error::ApiError;
 use crate::api::time::types::InstantForms;
-use crate::physics::gravity::GravityModel;
+use crate::physics::earth::orientation::fast::celestial_pole_fast;
+use crate::physics::earth::orientation::JulianDate;
 use crate::physics::proper_time::{
     relative_to_tcg, ProperTimeOptions, EARTH_FIXED_NOTE, INTEGRATION_NOTE, PERIODIC_NOTE,
 };
-use crate::physics::rate::{inertial_rate_function, RateReference, INERTIAL_J2_NOTE};
+use crate::physics::rate::{
+    inertial_model_note, inertial_rate_function_about_axis, RateReference, TRACK_POLE_NOTE,
+};
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::formats::{day_reading, write_instant, write_iso, ISO_DECIMALS};
 use crate::physics::time::instant::Instant;
 use crate::physics::time::leap_seconds::LeapTable;
+use crate::trajectory::track_proper_time::middle_tt_attos;
 use crate::trajectory::track_proper_time::COORDINATE_TIME_NOTE;
-use crate::trajectory::{proper_time_of_ephemeris, Frame, TrackProperTime};
+use crate::trajectory::{proper_time_of_ephemeris, Frame, ObjectTrack, TrackProperTime};
 
 fn model_notes(request: &ProperTimeRequest) -> Vec<String> {
-    let j2 = (request.gravity_model == GravityModel::J2).then_some(INERTIAL_J2_NOTE);
+    let j2 = inertial_model_note(request.gravity_model);
     [
         INTEGRATION_NOTE,
         COORDINATE_TIME_NOTE,
@@ -28,8 +32,21 @@ fn model_notes(request: &ProperTimeRequest) -> Vec<String> {
     ]
     .into_iter()
     .chain(j2)
+    .chain(j2.map(|_| TRACK_POLE_NOTE))
     .map(String::from)
     .collect()
+}
+
+/// The Earth's figure axis in a track's frame: the CIP at the track's middle epoch for inertial
+/// (GCRS) tracks, the z axis for Earth-fixed ones.
+fn figure_axis(track: &ObjectTrack, context: &ConversionContext<'_>) -> [f64; 3] {
+    match (track.frame, middle_tt_attos(track, context)) {
+        (Frame::Inertial, Some(tt_attos)) => {
+            celestial_pole_fast(JulianDate::from_count_attos_since_j2000(tt_attos))
+                .unit_vector_gcrs()
+        }
+        _ => [0.0, 0.0, 1.0],
+    }
 }
 
 fn instant_forms(instant: &Instant, table: &LeapTable) -> Result<InstantForms, ApiError> {
@@ -114,7 +131,10 @@ pub fn compute(
         &request.interpolation,
         &ProperTimeOptions::default(),
         &context,
-        inertial_rate_function(RateReference::Tt, request.gravity_model),
+        |track| {
+            let axis = figure_axis(track, &context);
+            inertial_rate_function_about_axis(RateReference::Tt, request.gravity_model, axis)
+        },
     )
     .map_err(ephemeris_problem)?;
     let objects = tracks

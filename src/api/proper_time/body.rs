@@ -3,18 +3,18 @@
 use axum::http::{header, HeaderMap, StatusCode};
 
 use super::options::check_options;
-use super::types::{EphemerisInput, ProperTimeOptionsInput};
+use super::types::{ProperTimeBodyOptions, ProperTimeOptionsInput};
 use crate::api::clock::evaluate::{parse_gravity_model, parse_reference};
 use crate::api::error::ApiError;
 use crate::api::extract::{check_batch_size, parse_json};
-use crate::api::names::{ephemeris_frame_named, one_of, parse_format, parse_scale};
+use crate::api::names::one_of;
 use crate::api::state::Limits;
 use crate::physics::constants::MAX_GEOCENTRIC_DISTANCE_M;
 use crate::physics::gravity::GravityModel;
 use crate::physics::rate::RateReference;
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::leap_seconds::LeapTable;
-use crate::trajectory::json::{from_document, JsonEphemeris, JsonObject, JsonState};
+use crate::trajectory::json::{from_document, JsonEphemeris};
 use crate::trajectory::{read_oem, read_sp3, InterpolationOptions, TrajectoryError, TrajectorySet};
 
 /// The formats the endpoint reads.
@@ -43,9 +43,13 @@ pub struct ProperTimeRequest {
 
 /// An ephemeris error as a 422 problem naming the line, object and index.
 pub fn ephemeris_problem(error: TrajectoryError) -> ApiError {
-    ApiError::unprocessable(error.code, error.message)
+    let problem = ApiError::unprocessable(error.code, error.message)
         .with_line(error.line)
-        .with_object(error.object, error.index)
+        .with_object(error.object, error.index);
+    match error.field {
+        Some(field) => problem.with_field(field),
+        None => problem,
+    }
 }
 
 fn format_from_name(name: &str) -> Result<BodyFormat, ApiError> {
@@ -79,24 +83,6 @@ fn declared_json(headers: &HeaderMap) -> bool {
             let media = media.trim().to_ascii_lowercase();
             media == "application/json" || media.ends_with("+json")
         })
-}
-
-/// Checks the names of a JSON ephemeris as the schema states them (exact spellings).
-fn check_json_names(input: &EphemerisInput) -> Result<(), ApiError> {
-    if !ephemeris_frame_named(&input.frame) {
-        return Err(ApiError::unprocessable(
-            "unsupported_frame",
-            format!(
-                "frame {:?} is not supported; expected {}, in upper case",
-                input.frame,
-                crate::trajectory::Frame::names_in_words()
-            ),
-        )
-        .with_field("frame"));
-    }
-    parse_scale(&input.time_scale, "time_scale")?;
-    parse_format(input.epoch_format.as_deref(), "epoch_format")?;
-    Ok(())
 }
 
 /// Refuses positions beyond the geocentric range of the rate model (the Earth's Hill sphere,
@@ -166,32 +152,6 @@ fn body_format(
     }
 }
 
-fn json_document(input: EphemerisInput) -> (JsonEphemeris, Option<ProperTimeOptionsInput>) {
-    let objects = input
-        .objects
-        .into_iter()
-        .map(|object| JsonObject {
-            id: object.id,
-            states: object
-                .states
-                .into_iter()
-                .map(|state| JsonState {
-                    epoch: state.epoch,
-                    position_m: state.position_m,
-                    velocity_m_s: state.velocity_m_s,
-                })
-                .collect(),
-        })
-        .collect();
-    let document = JsonEphemeris {
-        frame: input.frame,
-        time_scale: input.time_scale,
-        epoch_format: input.epoch_format,
-        objects,
-    };
-    (document, input.options.map(ProperTimeOptionsInput::from))
-}
-
 /// Body options override query options field by field (each source checked on its own first).
 fn merge(
     query: ProperTimeOptionsInput,
@@ -228,7 +188,7 @@ pub fn read_request(
     let context = ConversionContext::geocentric(table);
     let (ephemeris, options) = match body_format(headers, query.format.as_deref(), text)? {
         BodyFormat::Json => {
-            let input: EphemerisInput = if declared_json(headers) {
+            let input: JsonEphemeris<ProperTimeBodyOptions> = if declared_json(headers) {
                 parse_json(body)?
             } else {
                 parse_json(body).map_err(|error| {
@@ -236,7 +196,6 @@ pub fn read_request(
                         .with_line(Some(1))
                 })?
             };
-            check_json_names(&input)?;
             if let Some(name) = input.options.as_ref().and_then(|o| o.format.as_deref()) {
                 format_from_name(name).map_err(|_| {
                     ApiError::unprocessable(
@@ -246,11 +205,11 @@ pub fn read_request(
                     .with_field("options.format")
                 })?;
             }
-            if let Some(body_options) = input.options.clone() {
-                check_options(&body_options.into(), "options.")?;
+            let body_options = input.options.clone().map(ProperTimeOptionsInput::from);
+            if let Some(body_options) = &body_options {
+                check_options(body_options, "options.")?;
             }
-            let (document, body_options) = json_document(input);
-            let ephemeris = from_document(&document, &context).map_err(ephemeris_problem)?;
+            let ephemeris = from_document(&input, &context).map_err(ephemeris_problem)?;
             (ephemeris, merge(query, body_options))
         }
         BodyFormat::Oem => (read_oem(text, &context).map_err(ephemeris_problem)?, query),

@@ -14,26 +14,13 @@ use axum::{Json, Router};
 
 use super::error::ApiError;
 use super::extract::QueryParams;
+use super::negotiate::{answer_type, AnswerType};
 use super::state::AppState;
 use types::ProperTimeOptionsInput;
 
 /// Routes `/v1/clock/proper-time`.
 pub fn router() -> Router<AppState> {
     Router::new().route("/v1/clock/proper-time", post(proper_time))
-}
-
-fn wants_csv(headers: &HeaderMap) -> bool {
-    headers
-        .get(header::ACCEPT)
-        .and_then(|value| value.to_str().ok())
-        .is_some_and(|accept| {
-            accept.split(',').any(|media| {
-                media
-                    .split(';')
-                    .next()
-                    .is_some_and(|m| m.trim() == "text/csv")
-            })
-        })
 }
 
 /// Proper time accumulated by each object's clock along an uploaded ephemeris.
@@ -46,7 +33,7 @@ fn wants_csv(headers: &HeaderMap) -> bool {
             (String = "application/sp3"),
             (String = "text/plain"))),
     responses(
-        (status = 200, description = "Per object: summary and series. `Accept: text/csv` answers the series as CSV (object_id, epoch, elapsed_s, tau_minus_t_s, velocity_part_s, gravity_part_s, periodic_s, residual_s).",
+        (status = 200, description = "Per object: summary and series. CSV when `Accept` prefers `text/csv` to JSON: the series (object_id, epoch, elapsed_s, tau_minus_t_s, velocity_part_s, gravity_part_s, periodic_s, residual_s).",
             content((types::ProperTimeAnswer = "application/json"), (String = "text/csv"))),
         (status = 400, description = "The query string cannot be read (`invalid_query`: an unknown parameter or `format`, a wrong type), the body is not UTF-8 (`unreadable_body`), or a body sent as application/json is not the JSON ephemeris (`invalid_json`, `invalid_body`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 413, description = "Body above the configured limit (`body_too_large`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
@@ -66,7 +53,7 @@ pub async fn proper_time(
             ApiError::bad_request("unreadable_body", rejection.body_text())
         }
     })?;
-    let csv = wants_csv(&headers);
+    let csv = answer_type(&headers) == AnswerType::Csv;
     let table = state.leap_table();
     let settings = state.limits().clone();
     let work = move || -> Result<Response, ApiError> {
@@ -74,12 +61,15 @@ pub async fn proper_time(
         let answer = answer::compute(&request, &table)?;
         Ok(if csv {
             (
-                [(header::CONTENT_TYPE, "text/csv; charset=utf-8")],
+                [
+                    (header::CONTENT_TYPE, "text/csv; charset=utf-8"),
+                    (header::VARY, "accept"),
+                ],
                 answer::to_csv(&answer),
             )
                 .into_response()
         } else {
-            Json(answer).into_response()
+            ([(header::VARY, "accept")], Json(answer)).into_response()
         })
     };
     tokio::task::spawn_blocking(work).await.map_err(|e| {

@@ -39,7 +39,8 @@ pub struct ProperTimeOptionsInput {
     /// Coordinate time the clock is compared with: `TT` (default) or `TCG`.
     #[param(value_type = Option<ReferenceName>, example = "TT")]
     pub reference: Option<String>,
-    /// Earth potential: `point_mass` (default) or `j2` (IERS Conventions (2010) GM, J2, a_E).
+    /// Earth potential: `point_mass` (default), `j2` (IERS Conventions (2010) GM, J2, a_E) or
+    /// `grs80` (the GRS80 normal field in closed form).
     #[param(value_type = Option<GravityModelName>, example = "point_mass")]
     pub gravity_model: Option<String>,
     /// Answer every `step_s` seconds (of TT) from the first epoch instead of at the input
@@ -64,7 +65,7 @@ pub struct ProperTimeOptionsInput {
 }
 
 /// The options of a JSON body: the query parameters of the same names, which they override.
-#[derive(Debug, Clone, Default, Deserialize, ToSchema)]
+#[derive(Debug, Clone, Default, Deserialize, Serialize, ToSchema)]
 #[schema(as = ProperTimeOptions)]
 #[serde(deny_unknown_fields)]
 pub struct ProperTimeBodyOptions {
@@ -74,7 +75,7 @@ pub struct ProperTimeBodyOptions {
     /// Coordinate time the clock is compared with: `TT` (default) or `TCG`.
     #[schema(value_type = Option<ReferenceName>)]
     pub reference: Option<String>,
-    /// Earth potential: `point_mass` (default) or `j2`.
+    /// Earth potential: `point_mass` (default), `j2` or `grs80`.
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
     /// Output step, seconds of TT, from 0.001 to 315 537 897 600.
@@ -111,7 +112,10 @@ impl From<ProperTimeBodyOptions> for ProperTimeOptionsInput {
 }
 
 /// One state of a JSON ephemeris.
-#[derive(Debug, Clone, Deserialize, ToSchema)]
+// The schema of the body only: bodies are read into `trajectory::json::JsonEphemeris` (the
+// one type and rule set of the JSON ephemeris); `tests/json_ephemeris_schema.rs` holds the two
+// to the same members. `Serialize` only lets utoipa read the `serde` attributes.
+#[derive(Debug, Clone, Serialize, ToSchema)]
 #[schema(as = EphemerisStateInput)]
 #[serde(deny_unknown_fields)]
 pub struct StateInput {
@@ -130,7 +134,10 @@ pub struct StateInput {
 }
 
 /// One object of a JSON ephemeris.
-#[derive(Debug, Clone, Deserialize, ToSchema)]
+// The schema of the body only: bodies are read into `trajectory::json::JsonEphemeris` (the
+// one type and rule set of the JSON ephemeris); `tests/json_ephemeris_schema.rs` holds the two
+// to the same members. `Serialize` only lets utoipa read the `serde` attributes.
+#[derive(Debug, Clone, Serialize, ToSchema)]
 #[schema(as = EphemerisObjectInput)]
 #[serde(deny_unknown_fields)]
 pub struct ObjectInput {
@@ -144,7 +151,10 @@ pub struct ObjectInput {
 }
 
 /// A JSON ephemeris: one or many objects in one frame and time scale.
-#[derive(Debug, Clone, Deserialize, ToSchema)]
+// The schema of the body only: bodies are read into `trajectory::json::JsonEphemeris` (the
+// one type and rule set of the JSON ephemeris); `tests/json_ephemeris_schema.rs` holds the two
+// to the same members. `Serialize` only lets utoipa read the `serde` attributes.
+#[derive(Debug, Clone, Serialize, ToSchema)]
 #[serde(deny_unknown_fields)]
 #[schema(example = json!({
     "frame": "GCRF", "time_scale": "UTC",
@@ -238,7 +248,7 @@ pub struct ObjectOutput {
 pub struct ProperTimeAnswer {
     /// `TT` or `TCG`.
     pub reference: String,
-    /// `point_mass` or `j2`.
+    /// `point_mass`, `j2` or `grs80`.
     pub gravity_model: String,
     /// The objects, in the order of the ephemeris.
     pub objects: Vec<ObjectOutput>,

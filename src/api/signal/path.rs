@@ -13,7 +13,9 @@ use crate::api::state::AppState;
 use crate::api::time::types::InstantForms;
 use crate::physics::constants::SPEED_OF_LIGHT_M_S;
 use crate::physics::geodesy::geodetic_to_ecef_m;
-use crate::physics::signal::{signal_path as solve, Endpoint, Frame, PathGeometry, SignalError};
+use crate::physics::signal::{
+    signal_path as solve, Endpoint, Frame, PathGeometry, SignalError, TransmitterMotion,
+};
 use crate::physics::time::formats::{parse_instant, write_instant};
 
 /// The sign convention of the path answer.
@@ -23,7 +25,30 @@ pub const PATH_SIGN_CONVENTION: &str = "Path terms are added to geometric_range_
 struct Resolved {
     frame: Frame,
     endpoint: Endpoint,
+    motion: TransmitterMotion,
     ground_site: bool,
+}
+
+/// Reads the endpoint's `motion` (default free fall); only a transmitter with a velocity takes
+/// one (422 `invalid_endpoint` otherwise, `unknown_motion` for another name).
+fn parse_motion(owner: &str, input: &PathEndpointInput) -> Result<TransmitterMotion, ApiError> {
+    let Some(text) = input.motion.as_deref() else {
+        return Ok(TransmitterMotion::FreeFall);
+    };
+    let field = format!("{owner}.motion");
+    if owner != "transmitter" {
+        return Err(invalid_endpoint(
+            field,
+            "motion applies to the transmitter only (the receiver's position at reception is all the light time needs)",
+        ));
+    }
+    if input.velocity_m_s.is_none() {
+        return Err(invalid_endpoint(
+            field,
+            "motion needs velocity_m_s; without one the transmitter is at rest in its frame",
+        ));
+    }
+    parse_named(text, "unknown_motion", "transmitter motion", field)
 }
 
 fn invalid_endpoint(field: String, detail: &str) -> ApiError {
@@ -36,10 +61,14 @@ fn parse_frame(text: &str, field: String) -> Result<Frame, ApiError> {
 
 fn resolve(owner: &str, input: &PathEndpointInput) -> Result<Resolved, ApiError> {
     if let Some(site) = input.ground_site {
-        if input.frame.is_some() || input.position_m.is_some() || input.velocity_m_s.is_some() {
+        if input.frame.is_some()
+            || input.position_m.is_some()
+            || input.velocity_m_s.is_some()
+            || input.motion.is_some()
+        {
             return Err(invalid_endpoint(
                 format!("{owner}.ground_site"),
-                "give either ground_site, or frame and position_m (and optionally velocity_m_s), not both",
+                "give either ground_site, or frame and position_m (and optionally velocity_m_s and motion), not both",
             ));
         }
         let position_m = geodetic_to_ecef_m(site.latitude_deg, site.longitude_deg, site.height_m)
@@ -52,6 +81,7 @@ fn resolve(owner: &str, input: &PathEndpointInput) -> Result<Resolved, ApiError>
                 position_m,
                 velocity_m_s: None,
             },
+            motion: TransmitterMotion::FreeFall,
             ground_site: true,
         });
     }
@@ -74,6 +104,7 @@ fn resolve(owner: &str, input: &PathEndpointInput) -> Result<Resolved, ApiError>
             position_m,
             velocity_m_s: input.velocity_m_s,
         },
+        motion: parse_motion(owner, input)?,
         ground_site: false,
     })
 }
@@ -103,7 +134,7 @@ fn epoch_forms(request: &SignalPathRequest, state: &AppState) -> Result<InstantF
     responses(
         (status = 200, description = "The light time and its Sagnac, Shapiro and clock terms", body = SignalPathAnswer),
         JsonBodyProblems,
-        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: invalid_endpoint (neither or both of `ground_site` and `frame` + `position_m`), unknown_frame, frames_differ, inside_earth, beyond_range, speed_not_below_c, not_finite, coincident_endpoints, path_through_earth (the receiver cannot see the transmitter), no_convergence, invalid_value (a ground site's latitude, longitude or height), and the epoch codes of `GET /v1/time/convert` (unknown_scale, unknown_format, malformed_instant, impossible_date, ...)", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: invalid_endpoint (neither or both of `ground_site` and `frame` + `position_m`; a `motion` without a velocity or on the receiver), unknown_frame, unknown_motion, frames_differ, inside_earth, beyond_range, speed_not_below_c, not_finite, coincident_endpoints, path_through_earth (the receiver cannot see the transmitter), no_convergence, invalid_value (a ground site's latitude, longitude or height), and the epoch codes of `GET /v1/time/convert` (unknown_scale, unknown_format, malformed_instant, impossible_date, ...)", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn signal_path(
     State(state): State<AppState>,
@@ -127,6 +158,7 @@ pub async fn signal_path(
     let geometry = PathGeometry {
         frame: transmitter.frame,
         transmitter: transmitter.endpoint,
+        transmitter_motion: transmitter.motion,
         receiver: receiver.endpoint,
     };
     let path = solve(&geometry).map_err(|mut error| {

@@ -4,7 +4,8 @@ use serde::{Deserialize, Serialize};
 use utoipa::ToSchema;
 
 use crate::api::names::{
-    FrameName, InstantFormatName, InstantString, PositionM, ScaleName, VelocityMS,
+    FrameName, InstantFormatName, InstantString, PositionM, ScaleName, TransmitterMotionName,
+    VelocityMS,
 };
 use crate::api::time::types::InstantForms;
 
@@ -46,6 +47,14 @@ pub struct PathEndpointInput {
     pub velocity_m_s: Option<[f64; 3]>,
     /// A point fixed on the Earth, instead of `frame` and `position_m`.
     pub ground_site: Option<GroundSiteInput>,
+    /// How the transmitter moves over the flight when it has a `velocity_m_s`: `free_fall`
+    /// (default: a satellite, integrated in the Earth's point-mass plus J2 field, within 1e-8 m
+    /// of its path over a navigation satellite's 0.07 s) or `uniform` (straight at constant
+    /// velocity in `frame`, for a vehicle; 1 to 2 mm off for a satellite). Without a velocity
+    /// the transmitter is at rest in `frame` (a ground site turns with the Earth). Only with a
+    /// velocity, and only for the transmitter (422 `invalid_endpoint` otherwise).
+    #[schema(value_type = Option<TransmitterMotionName>)]
+    pub motion: Option<String>,
 }
 
 /// Signal-path request.

@@ -7,20 +7,38 @@ use crate::api::error::ApiError;
 use crate::physics::time::calendar::CalendarDate;
 use crate::physics::time::convert::{convert, ConversionContext};
 use crate::physics::time::decimal::format_attos_as_seconds;
-use crate::physics::time::formats::{
-    day_reading, parse_instant, reading_count_attos, InstantDigits, InstantFormat,
-};
+use crate::physics::time::error::TimeError;
+use crate::physics::time::formats::{parse_instant, InstantDigits, InstantFormat};
 use crate::physics::time::instant::{attos_to_seconds_f64, Instant};
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::scale::Scale;
 
-/// Warnings for a UTC reading past the table's expiry.
-fn expiry_warning(instant: &Instant, table: &LeapTable) -> Option<String> {
-    if instant.scale() != Scale::Utc {
-        return None;
+/// Where an instant sits in the request, for the `field` of a problem; written out only when
+/// a problem is answered (a batch names 100 000 of them).
+#[derive(Debug, Clone, Copy)]
+pub enum FieldName<'a> {
+    /// A field of its own (`at`, `now`).
+    Named(&'a str),
+    /// One item of a list (`epochs[3]`).
+    Item(&'a str, usize),
+}
+
+impl FieldName<'_> {
+    fn text(self) -> String {
+        match self {
+            FieldName::Named(name) => name.to_string(),
+            FieldName::Item(list, index) => format!("{list}[{index}]"),
+        }
     }
-    let reading = day_reading(instant, table).ok()?;
-    if reading.mjd < table.expiry_mjd() {
+
+    fn problem(self, error: &TimeError) -> ApiError {
+        ApiError::from_time(error, self.text())
+    }
+}
+
+/// Warnings for a UTC reading past the table's expiry.
+fn expiry_warning(digits: &InstantDigits, table: &LeapTable) -> Option<String> {
+    if digits.scale() != Scale::Utc || digits.mjd() < table.expiry_mjd() {
         return None;
     }
     let expiry = CalendarDate::from_mjd(table.expiry_mjd());
@@ -68,10 +86,6 @@ impl Converted {
     }
 }
 
-fn digits(instant: &Instant, table: &LeapTable, field: &str) -> Result<InstantDigits, ApiError> {
-    InstantDigits::new(instant, table).map_err(|e| ApiError::from_time(&e, field))
-}
-
 /// Converts one instant, written as text, into each target scale.
 pub fn convert_one(
     text: &str,
@@ -79,34 +93,36 @@ pub fn convert_one(
     from: Scale,
     targets: &[Scale],
     context: &ConversionContext<'_>,
-    field: &str,
+    field: FieldName<'_>,
 ) -> Result<Converted, ApiError> {
     let table = context.table;
-    let input =
-        parse_instant(text, format, from, table).map_err(|e| ApiError::from_time(&e, field))?;
-    let input_reading =
-        reading_count_attos(&input, table).map_err(|e| ApiError::from_time(&e, field))?;
+    let digits =
+        |instant: &Instant| InstantDigits::new(instant, table).map_err(|e| field.problem(&e));
+    let input_instant = parse_instant(text, format, from, table).map_err(|e| field.problem(&e))?;
+    let input = digits(&input_instant)?;
+    let input_reading = input.reading_count_attos();
     let mut warnings: Vec<String> = expiry_warning(&input, table).into_iter().collect();
     let mut results = Vec::with_capacity(targets.len());
     for &target in targets {
         let output =
-            convert(&input, target, context).map_err(|e| ApiError::from_time(&e, field))?;
-        let difference_attos = reading_count_attos(&output, table)
-            .map_err(|e| ApiError::from_time(&e, field))?
-            - input_reading;
+            digits(&convert(&input_instant, target, context).map_err(|e| field.problem(&e))?)?;
         if let Some(warning) = expiry_warning(&output, table) {
             if !warnings.contains(&warning) {
                 warnings.push(warning);
             }
         }
         results.push(ConvertedTarget {
-            digits: digits(&output, table, field)?,
-            difference_attos,
+            difference_attos: output.reading_count_attos() - input_reading,
+            digits: output,
         });
     }
-    warnings.extend(super::ut1_warning::ut1_warning(&input, targets, context));
+    warnings.extend(super::ut1_warning::ut1_warning(
+        &input_instant,
+        targets,
+        context,
+    ));
     Ok(Converted {
-        input: digits(&input, table, field)?,
+        input,
         results,
         warnings,
     })

@@ -1,12 +1,13 @@
 //! `GET` and `POST /v1/time/convert`.
 
 use axum::extract::State;
-use axum::http::{header, HeaderMap, StatusCode};
+use axum::http::{header, HeaderMap};
 use axum::response::{IntoResponse, Response};
 
-use super::conversion::convert_one;
+use super::conversion::{convert_one, FieldName};
 use super::csv::{self, CSV_CONTENT_TYPE};
 use super::forms::FormSelection;
+use super::json_view::{conversion_bytes_hint, json_bytes, BatchJson, ConversionJson};
 use super::observer::{observer_from_input, parse_observer_query};
 use super::types::{Conversion, ConversionBatch, ConvertBatchRequest, ConvertQuery};
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, QueryProblems, TimeoutProblem};
@@ -38,11 +39,6 @@ fn parse_targets<'a>(
     }
     scales.dedup();
     Ok(scales)
-}
-
-fn json_bytes<T: serde::Serialize>(value: &T) -> Result<Vec<u8>, ApiError> {
-    serde_json::to_vec(value)
-        .map_err(|e| ApiError::new(StatusCode::INTERNAL_SERVER_ERROR, "internal", e.to_string()))
 }
 
 fn respond((content_type, body): (&'static str, Vec<u8>)) -> Response {
@@ -91,9 +87,22 @@ pub async fn convert_get(
         tdb_evaluation: TdbEvaluation::Fitted,
         ut1: Some(&*eop),
     };
-    let converted = convert_one(&query.at, format, from, &targets, &context, "at")?;
+    let converted = convert_one(
+        &query.at,
+        format,
+        from,
+        &targets,
+        &context,
+        FieldName::Named("at"),
+    )?;
     let written = match answer_type(&headers) {
-        AnswerType::Json => ("application/json", json_bytes(&converted.json(&forms))?),
+        AnswerType::Json => (
+            "application/json",
+            json_bytes(
+                &ConversionJson(&converted, &forms),
+                conversion_bytes_hint(targets.len()),
+            )?,
+        ),
         AnswerType::Csv => {
             let mut out = Vec::with_capacity(256);
             csv::push_header(&targets, &forms, &mut out);
@@ -155,7 +164,7 @@ pub async fn convert_post(
                 from,
                 &targets,
                 &context,
-                &format!("epochs[{index}]"),
+                FieldName::Item("epochs", index),
             )
         };
         // Written here, in the blocking pool: a 100 000-epoch answer takes as long to write as
@@ -166,11 +175,14 @@ pub async fn convert_post(
                     .epochs
                     .iter()
                     .enumerate()
-                    .map(|(index, text)| convert_at(index, text).map(|c| c.json(&forms)))
+                    .map(|(index, text)| convert_at(index, text))
                     .collect::<Result<Vec<_>, _>>()?;
                 Ok((
                     "application/json",
-                    json_bytes(&ConversionBatch { conversions })?,
+                    json_bytes(
+                        &BatchJson(&conversions, &forms),
+                        conversion_bytes_hint(targets.len()) * conversions.len(),
+                    )?,
                 ))
             }
             AnswerType::Csv => {

@@ -4,6 +4,7 @@ pub mod conversion;
 pub mod convert;
 pub mod csv;
 pub mod forms;
+pub mod json_view;
 pub mod observer;
 pub mod reference;
 pub mod types;

@@ -5,12 +5,12 @@ use std::hash::{Hash, Hasher};
 use axum::extract::State;
 use axum::http::{header, HeaderMap, HeaderValue, StatusCode};
 use axum::response::{IntoResponse, Response};
-use axum::Json;
 use serde::Serialize;
 use utoipa::ToSchema;
 
-use super::conversion::convert_one;
+use super::conversion::{convert_one, FieldName};
 use super::forms::FormSelection;
+use super::json_view::{conversion_bytes_hint, json_bytes, ConversionJson};
 use super::types::{Conversion, NowQuery};
 use crate::api::error::{ApiError, QueryProblems};
 use crate::api::extract::QueryParams;
@@ -230,11 +230,18 @@ pub async fn now(
         Scale::Utc,
         &Scale::without_earth_orientation().collect::<Vec<_>>(),
         &context,
-        "now",
+        FieldName::Named("now"),
+    )?;
+    let body = json_bytes(
+        &ConversionJson(&conversion, &forms),
+        conversion_bytes_hint(Scale::ALL.len()),
     )?;
     Ok((
-        [(header::CACHE_CONTROL, "no-store")],
-        Json(conversion.json(&forms)),
+        [
+            (header::CACHE_CONTROL, "no-store"),
+            (header::CONTENT_TYPE, "application/json"),
+        ],
+        body,
     )
         .into_response())
 }

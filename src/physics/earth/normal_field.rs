@@ -99,6 +99,19 @@ pub fn grs80_normal_potential_m2_s2(position_m: [f64; 3]) -> Result<f64, RateErr
     Ok(gravitation + flattening_term + centrifugal)
 }
 
+/// GRS80 normal gravitational potential V = U - Phi (the level ellipsoid's attraction alone,
+/// without the centrifugal term omega^2 (x^2 + y^2)/2), m^2/s^2, at an Earth-fixed point.
+///
+/// Reference: Heiskanen & Moritz, Physical Geodesy (1967) eq. 2-126 less the centrifugal
+/// potential (eq. 2-37, from memory); GRS80 constants (Moritz 2000). The GM is GRS80's, 3.986 005e14, not
+/// the IERS 3.986 004 418e14: the degree-0 terms differ by 1.5e-9 of GM/r (about 9 m^2/s^2,
+/// 1e-16 of a rate, on the ground).
+pub fn grs80_normal_gravitational_potential_m2_s2(position_m: [f64; 3]) -> Result<f64, RateError> {
+    let normal_m2_s2 = grs80_normal_potential_m2_s2(position_m)?;
+    let axial_squared_m2 = position_m[0] * position_m[0] + position_m[1] * position_m[1];
+    Ok(normal_m2_s2 - 0.5 * EARTH_ROTATION_RAD_S * EARTH_ROTATION_RAD_S * axial_squared_m2)
+}
+
 /// GRS80 normal potential on the ellipsoid, U0, m^2/s^2, from the closed form at the equator
 /// (the same at every latitude: the ellipsoid is a level surface).
 pub fn grs80_surface_potential_m2_s2() -> f64 {
@@ -118,6 +131,14 @@ pub fn grs80_normal_potential_drop_m2_s2(
     height_m: f64,
 ) -> Result<f64, RateError> {
     let position_m = geodetic_to_ecef_m(latitude_deg, 0.0, height_m)?;
+    grs80_normal_potential_drop_at_m2_s2(position_m)
+}
+
+/// The same drop U0 - U(x) at an Earth-fixed point `position_m` (m), m^2/s^2.
+///
+/// Reference: Heiskanen & Moritz, Physical Geodesy (1967) eq. 2-126 with GRS80 constants
+/// (Moritz 2000).
+pub fn grs80_normal_potential_drop_at_m2_s2(position_m: [f64; 3]) -> Result<f64, RateError> {
     Ok(grs80_surface_potential_m2_s2() - grs80_normal_potential_m2_s2(position_m)?)
 }
 

@@ -154,3 +154,31 @@ fn a_height_that_is_not_a_number_is_refused_naming_height_m() {
         "height_m"
     );
 }
+
+#[test]
+fn the_far_field_has_the_defining_j2_of_grs80() {
+    // Moritz 2000: J2 = 108 263e-8 is a defining constant of GRS80 (the closed form is built
+    // from a, f, GM, omega; f = 1/298.257 222 101 is derived from J2 there). From the potential:
+    // V(equator) - V(pole) = GM/r (1.5 J2 (a/r)^2 + 0.625 J4 (a/r)^4 + ...) at r = 1e8 m
+    // (Heiskanen & Moritz 1967 eq. 2-92 with P2(0) - P2(1) = -1.5 and P4(0) - P4(1) = -0.625),
+    // with Moritz 2000 J4; the J6 term is below 1e-13 of J2 there.
+    let r = 1.0e8;
+    let v = |p: [f64; 3]| grs80_normal_gravitational_potential_m2_s2(p).unwrap();
+    let ratio2 = (GRS80_SEMI_MAJOR_AXIS_M / r).powi(2);
+    let scaled = (v([r, 0.0, 0.0]) - v([0.0, 0.0, r])) * r / GRS80_GM_M3_S2;
+    let j2 = (scaled - 0.625 * J2N_GRS80[1] * ratio2 * ratio2) / (1.5 * ratio2);
+    assert!((j2 - 0.001_082_63).abs() < 1e-12, "J2 = {j2:e}");
+}
+
+#[test]
+fn the_gravitational_part_is_the_normal_potential_less_the_centrifugal_one() {
+    // Heiskanen & Moritz (1967) eq. 2-37 (from memory): U = V + omega^2 (x^2 + y^2)/2; at the pole the
+    // centrifugal term vanishes.
+    let pole = [0.0, 0.0, GRS80_SEMI_MINOR_AXIS_M];
+    let equator = [GRS80_SEMI_MAJOR_AXIS_M, 0.0, 0.0];
+    let u = |p| grs80_normal_potential_m2_s2(p).unwrap();
+    let v = |p| grs80_normal_gravitational_potential_m2_s2(p).unwrap();
+    assert_eq!(u(pole), v(pole));
+    let phi = 0.5 * (EARTH_ROTATION_RAD_S * GRS80_SEMI_MAJOR_AXIS_M).powi(2);
+    assert!((u(equator) - v(equator) - phi).abs() < 1e-8);
+}

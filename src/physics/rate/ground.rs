@@ -1,7 +1,7 @@
 //! Rate of a clock fixed on the rotating Earth.
 
 use crate::physics::constants::{EARTH_ROTATION_RAD_S, L_G, SPEED_OF_LIGHT_SQUARED_M2_S2};
-use crate::physics::earth::normal_field::grs80_normal_potential_drop_m2_s2;
+use crate::physics::earth::normal_field::grs80_normal_potential_drop_at_m2_s2;
 use crate::physics::geodesy::geodetic_to_ecef_m;
 use crate::physics::gravity::{centrifugal_potential_m2_s2, earth_potential_m2_s2, GravityModel};
 use crate::physics::rate::error::RateError;
@@ -58,8 +58,9 @@ pub const GROUND_NOTE: &str = "clock at rest on the Earth rotating at omega_E = 
 pub fn ground_height_note(height_reference: HeightReference, model: GravityModel) -> &'static str {
     match (height_reference, model) {
         (HeightReference::Geoid, _) => "height above the geoid: W0 - W from GRS80 normal gravity (Heiskanen & Moritz (1967) eq. 2-215), so a clock on the geoid has rate 0 against TT; gravity_model is not used",
-        (HeightReference::Ellipsoid, GravityModel::J2) => "height above the GRS80 ellipsoid with a J2 Earth: within 1.8e-15 of W0 on the ellipsoid; the geoid undulation (up to about +-100 m, +-1.1e-14) is not in the model: give height_reference geoid for 1e-16 work",
-        (HeightReference::Ellipsoid, GravityModel::PointMass) => "height above the GRS80 ellipsoid with a point-mass Earth: ignores the Earth's flattening, off by up to about 7e-13 on the ground; j2 (the default for ground sites) is far closer",
+        (HeightReference::Ellipsoid, GravityModel::Grs80) => "height above the GRS80 ellipsoid with the GRS80 normal field in closed form (Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)): W0 - W = U0 - U(x), the ellipsoid taken as the geoid (undulation N = 0), so a site on the ellipsoid has rate 0 against TT and the answer equals height_reference geoid at the same height; the real N, up to about +-100 m (about +-1.1e-14 per 100 m), is not in the model: give height_reference geoid with the orthometric height for 1e-16 work. A normal field with no disturbing potential instead (T = 0) would add (W0 - U0)/c^2 = (62 636 856.0 - 62 636 860.850)/c^2 = -5.4e-17 (IERS Conventions (2010) table 1.1 W0; Moritz (2000) U0); TT's L_G c^2 = 62 636 856.0 m^2/s^2 is itself about 2.6 m^2/s^2 (2.9e-17) above the present best geoid potential 62 636 853.4 (IAG 2015 Resolution 1; from memory)",
+        (HeightReference::Ellipsoid, GravityModel::J2) => "height above the GRS80 ellipsoid with a J2 Earth: within 1.8e-15 of W0 on the ellipsoid (the truncated J4 term); grs80 (the default for ground sites) is the exact normal field; the geoid undulation (up to about +-100 m, +-1.1e-14) is in neither model: give height_reference geoid for 1e-16 work",
+        (HeightReference::Ellipsoid, GravityModel::PointMass) => "height above the GRS80 ellipsoid with a point-mass Earth: ignores the Earth's flattening, off by up to about 7e-13 on the ground; grs80 (the default for ground sites) is exact for the normal field",
     }
 }
 
@@ -70,12 +71,16 @@ pub fn ground_height_note(height_reference: HeightReference, model: GravityModel
 /// L_G = W0/c^2, IAU 2000 Resolution B1.9). Split: `sr = -omega_E^2 (x^2 + y^2)/(2c^2)` (the
 /// rotation speed), `gr = (W0 - U)/c^2` (TT) or `-U/c^2` (TCG).
 ///
-/// * [`GroundHeight::EllipsoidalM`]: x from GRS80 geodetic coordinates, U from `model`
-///   (point mass or J2). With J2 the model potential on the ellipsoid (h = 0) is within
-///   1.8e-15 of W0 (measured: +6.7e-16 at the equator, -6.3e-16 at 45 deg, +1.7e-15 at the
-///   poles; the rest is the truncated J4 term, about 150 m^2/s^2 at the poles). A real clock
+/// * [`GroundHeight::EllipsoidalM`] with [`GravityModel::Grs80`] (the API's default): x from
+///   GRS80 geodetic coordinates and W0 - W = U0 - U(x), the GRS80 normal potential in closed
+///   form (Heiskanen & Moritz 1967 eq. 2-126; Moritz 2000), the ellipsoid taken as the geoid
+///   (N = 0): the same answer as [`GroundHeight::AboveGeoidM`] at the same height. A real clock
 ///   also sees the geoid undulation N, up to about +-100 m (about +-1.1e-14), which no
 ///   ellipsoidal model knows: for 1e-16 work give the height above the geoid instead.
+/// * [`GroundHeight::EllipsoidalM`] with point mass or J2: U from `model` against W0. With J2
+///   the model potential on the ellipsoid (h = 0) is within 1.8e-15 of W0 (measured: +6.7e-16
+///   at the equator, -6.3e-16 at 45 deg, +1.7e-15 at the poles; the rest is the truncated J4
+///   term, about 150 m^2/s^2 at the poles).
 /// * [`GroundHeight::AboveGeoidM`]: W0 - W = U0 - U(phi, h), the drop of the GRS80 normal
 ///   potential in closed form from the ellipsoid to h above it (Heiskanen & Moritz 1967
 ///   eq. 2-126; exact at every accepted height, unlike the free-air series of eq. 2-215, which
@@ -98,11 +103,14 @@ pub fn ground_site_rate(
     let position_m = geodetic_to_ecef_m(site.latitude_deg, site.longitude_deg, height_m)?;
     let centrifugal_m2_s2 = centrifugal_potential_m2_s2(position_m)?;
     let speed_squared_m2_s2 = 2.0 * centrifugal_m2_s2;
-    let potential_m2_s2 = match site.height {
-        GroundHeight::EllipsoidalM(_) => earth_potential_m2_s2(model, position_m)?,
-        GroundHeight::AboveGeoidM(_) => {
+    let potential_m2_s2 = match (site.height, model) {
+        (GroundHeight::EllipsoidalM(_), GravityModel::PointMass | GravityModel::J2) => {
+            earth_potential_m2_s2(model, position_m)?
+        }
+        (GroundHeight::EllipsoidalM(_), GravityModel::Grs80)
+        | (GroundHeight::AboveGeoidM(_), _) => {
             let w0_m2_s2 = L_G * SPEED_OF_LIGHT_SQUARED_M2_S2;
-            let drop_m2_s2 = grs80_normal_potential_drop_m2_s2(site.latitude_deg, height_m)?;
+            let drop_m2_s2 = grs80_normal_potential_drop_at_m2_s2(position_m)?;
             w0_m2_s2 - drop_m2_s2 - centrifugal_m2_s2
         }
     };
@@ -122,3 +130,7 @@ pub fn rotation_speed_m_s(axial_distance_m: f64) -> f64 {
 #[cfg(test)]
 #[path = "ground_tests.rs"]
 mod tests;
+
+#[cfg(test)]
+#[path = "ground_grs80_tests.rs"]
+mod grs80_tests;

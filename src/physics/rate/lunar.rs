@@ -74,7 +74,7 @@ pub const LUNAR_NOTES: [&str; 2] = [
     "the Moon's own potential as a point mass (GM of JPL DE430) through its geocentric tidal part; the Sun's tidal potential (about 0.001 to 0.004 us/day), the lunar J2 (about 6e-15), librations and the tilts of the lunar axis and orbit are neglected",
 ];
 /// The model note of [`lunar_site_rate`] when J2 was asked for: the Earth is a point mass there.
-pub const LUNAR_EARTH_J2_NOTE: &str = "the Earth's J2 changes the potential at the Moon by less than 1 m^2/s^2 (below 1e-17 of rate): a point-mass Earth is used";
+pub const LUNAR_EARTH_J2_NOTE: &str = "the Earth's J2 (or GRS80 normal field) changes the potential at the Moon by less than 1 m^2/s^2 (below 1e-17 of rate): a point-mass Earth is used";
 
 /// Mean fractional rate of a clock fixed on the Moon's surface.
 ///

@@ -47,7 +47,7 @@ pub use orbit::{orbit_rate, Anomaly, KeplerianOrbit, OrbitRate, PeriodicTerm};
 pub use state::{state_rate, Frame, StateRate, StateVector};
 
 use crate::physics::constants::{L_G, MICROSECONDS_PER_DAY, SPEED_OF_LIGHT_SQUARED_M2_S2};
-use crate::physics::gravity::{dot, earth_potential_m2_s2};
+use crate::physics::gravity::{dot, earth_potential_m2_s2, position_about_axis_m};
 use crate::physics::vocabulary::vocabulary;
 
 vocabulary! {
@@ -129,7 +129,22 @@ pub struct MicrosecondsPerDay {
 }
 
 /// The model note of [`inertial_rate_function`] with [`GravityModel::J2`].
-pub const INERTIAL_J2_NOTE: &str = "J2 potential with the IERS Conventions (2010) GM, J2 and a_E; the GCRS pole stands in for the Earth's axis for inertial tracks";
+pub const INERTIAL_J2_NOTE: &str = "J2 potential with the IERS Conventions (2010) GM, J2 and a_E";
+
+/// The model note of [`inertial_rate_function`] with [`GravityModel::Grs80`].
+pub const INERTIAL_GRS80_NOTE: &str = "GRS80 normal field in closed form (every zonal term of the level ellipsoid; Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)) with the GRS80 GM 3.986005e14, 1.5e-9 above the IERS Conventions (2010) GM (about 1e-16 of rate near the Earth)";
+
+/// The model note of the pole of the zonal fields for tracks (J2 and GRS80).
+pub const TRACK_POLE_NOTE: &str = "for inertial (GCRS) tracks the zonal field is taken about the Celestial Intermediate Pole at the track's middle epoch (IAU 2006/2000A, IERS Conventions (2010) ch. 5; without dX, dY), about 0.15 deg from the GCRS z axis in 2026; its motion over a track of days changes the rate by below 1e-18; Earth-fixed tracks use the ITRF z axis (polar motion, below 1e-6 rad, is not applied)";
+
+/// The model note of an inertial rate with `model`, if it has one (J2 or GRS80).
+pub fn inertial_model_note(model: GravityModel) -> Option<&'static str> {
+    match model {
+        GravityModel::PointMass => None,
+        GravityModel::J2 => Some(INERTIAL_J2_NOTE),
+        GravityModel::Grs80 => Some(INERTIAL_GRS80_NOTE),
+    }
+}
 
 /// The rate function of a clock at an inertial geocentric state, for `reference` and `model`:
 /// `rate(position_m, velocity_m_s)` gives the (velocity, gravity) parts of d(tau)/dt - 1, i.e.
@@ -141,8 +156,20 @@ pub fn inertial_rate_function(
     reference: RateReference,
     model: GravityModel,
 ) -> impl Fn(&[f64; 3], &[f64; 3]) -> (f64, f64) + Copy {
+    inertial_rate_function_about_axis(reference, model, [0.0, 0.0, 1.0])
+}
+
+/// [`inertial_rate_function`] with the Earth's figure axis along `axis_unit` (a unit vector in
+/// the positions' frame; the CIP for GCRS tracks) instead of the frame's z axis: the zonal
+/// fields are evaluated at [`position_about_axis_m`].
+pub fn inertial_rate_function_about_axis(
+    reference: RateReference,
+    model: GravityModel,
+    axis_unit: [f64; 3],
+) -> impl Fn(&[f64; 3], &[f64; 3]) -> (f64, f64) + Copy {
     move |position_m, velocity_m_s| {
-        let potential_m2_s2 = earth_potential_m2_s2(model, *position_m).unwrap_or(f64::NAN);
+        let about_axis_m = position_about_axis_m(*position_m, axis_unit);
+        let potential_m2_s2 = earth_potential_m2_s2(model, about_axis_m).unwrap_or(f64::NAN);
         let parts = RateParts::from_speed_and_potential(
             reference,
             dot(*velocity_m_s, *velocity_m_s),

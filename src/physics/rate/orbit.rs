@@ -61,9 +61,12 @@ pub const ORBIT_NOTES: [&str; 3] = [
     "GM = 3.986004418e14 m^3/s^2 (IERS Conventions (2010), TCG-compatible); the IS-GPS-200 value 3.986005e14 changes the total by less than 1e-16 and the periodic amplitude by about 7e-8 of itself",
     "inclination, node and argument of perigee do not change the first-order rate or the periodic term",
 ];
-/// The model note of an orbit when J2 was asked for at a level that also covers other subjects:
-/// [`orbit_rate`] has no J2 mean rate.
+/// The model note of an orbit when J2 (or the GRS80 field) was asked for at a level that also
+/// covers other subjects: [`orbit_rate`] has no J2 mean rate.
 pub const ORBIT_J2_NOT_APPLIED_NOTE: &str = "the request-level gravity_model j2 does not apply to orbit mean rates (the J2 average depends on the definition of a and e at the level of the J2 effect); point_mass used: give a state vector for J2";
+
+/// The same note for a request-level `grs80`.
+pub const ORBIT_GRS80_NOT_APPLIED_NOTE: &str = "the request-level gravity_model grs80 does not apply to orbit mean rates (the average of its zonal terms depends on the definition of a and e at their own level); point_mass used: give a state vector for grs80";
 
 /// Mean rate and periodic term of a clock on a Keplerian orbit (GM of IERS Conventions (2010)
 /// table 1.1, TCG-compatible).

@@ -64,6 +64,9 @@ pub const STATE_NOTES: [&str; 2] = [
 /// The model note of [`state_rate`] with [`GravityModel::J2`].
 pub const STATE_J2_NOTE: &str = "J2 about the frame's z axis: exact for ITRF; for GCRS the precession-nutation tilt of the pole changes the rate by less than 3e-15 for low orbits";
 
+/// The model note of [`state_rate`] with [`GravityModel::Grs80`].
+pub const STATE_GRS80_NOTE: &str = "GRS80 normal field in closed form about the frame's z axis (Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)), with no disturbing potential and the GRS80 GM 3.986005e14 (1.5e-9 above the IERS Conventions (2010) GM, about 1e-16 of rate near the Earth): a state at rest on the ellipsoid gets (W0 - U0)/c^2 = -5.4e-17 where a ground_site (taken on the geoid) gets 0; for GCRS the pole's precession-nutation tilt applies as for j2";
+
 /// Instantaneous fractional rate of a clock at a geocentric state (first post-Newtonian order).
 ///
 /// Inputs: `state` (GCRS or ITRF position in m and velocity in m/s), `reference` (TT or TCG),

@@ -1,19 +1,15 @@
 //! One-way light time between a transmitter and a receiver near the Earth, with its Sagnac,
 //! Shapiro and clock terms.
 
-use crate::physics::constants::{
-    EARTH_ROTATION_RAD_S, GM_EARTH_M3_S2, MAX_DEPTH_BELOW_SURFACE_M, MAX_GEOCENTRIC_DISTANCE_M,
-    SPEED_OF_LIGHT_M_S,
-};
-use crate::physics::geodesy::{is_deep_inside_earth, itrf_to_inertial_velocity_m_s};
+use crate::physics::constants::{GM_EARTH_M3_S2, MAX_DEPTH_BELOW_SURFACE_M, SPEED_OF_LIGHT_M_S};
 use crate::physics::gravity::norm;
 use crate::physics::rate::state::{periodic_value_s, MIN_GCRS_DISTANCE_M};
 use crate::physics::rate::Frame;
 use crate::physics::readable::readable;
 use crate::physics::signal::error::{SignalError, SignalErrorKind};
-use crate::physics::signal::formulas::{
-    difference_m, rotate_about_z_m, segment_closest_approach_m, shapiro_delay_s,
-};
+use crate::physics::signal::formulas::{difference_m, segment_closest_approach_m, shapiro_delay_s};
+use crate::physics::signal::motion::{emission, Emission, TransmitterMotion};
+use crate::physics::signal::validate::{itrf_velocity, validate_endpoint};
 
 /// Convergence threshold of the light-time iteration: the change of the light time between two
 /// iterations, s. For light times above about 1.1 s the threshold is 4 ulp of the light time
@@ -47,6 +43,9 @@ pub struct PathGeometry {
     pub frame: Frame,
     /// The transmitter's state at the reception instant; it is moved back to the emission time.
     pub transmitter: Endpoint,
+    /// How the transmitter moves when it has a velocity (free fall or uniform; see
+    /// [`emission`]). Without a velocity it is at rest in `frame`.
+    pub transmitter_motion: TransmitterMotion,
     /// The receiver at the reception instant.
     pub receiver: Endpoint,
 }
@@ -82,10 +81,11 @@ pub struct SignalPath {
 /// position in a non-rotating frame, solved by fixed-point iteration from tau_0 = |x_R - x_T|/c
 /// until tau changes by less than [`CONVERGENCE_TOLERANCE_S`] (at most [`MAX_ITERATIONS`]).
 ///
-/// * The transmitter moves uniformly in the input frame: x_T(t_R - tau) = x_T - v_T tau.
-///   Its acceleration is neglected: an error of about a tau^2 / 2 in range, 1 to 2 mm for a
-///   navigation satellite (a about 0.6 m/s^2 in either frame, tau about 0.07 s); none for a
-///   transmitter at rest in its frame.
+/// * The transmitter's motion over the flight is [`emission`]'s: in free fall (the default for
+///   a transmitter with a velocity) integrated in the point-mass plus J2 field, within 1e-8 m
+///   of its true path for a navigation satellite; uniform in the input frame when asked (an
+///   error of about a tau^2 / 2, 1 to 2 mm for a navigation satellite); at rest in the frame
+///   without a velocity (ITRF: carried exactly by the Earth's rotation).
 /// * GCRS input: X_T = x_T(t_T); the Sagnac term is 0 (the rotation is in the positions).
 /// * ITRF input (the GNSS way): the computation runs in the non-rotating frame whose axes are
 ///   the Earth-fixed axes at t_R; the transmitter's Earth-fixed position at emission is rotated
@@ -109,9 +109,21 @@ pub struct SignalPath {
 /// 20.3.3.4.3.3.2 and 20.3.3.3.3.1; Ashby (2003) Living Rev. Relativity 6, 1, section 5.
 pub fn signal_path(geometry: &PathGeometry) -> Result<SignalPath, SignalError> {
     let frame = geometry.frame;
-    let transmitter = validate_endpoint(frame, "transmitter", &geometry.transmitter)?;
-    let receiver = validate_endpoint(frame, "receiver", &geometry.receiver)?;
-    let transmitter_velocity_m_s = transmitter.velocity_m_s.unwrap_or([0.0; 3]);
+    let transmitter = geometry.transmitter;
+    let receiver = geometry.receiver;
+    validate_endpoint(
+        frame,
+        "transmitter",
+        transmitter.position_m,
+        transmitter.velocity_m_s,
+    )?;
+    validate_endpoint(
+        frame,
+        "receiver",
+        receiver.position_m,
+        receiver.velocity_m_s,
+    )?;
+    let motion = geometry.transmitter_motion;
     let initial_range_m = norm(difference_m(receiver.position_m, transmitter.position_m));
     if initial_range_m < MIN_RANGE_M {
         return Err(SignalError::new(
@@ -124,25 +136,12 @@ pub fn signal_path(geometry: &PathGeometry) -> Result<SignalPath, SignalError> {
     }
     let mut light_time_s = initial_range_m / SPEED_OF_LIGHT_M_S;
     for iteration in 1..=MAX_ITERATIONS {
-        let step = evaluate(
-            frame,
-            &transmitter,
-            transmitter_velocity_m_s,
-            &receiver,
-            light_time_s,
-        )?;
+        let step = evaluate(frame, &transmitter, motion, &receiver, light_time_s)?;
         let change_s = (step.light_time_s - light_time_s).abs();
         light_time_s = step.light_time_s;
         let tolerance_s = CONVERGENCE_TOLERANCE_S.max(4.0 * f64::EPSILON * light_time_s);
         if change_s <= tolerance_s {
-            return finish(
-                frame,
-                &transmitter,
-                transmitter_velocity_m_s,
-                &receiver,
-                step,
-                iteration,
-            );
+            return finish(frame, &transmitter, motion, &receiver, step, iteration);
         }
     }
     Err(SignalError::new(
@@ -158,8 +157,7 @@ pub fn signal_path(geometry: &PathGeometry) -> Result<SignalPath, SignalError> {
 #[derive(Debug, Clone, Copy)]
 struct Step {
     light_time_s: f64,
-    emission_frame_m: [f64; 3],
-    emission_inertial_m: [f64; 3],
+    emission: Emission,
     inertial_range_m: f64,
     shapiro_s: f64,
 }
@@ -167,32 +165,28 @@ struct Step {
 fn evaluate(
     frame: Frame,
     transmitter: &Endpoint,
-    velocity_m_s: [f64; 3],
+    motion: TransmitterMotion,
     receiver: &Endpoint,
     light_time_s: f64,
 ) -> Result<Step, SignalError> {
-    let p = transmitter.position_m;
-    let emission_frame_m = [
-        p[0] - velocity_m_s[0] * light_time_s,
-        p[1] - velocity_m_s[1] * light_time_s,
-        p[2] - velocity_m_s[2] * light_time_s,
-    ];
-    let emission_inertial_m = match frame {
-        Frame::Gcrs => emission_frame_m,
-        Frame::Itrf => rotate_about_z_m(emission_frame_m, -EARTH_ROTATION_RAD_S * light_time_s),
-    };
-    let inertial_range_m = norm(difference_m(receiver.position_m, emission_inertial_m));
+    let emission = emission(
+        frame,
+        transmitter.position_m,
+        transmitter.velocity_m_s,
+        motion,
+        light_time_s,
+    );
+    let inertial_range_m = norm(difference_m(receiver.position_m, emission.inertial_m));
     let shapiro_s = shapiro_delay_s(
         GM_EARTH_M3_S2,
-        norm(emission_inertial_m),
+        norm(emission.inertial_m),
         norm(receiver.position_m),
         inertial_range_m,
     )
     .ok_or_else(path_through_earth)?;
     Ok(Step {
         light_time_s: inertial_range_m / SPEED_OF_LIGHT_M_S + shapiro_s,
-        emission_frame_m,
-        emission_inertial_m,
+        emission,
         inertial_range_m,
         shapiro_s,
     })
@@ -201,20 +195,15 @@ fn evaluate(
 fn finish(
     frame: Frame,
     transmitter: &Endpoint,
-    velocity_m_s: [f64; 3],
+    motion: TransmitterMotion,
     receiver: &Endpoint,
     last: Step,
     iterations: u32,
 ) -> Result<SignalPath, SignalError> {
     // Re-evaluate at the converged light time so that every part comes from the same geometry.
-    let step = evaluate(
-        frame,
-        transmitter,
-        velocity_m_s,
-        receiver,
-        last.light_time_s,
-    )?;
-    let emission_distance_m = norm(step.emission_frame_m);
+    let step = evaluate(frame, transmitter, motion, receiver, last.light_time_s)?;
+    let emission_frame_m = step.emission.frame_m;
+    let emission_distance_m = norm(emission_frame_m);
     if emission_distance_m < MIN_GCRS_DISTANCE_M {
         return Err(SignalError::new(
             SignalErrorKind::InsideEarth,
@@ -222,22 +211,26 @@ fn finish(
             "moved back to the emission time, the transmitter is inside the Earth",
         ));
     }
-    if segment_closest_approach_m(step.emission_inertial_m, receiver.position_m)
+    if segment_closest_approach_m(step.emission.inertial_m, receiver.position_m)
         < MIN_GCRS_DISTANCE_M
     {
         return Err(path_through_earth());
     }
     let geometric_range_m = match frame {
         Frame::Gcrs => step.inertial_range_m,
-        Frame::Itrf => norm(difference_m(receiver.position_m, step.emission_frame_m)),
+        Frame::Itrf => norm(difference_m(receiver.position_m, emission_frame_m)),
     };
-    let clock_periodic_s = transmitter.velocity_m_s.map(|velocity| {
-        let inertial_velocity_m_s = match frame {
-            Frame::Gcrs => velocity,
-            Frame::Itrf => itrf_velocity(step.emission_frame_m, velocity),
-        };
-        periodic_value_s(step.emission_frame_m, inertial_velocity_m_s)
-    });
+    let clock_periodic_s = match step.emission.inertial_velocity_m_s {
+        // r.v is the same on the axes at emission and at reception.
+        Some(velocity) => Some(periodic_value_s(step.emission.inertial_m, velocity)),
+        None => transmitter.velocity_m_s.map(|velocity| {
+            let inertial_velocity_m_s = match frame {
+                Frame::Gcrs => velocity,
+                Frame::Itrf => itrf_velocity(emission_frame_m, velocity),
+            };
+            periodic_value_s(emission_frame_m, inertial_velocity_m_s)
+        }),
+    };
     Ok(SignalPath {
         light_time_s: step.light_time_s,
         geometric_range_m,
@@ -246,14 +239,8 @@ fn finish(
         sagnac_s: (step.inertial_range_m - geometric_range_m) / SPEED_OF_LIGHT_M_S,
         shapiro_s: step.shapiro_s,
         clock_periodic_s,
-        emission_position_m: step.emission_frame_m,
+        emission_position_m: emission_frame_m,
     })
-}
-
-fn itrf_velocity(position_m: [f64; 3], velocity_m_s: [f64; 3]) -> [f64; 3] {
-    // Inputs are finite (checked), so the geodesy helper cannot fail; fall back to the
-    // Earth-fixed velocity to stay panic-free.
-    itrf_to_inertial_velocity_m_s(position_m, velocity_m_s).unwrap_or(velocity_m_s)
 }
 
 fn path_through_earth() -> SignalError {
@@ -264,71 +251,6 @@ fn path_through_earth() -> SignalError {
             "the straight path from the transmitter to the receiver passes more than {MAX_DEPTH_BELOW_SURFACE_M} m below the Earth's polar radius: the receiver cannot see the transmitter"
         ),
     )
-}
-
-fn validate_endpoint(
-    frame: Frame,
-    owner: &str,
-    endpoint: &Endpoint,
-) -> Result<Endpoint, SignalError> {
-    let position_field = format!("{owner}.position_m");
-    let velocity_field = format!("{owner}.velocity_m_s");
-    let position_m = endpoint.position_m;
-    if !position_m.iter().all(|value| value.is_finite()) {
-        return Err(SignalError::new(
-            SignalErrorKind::NotFinite,
-            position_field,
-            "every component must be a finite number",
-        ));
-    }
-    let distance_m = norm(position_m);
-    if !distance_m.is_finite() || distance_m > MAX_GEOCENTRIC_DISTANCE_M {
-        return Err(SignalError::new(
-            SignalErrorKind::BeyondRange,
-            position_field,
-            format!(
-                "geocentric distance {distance_m} m is beyond {MAX_GEOCENTRIC_DISTANCE_M} m, where the Sun's delay (not modelled) dominates the Earth's", distance_m = readable(distance_m)
-            ),
-        ));
-    }
-    let inside = match frame {
-        Frame::Gcrs => distance_m < MIN_GCRS_DISTANCE_M,
-        Frame::Itrf => is_deep_inside_earth(position_m),
-    };
-    if inside {
-        return Err(SignalError::new(
-            SignalErrorKind::InsideEarth,
-            position_field,
-            format!(
-                "the position (geocentric distance {distance_m:.1} m) is more than {MAX_DEPTH_BELOW_SURFACE_M} m inside the Earth"
-            ),
-        ));
-    }
-    if let Some(velocity_m_s) = endpoint.velocity_m_s {
-        if !velocity_m_s.iter().all(|value| value.is_finite()) {
-            return Err(SignalError::new(
-                SignalErrorKind::NotFinite,
-                velocity_field,
-                "every component must be a finite number",
-            ));
-        }
-        let inertial_m_s = match frame {
-            Frame::Gcrs => velocity_m_s,
-            Frame::Itrf => itrf_velocity(position_m, velocity_m_s),
-        };
-        let speed_m_s = norm(inertial_m_s);
-        if speed_m_s.is_nan() || speed_m_s >= SPEED_OF_LIGHT_M_S {
-            return Err(SignalError::new(
-                SignalErrorKind::SpeedNotBelowC,
-                velocity_field,
-                format!(
-                    "inertial speed must be below c = {SPEED_OF_LIGHT_M_S} m/s, got {speed_m_s}",
-                    speed_m_s = readable(speed_m_s)
-                ),
-            ));
-        }
-    }
-    Ok(*endpoint)
 }
 
 #[cfg(test)]

@@ -1,6 +1,6 @@
 use super::*;
 use crate::physics::constants::{
-    GM_EARTH_GPS_M3_S2, GRS80_SEMI_MAJOR_AXIS_M, SPEED_OF_LIGHT_SQUARED_M2_S2,
+    EARTH_ROTATION_RAD_S, GM_EARTH_GPS_M3_S2, GRS80_SEMI_MAJOR_AXIS_M, SPEED_OF_LIGHT_SQUARED_M2_S2,
 };
 use crate::physics::signal::formulas::sagnac_rotating_frame_s;
 
@@ -11,6 +11,7 @@ fn path(frame: Frame, transmitter: Endpoint, receiver: [f64; 3]) -> SignalPath {
     let geometry = PathGeometry {
         frame,
         transmitter,
+        transmitter_motion: TransmitterMotion::Uniform,
         receiver: Endpoint {
             position_m: receiver,
             velocity_m_s: None,
@@ -232,6 +233,7 @@ fn error_of(frame: Frame, transmitter: Endpoint, receiver: Endpoint) -> SignalEr
     signal_path(&PathGeometry {
         frame,
         transmitter,
+        transmitter_motion: TransmitterMotion::Uniform,
         receiver,
     })
     .unwrap_err()

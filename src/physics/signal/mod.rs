@@ -13,9 +13,12 @@
 pub mod error;
 pub mod formulas;
 pub mod light_time;
+pub mod motion;
 pub mod two_way;
+pub mod validate;
 
 pub use crate::physics::rate::Frame;
 pub use error::{SignalError, SignalErrorKind};
 pub use light_time::{signal_path, Endpoint, PathGeometry, SignalPath};
+pub use motion::TransmitterMotion;
 pub use two_way::{two_way_sagnac, Station, TwoWayLink, TwoWaySagnac};

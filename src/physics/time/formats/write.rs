@@ -100,6 +100,17 @@ impl InstantDigits {
         self.scale
     }
 
+    /// The MJD day number of the calendar reading.
+    pub fn mjd(&self) -> i64 {
+        self.mjd
+    }
+
+    /// The reading as attoseconds since J2000.0 of the scale (UTC: 86 400 s per day), the
+    /// value of [`super::reading_count_attos`] without reading the instant again.
+    pub fn reading_count_attos(&self) -> i128 {
+        i128::from(self.count_seconds) * ATTOS_PER_SECOND + i128::from(self.count_attos)
+    }
+
     fn seconds_of_day_attos(&self) -> i128 {
         i128::from(self.day_seconds) * ATTOS_PER_SECOND + i128::from(self.day_attos)
     }

@@ -67,6 +67,19 @@ fn check(instant: Instant, table: &LeapTable) {
     let expected = reference_write_instant(&instant, table);
     let written = write_instant(&instant, table).ok();
     assert_eq!(written, expected, "{instant:?}");
+    // The reading kept by the writer is the one the reader computes.
+    if let Ok(digits) = InstantDigits::new(&instant, table) {
+        assert_eq!(
+            Ok(digits.reading_count_attos()),
+            reading_count_attos(&instant, table),
+            "{instant:?}"
+        );
+        assert_eq!(
+            day_reading(&instant, table).map(|r| r.mjd),
+            Ok(digits.mjd()),
+            "{instant:?}"
+        );
+    }
 }
 
 struct SplitMix(u64);

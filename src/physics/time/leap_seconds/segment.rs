@@ -54,6 +54,10 @@ impl Segment {
 
     /// Drift accumulated over `sod_attos` of the day, rounded down (floor) to an attosecond.
     fn drift_within_day_attos(&self, sod_attos: i128) -> Option<i128> {
+        if self.rate_e7_per_day == 0 {
+            // Every expression since 1972: no drift, and no 128-bit division to find it.
+            return Some(0);
+        }
         sod_attos
             .checked_mul(i128::from(self.rate_e7_per_day))?
             .checked_div_euclid(DRIFT_DIVISOR)
@@ -71,6 +75,10 @@ impl Segment {
     /// With r the rate and D the divisor, s0 = floor(u D / (D + r)) has g(s0) <= u and
     /// g(s0 + 2) > u, so the answer is s0 or s0 + 1.
     pub(crate) fn sod_from_tai_since_day_start(&self, tai_attos: i128) -> Option<i128> {
+        if self.rate_e7_per_day == 0 {
+            // g(s) = s: the inverse is the identity (s0 = u, and g(u + 1) > u).
+            return Some(tai_attos);
+        }
         let rate = i128::from(self.rate_e7_per_day);
         let s0 = tai_attos
             .checked_mul(DRIFT_DIVISOR)?

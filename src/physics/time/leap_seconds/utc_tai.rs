@@ -108,10 +108,7 @@ impl LeapTable {
         let per_day = seg.tai_per_day_attos().ok_or_else(overflow)?;
         // whole days since the expression began; the last day before a jump may run past a
         // nominal day (positive jump or leap second), so clamp to the expression's last day
-        let days = t
-            .checked_sub(seg_start_tai)
-            .ok_or_else(overflow)?
-            .div_euclid(per_day);
+        let days = floor_div(t.checked_sub(seg_start_tai).ok_or_else(overflow)?, per_day);
         let mut mjd = i64::try_from(days)
             .ok()
             .and_then(|d| seg.start_mjd.checked_add(d))
@@ -133,4 +130,59 @@ fn day_start_tai_with(seg: &Segment, mjd: i64) -> Option<i128> {
     days.checked_mul(ATTOS_PER_DAY)?
         .checked_sub(HALF_DAY_ATTOS)?
         .checked_add(seg.tai_minus_utc_attos(mjd, 0)?)
+}
+
+/// `numerator.div_euclid(denominator)` for a positive `denominator`, by a floating-point
+/// estimate corrected with exact multiplications (a 128-bit division is the slowest step of a
+/// UTC reading otherwise). The estimate is off by at most one day for any count the engine
+/// holds (|count| < 2^100 as: the f64 quotient's relative error is 2^-52); the loops fix it.
+fn floor_div(numerator: i128, denominator: i128) -> i128 {
+    let mut quotient = (numerator as f64 / denominator as f64).floor() as i128;
+    // Correct until quotient * denominator <= numerator < (quotient + 1) * denominator.
+    while quotient.saturating_mul(denominator) > numerator {
+        quotient -= 1;
+    }
+    while (quotient + 1).saturating_mul(denominator) <= numerator {
+        quotient += 1;
+    }
+    quotient
+}
+
+#[cfg(test)]
+mod floor_div_tests {
+    use super::*;
+
+    #[test]
+    fn floor_div_is_div_euclid() {
+        // Against the integer division of the standard library (common practice), at the edges
+        // of days and far from J2000.0.
+        let day = ATTOS_PER_DAY;
+        let mut values = vec![0_i128, 1, -1, day, day - 1, -day, -day - 1, day + 1];
+        for k in [1_i128, 7, 365, 36_525, 2_914_695, 10_000_000] {
+            for delta in [-1_i128, 0, 1] {
+                values.push(k * day + delta);
+                values.push(-k * day + delta);
+            }
+        }
+        let mut x: u64 = 88_172_645_463_325_252;
+        for _ in 0..100_000 {
+            x ^= x << 13;
+            x ^= x >> 7;
+            x ^= x << 17;
+            values.push(i128::from(x as i64) * 1_000_003 + i128::from(x % 977));
+        }
+        for per_day in [
+            day,
+            day + 1_000_000_000_000_000_000,
+            day + 13 * 100_000_000_000,
+        ] {
+            for &v in &values {
+                assert_eq!(
+                    floor_div(v, per_day),
+                    v.div_euclid(per_day),
+                    "{v} / {per_day}"
+                );
+            }
+        }
+    }
 }
