@@ -461,3 +461,25 @@ async fn the_iau_name_gcrs_reads_as_the_inertial_geocentric_frame() {
         "{body}"
     );
 }
+
+#[tokio::test]
+async fn a_ut1_ephemeris_is_refused_with_its_code() {
+    // UT1 is a scale of the engine (GET /v1/time/convert) but follows the Earth's rotation, so
+    // the trajectory readers refuse it (src/trajectory/json.rs; this service's rule).
+    let server = TestServer::start().await;
+    let orbit = Kepler {
+        a_m: 6_878_137.0,
+        e: 0.001,
+        inclination_rad: 0.9,
+    };
+    let mut ephemeris = json_ephemeris(&orbit, 10.0, 7);
+    ephemeris["time_scale"] = json!("UT1");
+    let answer = post_body(
+        &server,
+        "",
+        "application/json",
+        serde_json::to_vec(&ephemeris).unwrap_or_default(),
+    )
+    .await;
+    assert_problem(&answer, 422, "unsupported_time_scale");
+}

@@ -4,6 +4,7 @@
 //! tests/reference/make_time_conversion_reference.py with pyerfa (ERFA functions dat, tttcg,
 //! tcgtt, dtdb, tdbtcb, tcbtdb). Agreement required: 1 ps (the target).
 
+use eigenzeit::physics::earth::eop::EopTable;
 use eigenzeit::physics::time::convert::{convert, ConversionContext, TdbEvaluation};
 use eigenzeit::physics::time::formats::{parse_instant, reading_count_attos, InstantFormat};
 use eigenzeit::physics::time::instant::{
@@ -58,6 +59,9 @@ fn difference_s(row: &Row<'_>, evaluation: TdbEvaluation) -> f64 {
         table,
         observer: row.observer.map(TopocentricObserver::from_itrf_m),
         tdb_evaluation: evaluation,
+        // The reference passes ERFA `dtdb` the UTC fraction of day (the script's `ut`), so
+        // the topocentric term here takes it too (no UT1 source).
+        ut1: None,
     };
     let input = parse_instant(row.input, row.format, row.from, table)
         .unwrap_or_else(|e| panic!("{}: {e}", row.input));
@@ -118,10 +122,12 @@ fn every_chain_round_trips_below_one_picosecond() {
         307_045.0,
         4_919_474.9,
     ]));
+    // UT1 takes part where the built-in EOP table covers the epoch (1962 .. 2027).
     let context = ConversionContext {
         table,
         observer,
         tdb_evaluation: TdbEvaluation::Fitted,
+        ut1: Some(EopTable::builtin()),
     };
     let mut worst_attos: i128 = 0;
     for count in epochs_1960_2100(3_000) {

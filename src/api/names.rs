@@ -185,7 +185,7 @@ impl PartialSchema for TargetScaleName {
     fn schema() -> RefOr<Schema> {
         string_enum(
             std::iter::once(ALL_SCALES).chain(Scale::SPELLINGS.iter().copied()),
-            "A target time scale, by its abbreviation, or `all` for every scale.",
+            "A target time scale, by its abbreviation, or `all` for every scale but UT1 (UT1 exists only where the Earth orientation table covers the epoch: name it).",
         )
     }
 }
@@ -403,7 +403,7 @@ impl PartialSchema for TargetScaleList {
             .schema_type(Type::String)
             .pattern(Some(scale_list_pattern()))
             .description(Some(
-                "Scale abbreviations or `all`, comma-separated, no spaces (e.g. `TAI,TT,TDB`).",
+                "Scale abbreviations or `all` (every scale but UT1), comma-separated, no spaces (e.g. `TAI,TT,TDB`).",
             ))
             .into()
     }

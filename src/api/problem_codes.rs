@@ -61,7 +61,7 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     // Time scales and instants (the time engine).
     (
         TimeErrorKind::UnknownScale.as_str(),
-        "The time scale is not one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST.",
+        "The time scale is not one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST, UT1.",
     ),
     (
         TimeErrorKind::UnknownFormat.as_str(),
@@ -140,6 +140,10 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     (
         EopLookupErrorKind::BadUtc.as_str(),
         "The UTC reading of an Earth orientation lookup does not exist in the leap-second table (before 1960, or a second outside its day).",
+    ),
+    (
+        TimeErrorKind::Ut1Unavailable.as_str(),
+        "A conversion to or from UT1 at an epoch the Earth orientation table in force does not cover (it runs from 1962 to the end of its predictions; `detail` names the edge day); the operators can give a newer file (`--eop-file`, `--eop-url`).",
     ),
     // Clock rates, comparisons and signal paths.
     (
@@ -318,6 +322,10 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     (
         "unsupported_frame",
         "The ephemeris frame is not one the service reads (GCRS, GCRF, EME2000, ICRF inertial; ITRF Earth-fixed).",
+    ),
+    (
+        "unsupported_time_scale",
+        "The ephemeris `time_scale` is UT1, which follows the Earth's rotation and is not taken for trajectories; give the epochs in UTC or a uniform scale.",
     ),
     (
         "oem_unsupported_version",

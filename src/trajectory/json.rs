@@ -118,6 +118,13 @@ pub fn from_document<O>(
             "time_scale",
         )
     })?;
+    if scale.needs_earth_orientation() {
+        return Err(TrajectoryError::new(
+            "unsupported_time_scale",
+            format!("time_scale: {scale} follows the Earth's rotation and is not taken for trajectories; give the epochs in UTC or a uniform scale (TAI, TT, TDB, GPST, ...)"),
+        )
+        .with_field("time_scale"));
+    }
     let format = match &document.epoch_format {
         Some(name) => InstantFormat::from_name(name)
             .ok_or_else(|| time_error(TimeError::UnknownFormat(name.clone()), "epoch_format"))?,
@@ -151,7 +158,9 @@ pub fn from_document<O>(
                 )
             })?;
             states.push(TrajectoryState {
-                epoch: to_storage(epoch, context),
+                epoch: to_storage(epoch, context).map_err(|e| {
+                    TrajectoryError::at_state("bad_epoch", &object.id, index, e.to_string())
+                })?,
                 position_m: state.position_m,
                 velocity_m_s: state.velocity_m_s,
             });

@@ -34,8 +34,13 @@ fn reads_a_document_and_refuses_bad_ones() {
         Some("unsupported_frame")
     );
     assert_eq!(
-        code(&text.replace("\"UTC\"", "\"UT1\"")),
+        code(&text.replace("\"UTC\"", "\"UT2\"")),
         Some("unknown_scale")
+    );
+    // UT1 is a scale of the engine, but not a trajectory's (it follows the Earth's rotation).
+    assert_eq!(
+        code(&text.replace("\"UTC\"", "\"UT1\"")),
+        Some("unsupported_time_scale")
     );
     assert_eq!(
         code(&text.replacen(", \"velocity_m_s\": [0, 7500, 0]", "", 1)),

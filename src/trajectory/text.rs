@@ -52,11 +52,11 @@ pub fn storage_scale(scale: Scale) -> Scale {
 }
 
 /// Converts an instant to its storage scale (see [`storage_scale`]) through the engine.
-pub fn to_storage(instant: Instant, context: &ConversionContext<'_>) -> Instant {
+pub fn to_storage(instant: Instant, context: &ConversionContext<'_>) -> Result<Instant, TimeError> {
     if storage_scale(instant.scale()) == instant.scale() {
-        instant
+        Ok(instant)
     } else {
-        Instant::from_count_attos(Scale::Tt, to_tt_attos(&instant, context))
+        to_tt_attos(&instant, context).map(|tt| Instant::from_count_attos(Scale::Tt, tt))
     }
 }
 

@@ -123,7 +123,8 @@ fn output_grid(
     if epochs_s.last().is_some_and(|t| *t < end_s) {
         epochs_s.push(end_s);
     }
-    let start_tt = to_tt_attos(&start, context);
+    let start_tt = to_tt_attos(&start, context)
+        .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(&track.id))?;
     let epochs = epochs_s
         .iter()
         .map(|t_s| {
@@ -135,10 +136,11 @@ fn output_grid(
 }
 
 /// TT (attoseconds since J2000.0) half-way between a track's first and last epochs; `None`
-/// without states.
+/// without states, or when an epoch has no TT (only UT1 outside the EOP table can fail, and
+/// the readers refuse UT1 tracks).
 pub fn middle_tt_attos(track: &ObjectTrack, context: &ConversionContext<'_>) -> Option<i128> {
-    let first = to_tt_attos(&track.states.first()?.epoch, context);
-    let last = to_tt_attos(&track.states.last()?.epoch, context);
+    let first = to_tt_attos(&track.states.first()?.epoch, context).ok()?;
+    let last = to_tt_attos(&track.states.last()?.epoch, context).ok()?;
     Some(first + (last - first) / 2)
 }
 

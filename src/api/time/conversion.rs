@@ -116,6 +116,11 @@ pub fn convert_one(
             digits: output,
         });
     }
+    warnings.extend(super::ut1_warning::ut1_warning(
+        &input_instant,
+        targets,
+        context,
+    ));
     Ok(Converted {
         input,
         results,

@@ -25,7 +25,7 @@ fn parse_targets<'a>(
     let mut scales = Vec::new();
     for (index, name) in names.enumerate() {
         if name == ALL_SCALES {
-            scales.extend(Scale::ALL);
+            scales.extend(Scale::without_earth_orientation());
         } else {
             scales.push(parse_scale(name, &format!("{field}[{index}]"))?);
         }
@@ -63,7 +63,7 @@ const CSV_EXAMPLE: &str = "epoch,TAI_iso,TAI_j2000_s,TDB_iso,TDB_j2000_s,warning
             (Conversion = "application/json"),
             (String = "text/csv", example = json!(CSV_EXAMPLE)))),
         QueryProblems,
-        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales), not_finite, observer_not_on_ground", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales), ut1_outside_eop_table (UT1 asked for, or given, at an epoch the Earth orientation table does not cover: before 1962 or after the end of its predictions), not_finite, observer_not_on_ground", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn convert_get(
     State(state): State<AppState>,
@@ -80,10 +80,12 @@ pub async fn convert_get(
         .as_deref()
         .map(parse_observer_query)
         .transpose()?;
+    let eop = state.eop_table();
     let context = ConversionContext {
         table: &table,
         observer,
         tdb_evaluation: TdbEvaluation::Fitted,
+        ut1: Some(&*eop),
     };
     let converted = convert_one(
         &query.at,
@@ -145,6 +147,7 @@ pub async fn convert_post(
         .map(|o| observer_from_input(o, "observer"))
         .transpose()?;
     let table = state.leap_table();
+    let eop = state.eop_table();
     let items = request.epochs.len();
     let answer_type = answer_type(&headers);
     let work = move || {
@@ -152,6 +155,7 @@ pub async fn convert_post(
             table: &table,
             observer,
             tdb_evaluation: TdbEvaluation::Fitted,
+            ut1: Some(&*eop),
         };
         let convert_at = |index: usize, text: &str| {
             convert_one(

@@ -167,7 +167,8 @@ mod tests {
                 epoch,
                 InstantFormat::Iso,
                 Scale::Utc,
-                &Scale::ALL,
+                // every scale but UT1 (the context has no EOP table; 2099 is outside it)
+                &Scale::without_earth_orientation().collect::<Vec<_>>(),
                 &context,
                 FieldName::Named("at"),
             );

@@ -8,6 +8,7 @@ pub mod json_view;
 pub mod observer;
 pub mod reference;
 pub mod types;
+pub mod ut1_warning;
 
 use axum::routing::get;
 use axum::Router;

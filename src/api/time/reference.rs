@@ -34,6 +34,10 @@ pub struct ScaleInfo {
     pub relation: String,
     /// Whether the scale has leap seconds (only UTC).
     pub has_leap_seconds: bool,
+    /// Whether the scale needs the Earth orientation table (only UT1): it is answered only for
+    /// epochs the table covers (`GET /v1/earth/eop` shows its span), and `all` targets leave
+    /// it out.
+    pub needs_earth_orientation: bool,
     /// Start of week 0 (ISO date, in the scale) for GNSS scales.
     #[serde(skip_serializing_if = "Option::is_none")]
     pub week_zero_start: Option<String>,
@@ -144,6 +148,7 @@ pub async fn scales(headers: HeaderMap) -> Response {
             realized_by: scale.realized_by().to_string(),
             relation: scale.relation().to_string(),
             has_leap_seconds: scale == Scale::Utc,
+            needs_earth_orientation: scale.needs_earth_orientation(),
             week_zero_start: gnss_week_origin_mjd(scale).map(iso_date),
         })
         .collect();
@@ -223,7 +228,7 @@ pub async fn now(
         &text,
         InstantFormat::UnixS,
         Scale::Utc,
-        &Scale::ALL,
+        &Scale::without_earth_orientation().collect::<Vec<_>>(),
         &context,
         FieldName::Named("now"),
     )?;

@@ -99,7 +99,8 @@ pub struct Conversion {
     pub input: InstantForms,
     /// One entry per target scale, in the order asked.
     pub results: Vec<ConvertedInstant>,
-    /// Cautions about this answer (e.g. a UTC instant past the leap-second table's expiry).
+    /// Cautions about this answer (e.g. a UTC instant past the leap-second table's expiry, or
+    /// UT1 - UTC from predicted days of the Earth orientation table, with its likely error).
     pub warnings: Vec<String>,
 }
 
@@ -118,11 +119,12 @@ pub struct ConvertQuery {
     /// The instant, as text in `format` (e.g. `2026-03-14T06:30:00.123456789012`).
     #[param(value_type = InstantString, example = "2026-03-14T06:30:00.123456789012")]
     pub at: String,
-    /// Scale of `at` (default UTC): UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST, written
-    /// exactly so.
+    /// Scale of `at` (default UTC): UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST, UT1,
+    /// written exactly so (UT1 only where the Earth orientation table covers the epoch).
     #[param(value_type = Option<ScaleName>, example = "UTC")]
     pub from: Option<String>,
-    /// Target scales, comma-separated without spaces, or `all` (default `all`).
+    /// Target scales, comma-separated without spaces, or `all` (default `all`: every scale but
+    /// UT1, which exists only where the Earth orientation table covers the epoch; name it).
     #[param(value_type = Option<TargetScaleList>, example = "TAI,TT,TDB")]
     pub to: Option<String>,
     /// How `at` is written: iso (default), mjd, jd, j2000_s, unix_s (UTC only), gnss_week (GNSS scales).
@@ -174,7 +176,7 @@ pub struct ConvertBatchRequest {
     /// Scale of the epochs.
     #[schema(value_type = ScaleName)]
     pub from: String,
-    /// Target scales, or `["all"]`; at least one.
+    /// Target scales, or `["all"]` (every scale but UT1); at least one.
     #[schema(value_type = Vec<TargetScaleName>, min_items = 1)]
     pub to: Vec<String>,
     /// How the epochs are written (default `iso`).

@@ -1,4 +1,4 @@
-//! Conversions between time scales, all through TT.
+//! Conversions between time scales, all through TT; UT1 through UTC (see the `ut1` module).
 //!
 //! Fixed offsets are added exactly in attoseconds; the rate relations (TCG, TCB) and the TDB
 //! series are evaluated in `f64` on offsets of at most tens of seconds, so their rounding stays
@@ -6,11 +6,13 @@
 
 use super::error::TimeError;
 use super::instant::{
-    attos_to_seconds_f64, seconds_f64_to_attos, Instant, ATTOS_PER_DAY, ATTOS_PER_SECOND,
+    attos_to_seconds_f64, seconds_f64_to_attos, Instant, ATTOS_MIDNIGHT_TO_J2000, ATTOS_PER_DAY,
+    ATTOS_PER_SECOND,
 };
 use super::leap_seconds::LeapTable;
 use super::scale::Scale;
 use super::tdb_series::{tdb_minus_tt_fast_s, tdb_minus_tt_series_s, TopocentricObserver};
+use super::ut1::{tai_from_ut1_attos, ut1_from_tai, ut1_minus_tai_attos, Ut1Source};
 use crate::physics::constants;
 use crate::physics::constants::{L_B, L_G, T0_TO_J2000_ATTOS, TDB0_S, TT_MINUS_TAI_ATTOS};
 
@@ -42,6 +44,10 @@ pub struct ConversionContext<'a> {
     pub observer: Option<TopocentricObserver>,
     /// Fitted or full TDB - TT series.
     pub tdb_evaluation: TdbEvaluation,
+    /// The source of UT1 - UTC (the Earth orientation table in force), for UT1 and the
+    /// topocentric TDB term; `None`: conversions to or from UT1 fail with
+    /// [`TimeError::Ut1Unavailable`].
+    pub ut1: Option<&'a dyn Ut1Source>,
 }
 
 impl<'a> ConversionContext<'a> {
@@ -51,6 +57,15 @@ impl<'a> ConversionContext<'a> {
             table,
             observer: None,
             tdb_evaluation: TdbEvaluation::Fitted,
+            ut1: None,
+        }
+    }
+
+    /// The same context with `source` for UT1 - UTC.
+    pub fn with_ut1(self, source: &'a dyn Ut1Source) -> Self {
+        Self {
+            ut1: Some(source),
+            ..self
         }
     }
 }
@@ -83,12 +98,17 @@ pub fn tdb_minus_tcb_s(tcb_attos: i128) -> f64 {
     -L_B * seconds_since_t0(tcb_attos) + TDB0_S
 }
 
-/// UT1 fraction of day for the topocentric TDB term, approximated by the UTC fraction of day
-/// (|UT1 - UTC| < 0.9 s changes a 2 us diurnal term by less than 0.14 ns). Outside the UTC
-/// table, TT - 69.184 s stands in for UTC.
-fn ut_day_fraction(tt_attos: i128, table: &LeapTable) -> f64 {
+/// UT1 fraction of day for the topocentric TDB term (ERFA `eraDtdb` argument `ut`): from the
+/// context's UT1 source where it covers the epoch; elsewhere (no source, or outside its table)
+/// the UTC fraction of day stands in (|UT1 - UTC| < 0.9 s changes the 2 us diurnal term by
+/// less than 0.14 ns), and before UTC (1960) TT - 69.184 s stands in for UTC.
+fn ut_day_fraction(tt_attos: i128, context: &ConversionContext<'_>) -> f64 {
     let tai = tt_attos - TT_MINUS_TAI_ATTOS;
-    let seconds_of_day = match table.utc_from_tai(tai) {
+    if let Ok(ut1_minus_tai) = ut1_minus_tai_attos(tai, context.table, context.ut1) {
+        let sod = (tai + ut1_minus_tai + ATTOS_MIDNIGHT_TO_J2000).rem_euclid(ATTOS_PER_DAY);
+        return sod as f64 / ATTOS_PER_DAY as f64;
+    }
+    let seconds_of_day = match context.table.utc_from_tai(tai) {
         Ok((_, sod)) => sod.min(ATTOS_PER_DAY - 1),
         Err(_) => (tt_attos - 69_184 * ATTOS_PER_SECOND / 1000 + ATTOS_PER_DAY / 2)
             .rem_euclid(ATTOS_PER_DAY),
@@ -100,7 +120,7 @@ fn ut_day_fraction(tt_attos: i128, table: &LeapTable) -> f64 {
 pub fn tdb_minus_tt_s(tt_attos: i128, context: &ConversionContext<'_>) -> f64 {
     let tt_s = attos_to_seconds_f64(tt_attos);
     let (ut, observer) = match &context.observer {
-        Some(observer) => (ut_day_fraction(tt_attos, context.table), Some(observer)),
+        Some(observer) => (ut_day_fraction(tt_attos, context), Some(observer)),
         None => (0.0, None),
     };
     match context.tdb_evaluation {
@@ -109,10 +129,10 @@ pub fn tdb_minus_tt_s(tt_attos: i128, context: &ConversionContext<'_>) -> f64 {
     }
 }
 
-/// The TT count of an instant.
-pub fn to_tt_attos(instant: &Instant, context: &ConversionContext<'_>) -> i128 {
+/// The TT count of an instant. Fails only for UT1 outside the context's UT1 source.
+pub fn to_tt_attos(instant: &Instant, context: &ConversionContext<'_>) -> Result<i128, TimeError> {
     let count = instant.count_attos();
-    match instant.scale() {
+    Ok(match instant.scale() {
         Scale::Tt => count,
         Scale::Utc | Scale::Tai => count + TT_MINUS_TAI_ATTOS,
         Scale::Gpst | Scale::Gst | Scale::Qzsst => {
@@ -125,7 +145,8 @@ pub fn to_tt_attos(instant: &Instant, context: &ConversionContext<'_>) -> i128 {
             let tdb = count + seconds_f64_to_attos(tdb_minus_tcb_s(count));
             tt_from_tdb_attos(tdb, context)
         }
-    }
+        Scale::Ut1 => tai_from_ut1_attos(count, context.table, context.ut1)? + TT_MINUS_TAI_ATTOS,
+    })
 }
 
 /// Solves TT = TDB - (TDB - TT)(TT) by fixed-point iteration (the series changes by less than
@@ -157,6 +178,7 @@ pub fn from_tt_attos(
         }
         Scale::Gpst | Scale::Gst | Scale::Qzsst => tai + GPST_MINUS_TAI_ATTOS,
         Scale::Bdt => tai + BDT_MINUS_TAI_ATTOS,
+        Scale::Ut1 => return ut1_from_tai(tai, context.table, context.ut1),
         Scale::Tcg => tt_attos + seconds_f64_to_attos(tcg_minus_tt_s(tt_attos)),
         Scale::Tdb => tt_attos + seconds_f64_to_attos(tdb_minus_tt_s(tt_attos, context)),
         Scale::Tcb => {
@@ -176,5 +198,5 @@ pub fn convert(
     if instant.scale() == target {
         return Ok(*instant);
     }
-    from_tt_attos(to_tt_attos(instant, context), target, context)
+    from_tt_attos(to_tt_attos(instant, context)?, target, context)
 }

@@ -26,6 +26,8 @@ vocabulary! {
         BeforeUtc = "utc_before_1960",
         /// [`TimeError::OutOfRange`].
         OutOfRange = "instant_out_of_range",
+        /// [`TimeError::Ut1Unavailable`].
+        Ut1Unavailable = "ut1_outside_eop_table",
     }
 }
 
@@ -61,6 +63,9 @@ pub enum TimeError {
     BeforeUtc(String),
     /// A value outside the range the engine supports.
     OutOfRange(String),
+    /// UT1 is needed at an epoch the Earth orientation table does not cover (or no table is
+    /// given to the conversion).
+    Ut1Unavailable(String),
 }
 
 impl TimeError {
@@ -75,6 +80,7 @@ impl TimeError {
             Self::FormatNotForScale { .. } => TimeErrorKind::FormatNotForScale,
             Self::BeforeUtc(_) => TimeErrorKind::BeforeUtc,
             Self::OutOfRange(_) => TimeErrorKind::OutOfRange,
+            Self::Ut1Unavailable(_) => TimeErrorKind::Ut1Unavailable,
         }
     }
 
@@ -111,7 +117,8 @@ impl fmt::Display for TimeError {
             Self::ImpossibleDate(message)
             | Self::InvalidLeapSecond(message)
             | Self::BeforeUtc(message)
-            | Self::OutOfRange(message) => f.write_str(message),
+            | Self::OutOfRange(message)
+            | Self::Ut1Unavailable(message) => f.write_str(message),
             Self::FormatNotForScale {
                 format,
                 scale,

@@ -11,3 +11,4 @@ pub mod instant;
 pub mod leap_seconds;
 pub mod scale;
 pub mod tdb_series;
+pub mod ut1;

@@ -29,6 +29,9 @@ vocabulary! {
         Bdt = "BDT",
         /// QZSS Time (IS-QZSS): TAI - 19 s.
         Qzsst = "QZSST",
+        /// Universal Time UT1 (IERS Conventions (2010) ch. 5.4.2): the Earth's rotation angle
+        /// as a time; UTC + (UT1 - UTC) from the Earth orientation table.
+        Ut1 = "UT1",
     }
 }
 
@@ -36,6 +39,20 @@ impl Scale {
     /// True for the GNSS system times (they have a week numbering).
     pub fn is_gnss(self) -> bool {
         matches!(self, Scale::Gpst | Scale::Gst | Scale::Bdt | Scale::Qzsst)
+    }
+
+    /// True for UT1, the one scale that needs the Earth orientation table (UT1 - UTC is
+    /// measured, not defined): it exists only where the table covers the epoch.
+    pub fn needs_earth_orientation(self) -> bool {
+        matches!(self, Scale::Ut1)
+    }
+
+    /// The scales that need no Earth orientation table (every scale but UT1), in vocabulary
+    /// order: what `all` targets mean, so that an answer for any epoch needs no lookup.
+    pub fn without_earth_orientation() -> impl Iterator<Item = Scale> {
+        Scale::ALL
+            .into_iter()
+            .filter(|scale| !scale.needs_earth_orientation())
     }
 
     /// The full name.
@@ -51,6 +68,7 @@ impl Scale {
             Scale::Gst => "Galileo System Time",
             Scale::Bdt => "BeiDou Time",
             Scale::Qzsst => "QZSS Time",
+            Scale::Ut1 => "Universal Time UT1",
         }
     }
 
@@ -67,6 +85,7 @@ impl Scale {
             Scale::Gst => "the Galileo ground segment's precise timing facility, steered to TAI modulo 19 s",
             Scale::Bdt => "the BeiDou ground segment's master clock, steered to UTC(NTSC) modulo leap seconds",
             Scale::Qzsst => "the QZSS ground segment, steered to GPS Time",
+            Scale::Ut1 => "the Earth's rotation, measured by VLBI and published by the IERS as UT1 - UTC (EOP 20 C04, Bulletin A observations and predictions): the EOP table in force",
         }
     }
 
@@ -83,6 +102,7 @@ impl Scale {
             Scale::Gst => "GST = TAI - 19 s; weeks from 1999-08-22T00:00:00 GST (Galileo OS SIS ICD)",
             Scale::Bdt => "BDT = TAI - 33 s; weeks from 2006-01-01T00:00:00 BDT (BeiDou OS ICD)",
             Scale::Qzsst => "QZSST = TAI - 19 s; GPS week numbering (IS-QZSS)",
+            Scale::Ut1 => "UT1 = UTC + (UT1 - UTC), UT1 - UTC interpolated from the EOP table at the UTC epoch (4-point Lagrange through UT1 - TAI); readings count 86 400 s per day from J2000.0 of UT1; only inside the table (1962 to the end of its predictions)",
         }
     }
 }

@@ -7,6 +7,7 @@ use super::InterpolationOptions;
 use crate::physics::constants::{GRS80_SEMI_MINOR_AXIS_M, SPEED_OF_LIGHT_M_S};
 use crate::physics::readable::readable;
 use crate::physics::time::convert::{to_tt_attos, ConversionContext};
+use crate::physics::time::instant::Instant;
 
 /// An exact attosecond difference in seconds, converted once: one rounding of the i128 to f64
 /// and one correctly rounded division by 1e18, which is exact in binary64 (2^18 5^18, with
@@ -45,11 +46,14 @@ pub fn validate_track(
         )
         .for_object(id));
     }
-    let first_tt = track
-        .states
-        .first()
-        .map(|s| to_tt_attos(&s.epoch, context))
-        .unwrap_or(0);
+    let tt_of = |index: usize, epoch: &Instant| {
+        to_tt_attos(epoch, context)
+            .map_err(|e| TrajectoryError::at_state("bad_epoch", id, index, e.to_string()))
+    };
+    let first_tt = match track.states.first() {
+        Some(state) => tt_of(0, &state.epoch)?,
+        None => 0,
+    };
     let mut times_s = Vec::with_capacity(track.states.len());
     let mut previous_tt: Option<i128> = None;
     for (index, state) in track.states.iter().enumerate() {
@@ -85,7 +89,7 @@ pub fn validate_track(
                 format!("the speed is {speed_m_s:.6e} m/s, not below c; velocities must be in m/s"),
             ));
         }
-        let tt = to_tt_attos(&state.epoch, context);
+        let tt = tt_of(index, &state.epoch)?;
         if let Some(previous) = previous_tt {
             if tt <= previous {
                 return Err(TrajectoryError::at_state(

@@ -311,7 +311,7 @@ fn read_data_line(
         )
         .for_object(&segment.object));
     }
-    let epoch = to_storage(epoch, context);
+    let epoch = to_storage(epoch, context).map_err(|e| epoch_error(&e, number, epoch_text))?;
     let Some(track) = ephemeris
         .objects
         .iter_mut()

@@ -88,11 +88,21 @@ impl EopTable {
         if !sod_s.is_finite() {
             return Err(EopLookupError::NotFinite);
         }
+        self.at_utc_attos(leaps, utc_mjd, (sod_s * ATTOS_PER_S).round() as i128)
+    }
+
+    /// [`EopTable::at_utc`] with the second of day in attoseconds (exact, as the time engine
+    /// keeps it).
+    pub fn at_utc_attos(
+        &self,
+        leaps: &LeapTable,
+        utc_mjd: i64,
+        sod_attos: i128,
+    ) -> Result<EopValues, EopLookupError> {
         let days = self.days();
         let (Some(first), Some(last)) = (days.first(), days.last()) else {
             return Err(EopLookupError::BeforeTable { first_mjd: 0 });
         };
-        let sod_attos = (sod_s * ATTOS_PER_S).round() as i128;
         let day_attos = leaps.utc_day_length_attos(utc_mjd);
         if sod_attos < 0 || sod_attos >= day_attos {
             return Err(EopLookupError::Utc(UtcRangeError::SecondOutsideDay {

@@ -17,6 +17,8 @@
 //!   (Bulletin A's error columns, which grow with the days ahead: 2026-10-23, one day after the
 //!   last observation, 0.6 mas in x_p and 0.03 ms in UT1; 2027-10-29, one year ahead, 17.5 mas
 //!   and 25 ms, in the shipped file).
+//! - The time engine's UT1: the table implements `time::ut1::Ut1Source` (UT1 - UTC with its
+//!   status and likely error), so a `ConversionContext` with the table converts to and from UT1.
 
 mod c04;
 mod error;
@@ -25,6 +27,7 @@ mod finals;
 mod interp;
 mod snapshot;
 mod table;
+mod ut1;
 
 #[cfg(test)]
 mod tests_interp;
@@ -32,6 +35,8 @@ mod tests_interp;
 mod tests_readers;
 #[cfg(test)]
 mod tests_reference;
+#[cfg(test)]
+mod tests_ut1;
 
 pub use c04::parse_c04;
 pub use error::{EopErrorCode, EopFileError, EopLookupError, EopLookupErrorKind};

@@ -57,6 +57,9 @@ pub struct EopDay {
 pub struct EopTable {
     days: Vec<EopDay>,
     source: String,
+    /// The last day whose polar motion and UT1 are observed (MJD), found once at construction
+    /// (every lookup needs it; the search runs over the predicted days).
+    last_observed_mjd: Option<i64>,
 }
 
 impl EopTable {
@@ -87,7 +90,16 @@ impl EopTable {
                 ));
             }
         }
-        Ok(Self { days, source })
+        let last_observed_mjd = days
+            .iter()
+            .rev()
+            .find(|d| d.status == EopStatus::Observed)
+            .map(|d| d.mjd);
+        Ok(Self {
+            days,
+            source,
+            last_observed_mjd,
+        })
     }
 
     /// A table with no days (every lookup is outside it), e.g. as a last resort.
@@ -95,6 +107,7 @@ impl EopTable {
         Self {
             days: Vec::new(),
             source,
+            last_observed_mjd: None,
         }
     }
 
@@ -133,11 +146,7 @@ impl EopTable {
 
     /// Last day whose polar motion and UT1 are observed (MJD).
     pub fn last_observed_mjd(&self) -> Option<i64> {
-        self.days
-            .iter()
-            .rev()
-            .find(|d| d.status == EopStatus::Observed)
-            .map(|d| d.mjd)
+        self.last_observed_mjd
     }
 
     /// End of the predictions (MJD): the last day when it is predicted, else None.
