@@ -219,3 +219,39 @@ async fn problems_name_the_field() {
         "scale"
     );
 }
+
+#[tokio::test]
+async fn a_ut1_reading_gives_the_orientation_of_the_same_event() {
+    // The Earth rotation angle is a function of UT1 (IERS Conventions (2010) eq. 5.15): the same
+    // event given as its UT1 reading (from the service's UTC -> UT1 conversion) or in UTC has
+    // the same orientation, to the 1e-12 s truncation of the ISO text (7e-17 rad of ERA).
+    let server = TestServer::start().await;
+    let (status, _, converted) = get_json(
+        &server,
+        "/v1/time/convert?at=2026-10-01T12:00:00&to=UT1&forms=iso",
+    )
+    .await;
+    assert_eq!(status, 200, "{converted}");
+    let ut1_text = converted["results"][0]["iso"]
+        .as_str()
+        .unwrap_or("")
+        .to_string();
+    let (status, _, by_ut1) = get_json(
+        &server,
+        &format!("/v1/earth/orientation?at={ut1_text}&scale=UT1"),
+    )
+    .await;
+    assert_eq!(status, 200, "{by_ut1}");
+    let (_, _, by_utc) = get_json(
+        &server,
+        "/v1/earth/orientation?at=2026-10-01T12:00:00&scale=UTC",
+    )
+    .await;
+    for name in ["era_rad", "gast_rad", "cip_x_rad"] {
+        let (a, b) = (
+            by_ut1[name].as_f64().unwrap_or(f64::NAN),
+            by_utc[name].as_f64().unwrap_or(0.0),
+        );
+        assert!((a - b).abs() < 1e-15, "{name}: {a} vs {b}");
+    }
+}

@@ -6,6 +6,7 @@ use super::notes;
 use super::types::{GroundSiteInput, LunarSiteInput, OrbitInput, RateItem, StateInput};
 use crate::api::error::ApiError;
 use crate::api::names::{parse_named, parse_scale};
+use crate::physics::earth::eop::EopTable;
 use crate::physics::earth::orientation::fast::celestial_pole_fast;
 use crate::physics::earth::orientation::JulianDate;
 use crate::physics::rate::state::state_rate_about_axis;
@@ -287,7 +288,8 @@ fn figure_axis(
         Some(text) => {
             let instant = parse_instant(text, InstantFormat::Iso, scale, table)
                 .map_err(|e| ApiError::from_time(&e, &field))?;
-            let context = ConversionContext::geocentric(table);
+            // A UT1 epoch through the built-in EOP table, for the same reason.
+            let context = ConversionContext::geocentric(table).with_ut1(EopTable::builtin());
             Some(
                 convert(&instant, Scale::Tt, &context)
                     .map_err(|e| ApiError::from_time(&e, &field))?,

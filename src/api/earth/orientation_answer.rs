@@ -90,7 +90,8 @@ pub fn orientation_one(
     field: FieldName<'_>,
 ) -> Result<EarthOrientationAnswer, ApiError> {
     let leaps = request.leaps;
-    let context = ConversionContext::geocentric(leaps);
+    // UT1 readings convert through the EOP table in force (`scale=UT1`).
+    let context = ConversionContext::geocentric(leaps).with_ut1(request.eop);
     let targets = [Scale::Utc, Scale::Tt];
     let converted = convert_one(
         text,
