@@ -2,7 +2,7 @@
 
 mod common;
 
-use common::{assert_problem, post_json, TestServer};
+use common::{assert_problem, get_json, post_json, TestServer};
 use serde_json::{json, Value};
 
 const C_M_S: f64 = 299_792_458.0;
@@ -288,12 +288,12 @@ async fn bad_inputs_are_422_problems_naming_the_field() {
             "receiver.position_m",
         ),
         (
-            request(
-                &sat,
-                &json!({"ground_site": {"latitude_deg": 0.0, "longitude_deg": 0.0, "height_m": 0.0}}),
-            ),
-            "frames_differ",
-            "transmitter.frame",
+            // Mixed frames need the Earth's orientation at the epoch: the built-in EOP table
+            // (astropy-iers-data 0.2026.11.2.0.34.55) ends its predictions on 2027-10-29.
+            json!({"transmitter": sat, "receiver": {"ground_site": {"latitude_deg": 0.0,
+                "longitude_deg": 0.0, "height_m": 0.0}}, "epoch": "2030-01-01T00:00:00", "scale": "UTC"}),
+            "eop_after_table",
+            "epoch",
         ),
         (
             request(
@@ -378,4 +378,52 @@ async fn bad_inputs_are_422_problems_naming_the_field() {
     // A body that does not match the schema is a 400 (api_conventions).
     let answer = post_json(&server, "/v1/signal/two-way", &json!({"station_a": {}})).await;
     assert_problem(&answer, 400, "invalid_body");
+}
+
+#[tokio::test]
+async fn a_gcrs_satellite_and_a_ground_site_match_the_same_path_in_one_frame() {
+    // The satellite of the README, given in the ITRF, and the same satellite put into the GCRS
+    // with the service's own GCRS -> ITRS matrix at the epoch (GET /v1/earth/orientation,
+    // checked against ERFA's c2t06a): r_GCRS = M^T r, v_GCRS = M^T (v + omega x r) (IERS
+    // Conventions (2010) eq. 5.1 and table 1.1 omega_E). With a ground-site receiver both give
+    // one light time, to 1 ps (the bound).
+    let server = TestServer::start().await;
+    let (status, _, orientation) = get_json(
+        &server,
+        "/v1/earth/orientation?at=2026-03-14T06:30:00&scale=GPST",
+    )
+    .await;
+    assert_eq!(status, 200, "{orientation}");
+    let m: Vec<Vec<f64>> =
+        serde_json::from_value(orientation["gcrs_to_itrs"].clone()).unwrap_or_default();
+    let omega = 7.292_115e-5;
+    let r = [15_600_000.0, 7_540_000.0, 20_140_000.0];
+    let v = [-2000.0, 2800.0, 500.0];
+    let turned = [v[0] - omega * r[1], v[1] + omega * r[0], v[2]];
+    let transposed = |x: [f64; 3]| [0, 1, 2].map(|j| (0..3).map(|i| m[i][j] * x[i]).sum::<f64>());
+    let site =
+        json!({"ground_site": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0}});
+    let itrf = path(
+        &server,
+        json!({"frame": "ITRF", "position_m": r, "velocity_m_s": v}),
+        site.clone(),
+    )
+    .await;
+    let mixed = path(
+        &server,
+        json!({"frame": "GCRS", "position_m": transposed(r), "velocity_m_s": transposed(turned)}),
+        site,
+    )
+    .await;
+    assert_eq!(mixed["frame"], "GCRS");
+    let difference_s = number(&itrf["light_time_s"]) - number(&mixed["light_time_s"]);
+    println!("mixed-frame minus ITRF light time: {difference_s:+.3e} s");
+    assert!(difference_s.abs() < 1e-12, "{difference_s:e} s");
+    // The same geometric range: the Sagnac term of the ITRF solution is inside the GCRS range.
+    let itrf_inertial = number(&itrf["inertial_range_m"]);
+    let gcrs_range = number(&mixed["geometric_range_m"]);
+    assert!(
+        (itrf_inertial - gcrs_range).abs() < 1e-3,
+        "{itrf_inertial} vs {gcrs_range}"
+    );
 }

@@ -255,10 +255,6 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "The light-time iteration did not converge; check that the states are physical.",
     ),
     (
-        "frames_differ",
-        "The two end points are in different frames (GCRS and ITRF); give both in one frame.",
-    ),
-    (
         "invalid_endpoint",
         "A signal end point must give either a position (with a frame) or a ground site, not both or neither.",
     ),

@@ -6,12 +6,14 @@ use axum::Json;
 use super::types::{
     Correction, PathEndpointInput, SignalPathAnswer, SignalPathRequest, SignalTerms,
 };
+use crate::api::earth::orientation_answer::{orientation_one, OrientationRequest};
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, TimeoutProblem};
 use crate::api::extract::JsonBody;
 use crate::api::names::{parse_format, parse_named, parse_scale};
 use crate::api::state::AppState;
+use crate::api::time::conversion::FieldName;
 use crate::api::time::types::InstantForms;
-use crate::physics::constants::SPEED_OF_LIGHT_M_S;
+use crate::physics::constants::{EARTH_ROTATION_RAD_S, SPEED_OF_LIGHT_M_S};
 use crate::physics::geodesy::geodetic_to_ecef_m;
 use crate::physics::signal::{
     signal_path as solve, Endpoint, Frame, PathGeometry, SignalError, TransmitterMotion,
@@ -128,13 +130,68 @@ fn epoch_forms(request: &SignalPathRequest, state: &AppState) -> Result<InstantF
         .map_err(|e| ApiError::from_time(&e, "epoch"))
 }
 
+/// The GCRS -> ITRS rotation at the reception epoch (IERS Conventions (2010) eq. 5.1, with the
+/// EOP table in force), through the orientation endpoint's own computation.
+fn epoch_rotation(
+    request: &SignalPathRequest,
+    state: &AppState,
+) -> Result<[[f64; 3]; 3], ApiError> {
+    let leaps = state.leap_table();
+    let eop = state.eop_table();
+    let orientation = OrientationRequest {
+        format: parse_format(request.format.as_deref(), "format")?,
+        scale: parse_scale(&request.scale, "scale")?,
+        pole_offsets: true,
+        leaps: &leaps,
+        eop: &eop,
+    };
+    orientation_one(&request.epoch, &orientation, FieldName::Named("epoch"))
+        .map(|answer| answer.gcrs_to_itrs)
+}
+
+/// `M^T v` for a row-major `M`.
+fn transposed_times(matrix: &[[f64; 3]; 3], vector: [f64; 3]) -> [f64; 3] {
+    [0, 1, 2].map(|j| (0..3).map(|i| matrix[i][j] * vector[i]).sum())
+}
+
+/// An ITRF endpoint as a GCRS one at the reception epoch: r_gcrs = M^T r_itrs and, for a
+/// transmitter, v_gcrs = M^T (v_itrs + omega_E x r_itrs) (IERS Conventions (2010) eq. 5.1 and its
+/// time derivative with the Earth rotation rate; the rates of precession-nutation and polar
+/// motion, below 1e-11 rad/s, are left out). An Earth-fixed transmitter at rest (no velocity)
+/// turns with the Earth: in the GCRS it is given omega_E x r and moves uniformly over the
+/// flight (0.08 mm from the circle over 70 ms); a GCRS endpoint is kept.
+fn into_gcrs(resolved: Resolved, gcrs_to_itrs: &[[f64; 3]; 3]) -> Resolved {
+    if resolved.frame == Frame::Gcrs {
+        return resolved;
+    }
+    let r = resolved.endpoint.position_m;
+    let turning = [
+        -EARTH_ROTATION_RAD_S * r[1],
+        EARTH_ROTATION_RAD_S * r[0],
+        0.0,
+    ];
+    let (velocity_itrs, motion) = match resolved.endpoint.velocity_m_s {
+        Some(v) => ([0, 1, 2].map(|i| v[i] + turning[i]), resolved.motion),
+        None => (turning, TransmitterMotion::Uniform),
+    };
+    Resolved {
+        frame: Frame::Gcrs,
+        endpoint: Endpoint {
+            position_m: transposed_times(gcrs_to_itrs, r),
+            velocity_m_s: Some(transposed_times(gcrs_to_itrs, velocity_itrs)),
+        },
+        motion,
+        ground_site: resolved.ground_site,
+    }
+}
+
 /// Light time and relativistic corrections of a signal from a transmitter to a receiver.
 #[utoipa::path(post, path = "/v1/signal/path", tag = "signal",
     request_body = SignalPathRequest,
     responses(
         (status = 200, description = "The light time and its Sagnac, Shapiro and clock terms", body = SignalPathAnswer),
         JsonBodyProblems,
-        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: invalid_endpoint (neither or both of `ground_site` and `frame` + `position_m`; a `motion` without a velocity or on the receiver), unknown_frame, unknown_motion, frames_differ, inside_earth, beyond_range, speed_not_below_c, not_finite, coincident_endpoints, path_through_earth (the receiver cannot see the transmitter), no_convergence, invalid_value (a ground site's latitude, longitude or height), and the epoch codes of `GET /v1/time/convert` (unknown_scale, unknown_format, malformed_instant, impossible_date, ...)", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: invalid_endpoint (neither or both of `ground_site` and `frame` + `position_m`; a `motion` without a velocity or on the receiver), unknown_frame, unknown_motion, inside_earth, beyond_range, speed_not_below_c, not_finite, coincident_endpoints, path_through_earth (the receiver cannot see the transmitter), no_convergence, invalid_value (a ground site's latitude, longitude or height), and the epoch codes of `GET /v1/time/convert` (unknown_scale, unknown_format, malformed_instant, impossible_date, ...); with the endpoints in different frames also eop_before_table, eop_after_table (the rotation at the epoch needs the Earth orientation table)", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn signal_path(
     State(state): State<AppState>,
@@ -143,18 +200,16 @@ pub async fn signal_path(
     let epoch = epoch_forms(&request, &state)?;
     let transmitter = resolve("transmitter", &request.transmitter)?;
     let receiver = resolve("receiver", &request.receiver)?;
-    if transmitter.frame != receiver.frame {
-        let field = if receiver.ground_site {
-            "transmitter.frame"
-        } else {
-            "receiver.frame"
-        };
-        return Err(ApiError::unprocessable(
-            "frames_differ",
-            "transmitter and receiver must be given in the same frame (a ground_site is ITRF); the GCRS-ITRF rotation is not modelled",
+    let (transmitter, receiver) = if transmitter.frame == receiver.frame {
+        (transmitter, receiver)
+    } else {
+        // Mixed frames: the Earth-fixed endpoint goes into the GCRS at the reception epoch.
+        let gcrs_to_itrs = epoch_rotation(&request, &state)?;
+        (
+            into_gcrs(transmitter, &gcrs_to_itrs),
+            into_gcrs(receiver, &gcrs_to_itrs),
         )
-        .with_field(field));
-    }
+    };
     let geometry = PathGeometry {
         frame: transmitter.frame,
         transmitter: transmitter.endpoint,
