@@ -34,15 +34,8 @@ pub struct OrientationRequest<'a> {
     pub eop: &'a EopTable,
 }
 
-fn field_text(field: FieldName<'_>) -> String {
-    match field {
-        FieldName::Named(name) => name.to_string(),
-        FieldName::Item(list, index) => format!("{list}[{index}]"),
-    }
-}
-
 fn lookup_problem(error: &EopLookupError, field: FieldName<'_>) -> ApiError {
-    ApiError::unprocessable(error.code(), error.to_string()).with_field(field_text(field))
+    ApiError::unprocessable(error.code(), error.to_string()).with_field(field.text())
 }
 
 /// The warnings of predicted or missing EOP, each naming the quantity and its likely error.
@@ -113,9 +106,9 @@ pub fn orientation_one(
     })?;
     let tt_attos = converted.results[1].digits.reading_count_attos();
     let tai_attos = tt_attos - TT_MINUS_TAI_ATTOS;
-    let (utc_mjd, sod_attos) = leaps.utc_from_tai(tai_attos).map_err(|e| {
-        ApiError::from_time(&TimeError::BeforeUtc(e.to_string()), field_text(field))
-    })?;
+    let (utc_mjd, sod_attos) = leaps
+        .utc_from_tai(tai_attos)
+        .map_err(|e| ApiError::from_time(&TimeError::BeforeUtc(e.to_string()), field.text()))?;
     let tai_minus_utc_attos = leaps.tai_minus_utc_attos(utc_mjd, sod_attos).unwrap_or(0);
     let values = request
         .eop

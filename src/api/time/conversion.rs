@@ -24,7 +24,8 @@ pub enum FieldName<'a> {
 }
 
 impl FieldName<'_> {
-    fn text(self) -> String {
+    /// The field as a problem names it (`at`, `epochs[3]`).
+    pub fn text(self) -> String {
         match self {
             FieldName::Named(name) => name.to_string(),
             FieldName::Item(list, index) => format!("{list}[{index}]"),
