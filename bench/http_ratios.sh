@@ -38,22 +38,15 @@ if [ "${SKIP_BUILD:-0}" != 1 ] || [ ! -x "$binary" ]; then
     (cd "$root" && cargo build --release --quiet --bin eigenzeit)
 fi
 
-port="$(python3 -c 'import socket; s=socket.socket(); s.bind(("127.0.0.1", 0)); print(s.getsockname()[1]); s.close()')"
+# shellcheck source=bench/common.sh
+. "$root/bench/common.sh"
+port="$(free_port)"
 base="http://127.0.0.1:$port"
 # taskset replaces itself with the program, so $! is the server itself.
 taskset -c 0 "$binary" --addr "127.0.0.1:$port" --log-level warn >"$work/server.log" 2>&1 &
 server_pid=$!
-cleanup() {
-    kill "$server_pid" 2>/dev/null || true
-    wait "$server_pid" 2>/dev/null || true
-    rm -rf "$work"
-}
 trap cleanup EXIT INT TERM
-
-for _ in $(seq 1 1000); do
-    curl -fsS -o /dev/null "$base/readyz" 2>/dev/null && break
-    sleep 0.01
-done
+wait_ready "$base" || true
 curl -fsS -o /dev/null "$base/healthz" || {
     echo "server did not start:" >&2
     cat "$work/server.log" >&2

@@ -37,7 +37,9 @@ pin() { # pin CPU COMMAND... : run on one CPU when taskset exists and there are 
     fi
 }
 
-port="$(python3 -c 'import socket; s=socket.socket(); s.bind(("127.0.0.1", 0)); print(s.getsockname()[1]); s.close()')"
+# shellcheck source=bench/common.sh
+. "$root/bench/common.sh"
+port="$(free_port)"
 base="http://127.0.0.1:$port"
 # Started directly (not through a shell function, which would fork a subshell) so that $! is
 # the server itself: taskset replaces itself with the program.
@@ -48,17 +50,8 @@ fi
 started_ns="$(date +%s%N)"
 "${server[@]}" >"$work/server.log" 2>&1 &
 server_pid=$!
-cleanup() {
-    kill "$server_pid" 2>/dev/null || true
-    wait "$server_pid" 2>/dev/null || true
-    rm -rf "$work"
-}
 trap cleanup EXIT INT TERM
-
-for _ in $(seq 1 1000); do
-    curl -fsS -o /dev/null "$base/readyz" 2>/dev/null && break
-    sleep 0.01
-done
+wait_ready "$base" || true
 ready_ms="$(( ($(date +%s%N) - started_ns) / 1000000 ))"
 [ "$(readlink "/proc/$server_pid/exe")" = "$(readlink -f "$binary")" ] || {
     echo "process $server_pid is not the server" >&2
