@@ -13,6 +13,7 @@ pub mod extract;
 pub mod names;
 pub mod negotiate;
 pub mod openapi;
+pub mod plots;
 pub mod problem_codes;
 pub mod proper_time;
 pub mod signal;
@@ -33,6 +34,7 @@ pub fn router(state: AppState) -> Router {
         .merge(earth::router())
         .merge(proper_time::router())
         .merge(signal::router())
+        .merge(plots::router())
         .merge(docs::router())
         .with_state(state)
 }

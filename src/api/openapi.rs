@@ -30,6 +30,8 @@ use utoipa::{Modify, OpenApi};
         crate::api::earth::eop::eop,
         crate::api::earth::orientation::orientation_get,
         crate::api::earth::orientation::orientation_post,
+        crate::api::plots::rate_profile::rate_profile,
+        crate::api::plots::scale_offsets::scale_offsets,
     ),
     components(schemas(
         crate::api::error::Problem,
@@ -41,13 +43,15 @@ use utoipa::{Modify, OpenApi};
         crate::api::names::InstantString,
         crate::api::names::ThreeNumbersText,
         crate::api::earth::types::UtcIsoInstant,
+        crate::api::names::ReferenceName,
     )),
     modifiers(&CrossFieldRules),
     tags(
         (name = "time", description = "Time scales: conversions, the scales, the leap-second table"),
         (name = "clock", description = "Clock rates against TT or TCG: state vectors, orbits, ground and lunar sites; comparisons between clocks"),
         (name = "signal", description = "Signal paths: light time with Sagnac, Shapiro and clock terms; two-way time-transfer Sagnac correction"),
-        (name = "earth", description = "Earth orientation: the IERS EOP table in force (UT1 - UTC, polar motion, celestial pole offsets, length of day) and its values at an instant; the Earth rotation angle, sidereal times, CIP and the GCRS <-> ITRS rotation (IAU 2006/2000A) at an instant")
+        (name = "earth", description = "Earth orientation: the IERS EOP table in force (UT1 - UTC, polar motion, celestial pole offsets, length of day) and its values at an instant; the Earth rotation angle, sidereal times, CIP and the GCRS <-> ITRS rotation (IAU 2006/2000A) at an instant"),
+        (name = "plots", description = "Plots as self-contained SVG (Okabe-Ito colours, dash patterns and markers), each with a CSV twin of the same numbers (`Accept: text/csv`): the rate of a clock on circular orbits by altitude, the offsets between time scales over a span; the proper-time plot is `POST /v1/clock/proper-time` with `Accept: image/svg+xml`")
     )
 )]
 pub struct ApiDoc;

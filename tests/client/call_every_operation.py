@@ -11,7 +11,9 @@ against the source named beside it. All satellites and stations are invented.
 """
 
 import argparse
+import csv
 import importlib
+import io
 import json
 import math
 import sys
@@ -262,6 +264,62 @@ def proper_time(api, m, document):
     )
 
 
+    # The same request drawn (Accept: image/svg+xml): a self-contained SVG with the series.
+    drawn = api.call_accepting(
+        "image/svg+xml", "proper_time", body=body, reference=m.ReferenceName.TT
+    )
+    expect(drawn, 200, "image/svg+xml")
+    svg = drawn.content.decode("utf-8")
+    assert "<svg" in svg and 'data-series="tau_minus_t_s"' in svg and "WREN-7" in svg, svg[:300]
+    assert "<script" not in svg and "@font-face" not in svg
+
+
+def csv_rows(response):
+    expect(response, 200, "text/csv")
+    return list(csv.DictReader(io.StringIO(response.content.decode("utf-8"))))
+
+
+@operation("rate_profile")
+def rate_profile(api, m, document):
+    drawn = api.call("rate_profile", points=40)
+    expect(drawn, 200, "image/svg+xml")
+    svg = drawn.content.decode("utf-8")
+    for column in ("total", "velocity_part", "gravity_part"):
+        assert f'data-series="{column}"' in svg, column
+    # Altitudes chosen so that the first point lies at a = 26 561.75 km (a_E = 6 378 136.6 m,
+    # IERS Conventions (2010) table 1.1): the IS-GPS-200 3.3.1.1 offset 4.4647e-10.
+    altitude_km = (26_561_750.0 - 6_378_136.6) / 1e3
+    rows = csv_rows(
+        api.call_accepting(
+            "text/csv", "rate_profile", min_altitude_km=altitude_km, max_altitude_km=40_000.0, points=2
+        )
+    )
+    assert len(rows) == 2 and list(rows[0]) == ["altitude_km", "total", "velocity_part", "gravity_part"]
+    near(float(rows[0]["total"]), circular_orbit_rate(26_561_750.0), 1e-15, "MEO rate (profile)")
+    near(float(rows[0]["total"]), 4.4647e-10, 1e-14, "IS-GPS-200 3.3.1.1 offset (profile)")
+    near(float(rows[0]["velocity_part"]) + float(rows[0]["gravity_part"]), float(rows[0]["total"]), 1e-24, "parts add up")
+    expect_problem(api.call("rate_profile", points=1), 422, "bad_option", field="points")
+
+
+@operation("scale_offsets")
+def scale_offsets(api, m, document):
+    window = {"from_": "2016-12-31", "to": "2017-01-02", "points": 3}
+    drawn = api.call("scale_offsets", **window)
+    expect(drawn, 200, "image/svg+xml")
+    assert 'data-series="tai_minus_utc_s"' in drawn.content.decode("utf-8")
+    rows = csv_rows(api.call_accepting("text/csv", "scale_offsets", **window))
+    # IERS Bulletin C 52: TAI - UTC = 36 s before 2017-01-01, 37 s from then; TT - TAI = 32.184 s
+    # (IAU 1991 A4); GPST = TAI - 19 s (IS-GPS-200), BDT = TAI - 33 s (BeiDou OS ICD).
+    by_utc = {row["utc"]: row for row in rows}
+    before, after = by_utc["2016-12-31T23:59:59.000"], by_utc["2017-01-01T00:00:00.000"]
+    assert (float(before["tai_minus_utc_s"]), float(after["tai_minus_utc_s"])) == (36.0, 37.0)
+    near(float(after["tt_minus_tai_s"]), 32.184, 1e-12, "TT - TAI")
+    assert (float(after["gpst_minus_utc_s"]), float(after["bdt_minus_utc_s"])) == (18.0, 4.0)
+    expect_problem(
+        api.call("scale_offsets", from_="2017-01-02", to="2016-12-31"), 422, "bad_option", field="to"
+    )
+
+
 @operation("signal_path")
 def signal_path(api, m, document):
     body = m.SignalPathRequest.from_dict(
@@ -394,6 +452,13 @@ class Api:
         CALLED.add(operation_id)
         module = importlib.import_module(self.modules[operation_id])
         return module.sync_detailed(client=self.client, **arguments)
+
+    def call_accepting(self, accept, operation_id, **arguments):
+        """The same call with an `Accept` header (for the CSV and SVG forms of an answer)."""
+        CALLED.add(operation_id)
+        module = importlib.import_module(self.modules[operation_id])
+        client = self.client.with_headers({"accept": accept})
+        return module.sync_detailed(client=client, **arguments)
 
 
 def main():

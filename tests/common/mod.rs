@@ -5,6 +5,7 @@ pub mod file_server;
 pub mod kepler;
 
 pub mod process;
+pub mod svg_read;
 
 use eigenzeit::ops::config::Settings;
 use eigenzeit::ops::refresh::initial_table;

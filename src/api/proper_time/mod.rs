@@ -4,6 +4,7 @@
 mod answer;
 mod body;
 mod options;
+pub mod plot;
 pub mod types;
 
 use axum::extract::State;
@@ -14,7 +15,7 @@ use axum::{Json, Router};
 
 use super::error::ApiError;
 use super::extract::QueryParams;
-use super::negotiate::{answer_type, AnswerType};
+use super::negotiate::{answer_type_among, AnswerType};
 use super::state::AppState;
 use types::ProperTimeOptionsInput;
 
@@ -33,8 +34,9 @@ pub fn router() -> Router<AppState> {
             (String = "application/sp3"),
             (String = "text/plain"))),
     responses(
-        (status = 200, description = "Per object: summary and series. CSV when `Accept` prefers `text/csv` to JSON: the series (object_id, epoch, elapsed_s, tau_minus_t_s, velocity_part_s, gravity_part_s, periodic_s, residual_s).",
-            content((types::ProperTimeAnswer = "application/json"), (String = "text/csv"))),
+        (status = 200, description = "Per object: summary and series. CSV when `Accept` prefers `text/csv` to JSON and SVG: the series (object_id, epoch, elapsed_s, tau_minus_t_s, velocity_part_s, gravity_part_s, periodic_s, residual_s). SVG when `Accept` prefers `image/svg+xml`: a plot per object of tau - t with its velocity and gravity parts and, on its own panel, the periodic part, against the time since the object's first epoch (the series are drawn even with `include_series=false`; above 2 000 samples one in k is drawn, the CSV has all).",
+            content((types::ProperTimeAnswer = "application/json"), (String = "text/csv"), (String = "image/svg+xml", example = "<svg xmlns=\"http://www.w3.org/2000/svg\" ...>...</svg>")),
+            headers(("Vary" = String, description = "`accept`"))),
         (status = 400, description = "The query string cannot be read (`invalid_query`: an unknown parameter or `format`, a wrong type), the body is not UTF-8 (`unreadable_body`), or a body sent as application/json is not the JSON ephemeris (`invalid_json`, `invalid_body`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 413, description = "Body above the configured limit (`body_too_large`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 415, description = "A Content-Type the endpoint does not read (`unsupported_media_type`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
@@ -53,24 +55,32 @@ pub async fn proper_time(
             ApiError::bad_request("unreadable_body", rejection.body_text())
         }
     })?;
-    let csv = answer_type(&headers) == AnswerType::Csv;
+    let kind = answer_type_among(
+        &headers,
+        &[AnswerType::Json, AnswerType::Csv, AnswerType::Svg],
+    );
     let table = state.leap_table();
     let settings = state.limits().clone();
     let work = move || -> Result<Response, ApiError> {
-        let request = body::read_request(&headers, query, &body, &table, &settings)?;
+        let mut request = body::read_request(&headers, query, &body, &table, &settings)?;
+        // A plot draws the series, whatever `include_series` says.
+        request.include_series |= kind == AnswerType::Svg;
         let answer = answer::compute(&request, &table)?;
-        Ok(if csv {
-            (
-                [
-                    (header::CONTENT_TYPE, "text/csv; charset=utf-8"),
-                    (header::VARY, "accept"),
-                ],
-                answer::to_csv(&answer),
-            )
-                .into_response()
-        } else {
-            ([(header::VARY, "accept")], Json(answer)).into_response()
-        })
+        let text = match kind {
+            AnswerType::Json => {
+                return Ok(([(header::VARY, "accept")], Json(answer)).into_response())
+            }
+            AnswerType::Csv => answer::to_csv(&answer),
+            AnswerType::Svg => super::plots::svg::to_svg(&plot::figure(&answer)),
+        };
+        Ok((
+            [
+                (header::CONTENT_TYPE, kind.content_type()),
+                (header::VARY, "accept"),
+            ],
+            text,
+        )
+            .into_response())
     };
     tokio::task::spawn_blocking(work).await.map_err(|e| {
         ApiError::new(

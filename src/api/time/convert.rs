@@ -96,7 +96,8 @@ pub async fn convert_get(
         FieldName::Named("at"),
     )?;
     let written = match answer_type(&headers) {
-        AnswerType::Json => (
+        // `answer_type` offers JSON and CSV only.
+        AnswerType::Json | AnswerType::Svg => (
             "application/json",
             json_bytes(
                 &ConversionJson(&converted, &forms),
@@ -170,7 +171,7 @@ pub async fn convert_post(
         // Written here, in the blocking pool: a 100 000-epoch answer takes as long to write as
         // to compute, and written on an async worker it delays the shutdown signal.
         match answer_type {
-            AnswerType::Json => {
+            AnswerType::Json | AnswerType::Svg => {
                 let conversions = request
                     .epochs
                     .iter()

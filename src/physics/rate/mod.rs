@@ -33,6 +33,7 @@ pub mod frequency;
 pub mod ground;
 pub mod lunar;
 pub mod orbit;
+pub mod profile;
 pub mod state;
 
 #[cfg(test)]
