@@ -35,7 +35,9 @@ async fn proper_time_plot_draws_the_csv_numbers() {
     let drawn = post_oem(&server, "image/svg+xml").await;
     assert_eq!(drawn.status(), 200);
     assert_eq!(header_text(&drawn, "content-type"), "image/svg+xml");
-    assert!(header_text(&drawn, "vary").split(", ").any(|v| v == "accept"));
+    assert!(header_text(&drawn, "vary")
+        .split(", ")
+        .any(|v| v == "accept"));
     let svg = drawn.text().await.expect("body");
     self_contained(&svg).unwrap_or_else(|e| panic!("{e}"));
     let panels = read_svg(&svg).unwrap_or_else(|e| panic!("{e}"));

@@ -32,7 +32,7 @@
         return r.json();
       });
       tile(answer.input.scale).textContent = answer.input.iso;
-      for (const result of answer.results) tile(result.instant.scale).textContent = result.instant.iso;
+      for (const result of answer.results) tile(result.scale).textContent = result.iso;
       readings += 1;
       const status = $("now-status");
       status.dataset.count = String(readings);
