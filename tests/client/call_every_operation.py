@@ -454,11 +454,14 @@ class Api:
         return module.sync_detailed(client=self.client, **arguments)
 
     def call_accepting(self, accept, operation_id, **arguments):
-        """The same call with an `Accept` header (for the CSV and SVG forms of an answer)."""
+        """The same request, built by the generated module, sent with an `Accept` header (for
+        the CSV and SVG forms of an answer); the raw answer (the generated parser reads JSON)."""
         CALLED.add(operation_id)
         module = importlib.import_module(self.modules[operation_id])
-        client = self.client.with_headers({"accept": accept})
-        return module.sync_detailed(client=client, **arguments)
+        kwargs = module._get_kwargs(**arguments)
+        headers = dict(kwargs.pop("headers", {}) or {})
+        headers["accept"] = accept
+        return self.client.get_httpx_client().request(headers=headers, **kwargs)
 
 
 def main():
