@@ -210,6 +210,28 @@ async fn operations_page_in_a_browser() {
     .await;
     assert!(status.contains("7 object(s)"), "{status}");
     shoot(&session, "page_upload.png").await;
+    // A file dropped on the zone (a DragEvent carrying a File) that is not an ephemeris: the
+    // page shows the service's problem code and where it is.
+    session
+        .run("const dt = new DataTransfer(); dt.items.add(new File(['not an ephemeris\\n'], 'broken.oem')); document.getElementById('drop-zone').dispatchEvent(new DragEvent('drop', {dataTransfer: dt, bubbles: true, cancelable: true})); return true;", json!([]))
+        .await
+        .unwrap_or_else(|e| panic!("drop: {e}"));
+    session
+        .wait_for(
+            "return document.getElementById('upload-status').classList.contains('error');",
+            WAIT,
+        )
+        .await
+        .unwrap_or_else(|e| panic!("no problem shown after a bad drop: {e}"));
+    let problem = text(
+        &session,
+        "return document.getElementById('upload-status').textContent;",
+    )
+    .await;
+    assert!(
+        problem.starts_with("Not computed") && problem.contains("line"),
+        "{problem}"
+    );
     scroll_to(&session, "profiles").await;
     session
         .wait_for("const img = document.getElementById('rate-profile'); return img.complete && img.naturalWidth > 0;", WAIT)
