@@ -17,6 +17,7 @@ pub mod plots;
 pub mod problem_codes;
 pub mod proper_time;
 pub mod signal;
+pub mod solar_system;
 pub mod state;
 pub mod time;
 
@@ -35,6 +36,7 @@ pub fn router(state: AppState) -> Router {
         .merge(proper_time::router())
         .merge(signal::router())
         .merge(plots::router())
+        .merge(solar_system::router())
         .merge(docs::router())
         .with_state(state)
 }

@@ -32,6 +32,7 @@ use utoipa::{Modify, OpenApi};
         crate::api::earth::orientation::orientation_post,
         crate::api::plots::rate_profile::rate_profile,
         crate::api::plots::scale_offsets::scale_offsets,
+        crate::api::solar_system::state::body_state,
     ),
     components(schemas(
         crate::api::error::Problem,
@@ -44,6 +45,7 @@ use utoipa::{Modify, OpenApi};
         crate::api::names::ThreeNumbersText,
         crate::api::earth::types::UtcIsoInstant,
         crate::api::names::ReferenceName,
+        crate::api::solar_system::types::BodyName,
     )),
     modifiers(&CrossFieldRules),
     tags(
@@ -51,7 +53,8 @@ use utoipa::{Modify, OpenApi};
         (name = "clock", description = "Clock rates against TT or TCG: state vectors, orbits, ground and lunar sites; comparisons between clocks"),
         (name = "signal", description = "Signal paths: light time with Sagnac, Shapiro and clock terms; two-way time-transfer Sagnac correction"),
         (name = "earth", description = "Earth orientation: the IERS EOP table in force (UT1 - UTC, polar motion, celestial pole offsets, length of day) and its values at an instant; the Earth rotation angle, sidereal times, CIP and the GCRS <-> ITRS rotation (IAU 2006/2000A) at an instant"),
-        (name = "plots", description = "Plots as self-contained SVG (Okabe-Ito colours, dash patterns and markers), each with a CSV twin of the same numbers (`Accept: text/csv`): the rate of a clock on circular orbits by altitude, the offsets between time scales over a span; the proper-time plot is `POST /v1/clock/proper-time` with `Accept: image/svg+xml`")
+        (name = "plots", description = "Plots as self-contained SVG (Okabe-Ito colours, dash patterns and markers), each with a CSV twin of the same numbers (`Accept: text/csv`): the rate of a clock on circular orbits by altitude, the offsets between time scales over a span; the proper-time plot is `POST /v1/clock/proper-time` with `Accept: image/svg+xml`"),
+        (name = "solar-system", description = "The solar system: positions and velocities of the Sun, the Moon, the Earth and the planets' barycentres (ICRF axes, TDB argument) from the planetary ephemeris in force (built in: JPL DE440, 1959-2101)")
     )
 )]
 pub struct ApiDoc;
