@@ -145,6 +145,14 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         TimeErrorKind::Ut1Unavailable.as_str(),
         "A conversion to or from UT1 at an epoch the Earth orientation table in force does not cover (it runs from 1962 to the end of its predictions; `detail` names the edge day); the operators can give a newer file (`--eop-file`, `--eop-url`).",
     ),
+    (
+        TimeErrorKind::OutsideTdbModelSpan.as_str(),
+        "TDB - TT (for TDB or TCB) is needed at an epoch outside the span of the chosen `tdb_model`: `ephemeris` (JPL DE440) covers 1959-12-30 to 2101-01-02 TT; the default `series` covers any epoch.",
+    ),
+    (
+        "unknown_tdb_model",
+        "The TDB - TT model (`tdb_model`) is not one of `series`, `ephemeris`.",
+    ),
     // Clock rates, comparisons and signal paths.
     (
         "unreadable_body",
@@ -507,6 +515,7 @@ mod tests {
         check::<Frame>("unknown_frame");
         check::<HeightReference>("unknown_height_reference");
         check::<crate::physics::signal::TransmitterMotion>("unknown_motion");
+        check::<crate::physics::time::tdb_model::TdbModel>("unknown_tdb_model");
     }
 
     #[test]

@@ -10,5 +10,7 @@ pub mod formats;
 pub mod instant;
 pub mod leap_seconds;
 pub mod scale;
+pub mod tdb_ephemeris;
+pub mod tdb_model;
 pub mod tdb_series;
 pub mod ut1;
