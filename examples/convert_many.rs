@@ -74,6 +74,7 @@ fn run(args: &[String]) -> Result<(), String> {
     let table = LeapTable::builtin();
     let context = ConversionContext {
         tdb_evaluation: evaluation,
+        tdb_model: eigenzeit::physics::time::tdb_model::TdbModel::Series,
         ..ConversionContext::geocentric(table)
     };
     let mut offsets = Vec::with_capacity(epochs.len());

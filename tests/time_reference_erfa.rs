@@ -59,6 +59,7 @@ fn difference_s(row: &Row<'_>, evaluation: TdbEvaluation) -> f64 {
         table,
         observer: row.observer.map(TopocentricObserver::from_itrf_m),
         tdb_evaluation: evaluation,
+        tdb_model: eigenzeit::physics::time::tdb_model::TdbModel::Series,
         // The reference passes ERFA `dtdb` the UTC fraction of day (the script's `ut`), so
         // the topocentric term here takes it too (no UT1 source).
         ut1: None,
@@ -127,6 +128,7 @@ fn every_chain_round_trips_below_one_picosecond() {
         table,
         observer,
         tdb_evaluation: TdbEvaluation::Fitted,
+        tdb_model: eigenzeit::physics::time::tdb_model::TdbModel::Series,
         ut1: Some(EopTable::builtin()),
     };
     let mut worst_attos: i128 = 0;

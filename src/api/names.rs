@@ -18,6 +18,7 @@ use crate::physics::signal::TransmitterMotion;
 use crate::physics::time::error::TimeError;
 use crate::physics::time::formats::InstantFormat;
 use crate::physics::time::scale::Scale;
+use crate::physics::time::tdb_model::TdbModel;
 use crate::physics::vocabulary::Vocabulary;
 use crate::trajectory::{
     Frame as EphemerisFrame, EARTH_FIXED_FRAME_FAMILIES, EARTH_FIXED_FRAME_NAMES,
@@ -541,6 +542,35 @@ impl ToSchema for EphemerisFrameName {
         Cow::Borrowed("EphemerisFrameName")
     }
 }
+
+/// Schema of a TDB - TT model name.
+pub struct TdbModelName;
+
+impl PartialSchema for TdbModelName {
+    fn schema() -> RefOr<Schema> {
+        vocabulary_schema::<TdbModel>(
+            "The model of TDB - TT (and so of TCB): `series` (default: Fairhead & Bretagnon 1990 as ERFA `eraDtdb`, any epoch, about +/- 3 ns over 1950-2050) or `ephemeris` (the time-dilation integral of IERS Conventions (2010) eq. 10.4-10.5 from JPL DE440, fitted; 1959-12-30 to 2101-01-02 TT, 422 `outside_tdb_model_span` elsewhere). The topocentric part is added to either.",
+        )
+    }
+}
+
+impl ToSchema for TdbModelName {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("TdbModelName")
+    }
+}
+
+/// Reads an optional TDB - TT model name (default `series`); 422 `unknown_tdb_model` naming
+/// `field` otherwise.
+pub fn parse_tdb_model(text: Option<&str>, field: &str) -> Result<TdbModel, ApiError> {
+    match text {
+        None => Ok(TdbModel::default()),
+        Some(text) => parse_named(text, UNKNOWN_TDB_MODEL, "TDB - TT model", field),
+    }
+}
+
+/// The problem code of an unknown TDB - TT model name.
+pub const UNKNOWN_TDB_MODEL: &str = "unknown_tdb_model";
 
 #[cfg(test)]
 mod tests {

@@ -159,6 +159,14 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         EphemerisErrorKind::NotFinite.as_str(),
         "An ephemeris epoch given as a number of seconds is not finite.",
     ),
+    (
+        TimeErrorKind::OutsideTdbModelSpan.as_str(),
+        "TDB - TT (for TDB or TCB) is needed at an epoch outside the span of the chosen `tdb_model`: `ephemeris` (JPL DE440) covers 1959-12-30 to 2101-01-02 TT; the default `series` covers any epoch.",
+    ),
+    (
+        "unknown_tdb_model",
+        "The TDB - TT model (`tdb_model`) is not one of `series`, `ephemeris`.",
+    ),
     // Clock rates, comparisons and signal paths.
     (
         "unreadable_body",
@@ -523,6 +531,7 @@ mod tests {
         check::<HeightReference>("unknown_height_reference");
         check::<crate::physics::signal::TransmitterMotion>("unknown_motion");
         check::<crate::physics::solar_system::Body>("unknown_body");
+        check::<crate::physics::time::tdb_model::TdbModel>("unknown_tdb_model");
     }
 
     #[test]

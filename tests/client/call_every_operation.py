@@ -142,6 +142,36 @@ def convert_get(api, m, document):
         "impossible_date",
         field="at",
     )
+    # The DE440 TDB - TT model: the answer names it; it stays within 30 ns of the default
+    # series in 2026 (tests/reference/tdb_ephemeris_reference.csv, tools/make_ephemeris_time.py)
+    # and covers 1959-12-30 to 2101-01-02 TT only.
+    series = expect(api.call("convert_get", at="2026-03-14T06:30:00", to="TDB"), 200)
+    ephemeris = expect(
+        api.call(
+            "convert_get",
+            at="2026-03-14T06:30:00",
+            to="TDB",
+            tdb_model=m.TdbModelName.EPHEMERIS,
+        ),
+        200,
+    )
+    assert series.tdb_model == "series", series.tdb_model
+    assert ephemeris.tdb_model == "ephemeris", ephemeris.tdb_model
+    gap = Decimal(ephemeris.results[0].difference_exact_s) - Decimal(
+        series.results[0].difference_exact_s
+    )
+    assert abs(gap) < Decimal("30e-9"), gap
+    expect_problem(
+        api.call(
+            "convert_get",
+            at="2150-01-01T00:00:00",
+            to="TDB",
+            tdb_model=m.TdbModelName.EPHEMERIS,
+        ),
+        422,
+        "outside_tdb_model_span",
+        field="at",
+    )
 
 
 @operation("convert_post")

@@ -12,6 +12,13 @@ use crate::physics::time::formats::{parse_instant, InstantDigits, InstantFormat}
 use crate::physics::time::instant::{attos_to_seconds_f64, Instant};
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::scale::Scale;
+use crate::physics::time::tdb_model::TdbModel;
+
+/// Whether a conversion from `from` into `targets` goes through TDB - TT.
+fn uses_tdb(from: Scale, targets: &[Scale]) -> bool {
+    let barycentric = |scale: Scale| matches!(scale, Scale::Tdb | Scale::Tcb);
+    barycentric(from) || targets.iter().any(|&target| barycentric(target))
+}
 
 /// Where an instant sits in the request, for the `field` of a problem; written out only when
 /// a problem is answered (a batch names 100 000 of them).
@@ -66,6 +73,8 @@ pub struct Converted {
     pub results: Vec<ConvertedTarget>,
     /// Cautions about this answer.
     pub warnings: Vec<String>,
+    /// The TDB - TT model used, when TDB or TCB is the input or a target.
+    pub tdb_model: Option<TdbModel>,
 }
 
 impl Converted {
@@ -83,6 +92,7 @@ impl Converted {
                 })
                 .collect(),
             warnings: self.warnings.clone(),
+            tdb_model: self.tdb_model.map(|model| model.as_str().to_string()),
         }
     }
 }
@@ -126,5 +136,6 @@ pub fn convert_one(
         input,
         results,
         warnings,
+        tdb_model: uses_tdb(from, targets).then_some(context.tdb_model),
     })
 }

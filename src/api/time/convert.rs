@@ -12,7 +12,7 @@ use super::observer::{observer_from_input, parse_observer_query};
 use super::types::{Conversion, ConversionBatch, ConvertBatchRequest, ConvertQuery};
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, QueryProblems, TimeoutProblem};
 use crate::api::extract::{check_batch_size, compute, JsonBody, QueryParams};
-use crate::api::names::{parse_format, parse_scale, ALL_SCALES};
+use crate::api::names::{parse_format, parse_scale, parse_tdb_model, ALL_SCALES};
 use crate::api::negotiate::{answer_type, AnswerType};
 use crate::api::state::AppState;
 use crate::physics::time::convert::{ConversionContext, TdbEvaluation};
@@ -63,7 +63,7 @@ const CSV_EXAMPLE: &str = "epoch,TAI_iso,TAI_j2000_s,TDB_iso,TDB_j2000_s,warning
             (Conversion = "application/json"),
             (String = "text/csv", example = json!(CSV_EXAMPLE)))),
         QueryProblems,
-        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales), ut1_outside_eop_table (UT1 asked for, or given, at an epoch the Earth orientation table does not cover: before 1962 or after the end of its predictions), not_finite, observer_not_on_ground", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales), ut1_outside_eop_table (UT1 asked for, or given, at an epoch the Earth orientation table does not cover: before 1962 or after the end of its predictions), not_finite, observer_not_on_ground, unknown_tdb_model, outside_tdb_model_span (TDB or TCB with the ephemeris model outside 1959-12-30 to 2101-01-02 TT)", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn convert_get(
     State(state): State<AppState>,
@@ -74,6 +74,7 @@ pub async fn convert_get(
     let targets = parse_targets(query.to.as_deref().unwrap_or("all").split(','), "to")?;
     let format = parse_format(query.format.as_deref(), "format")?;
     let forms = FormSelection::from_query(query.forms.as_deref(), "forms")?;
+    let tdb_model = parse_tdb_model(query.tdb_model.as_deref(), "tdb_model")?;
     let table = state.leap_table();
     let observer = query
         .observer_itrf_m
@@ -85,6 +86,7 @@ pub async fn convert_get(
         table: &table,
         observer,
         tdb_evaluation: TdbEvaluation::Fitted,
+        tdb_model,
         ut1: Some(&*eop),
     };
     let converted = convert_one(
@@ -136,6 +138,7 @@ pub async fn convert_post(
         None => FormSelection::default(),
         Some(names) => FormSelection::parse(names.iter().map(String::as_str), "forms")?,
     };
+    let tdb_model = parse_tdb_model(request.tdb_model.as_deref(), "tdb_model")?;
     check_batch_size(
         request.epochs.len(),
         state.limits().batch_limit,
@@ -156,6 +159,7 @@ pub async fn convert_post(
             table: &table,
             observer,
             tdb_evaluation: TdbEvaluation::Fitted,
+            tdb_model,
             ut1: Some(&*eop),
         };
         let convert_at = |index: usize, text: &str| {

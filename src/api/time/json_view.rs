@@ -86,10 +86,13 @@ pub struct ConversionJson<'a>(pub &'a Converted, pub &'a FormSelection);
 
 impl Serialize for ConversionJson<'_> {
     fn serialize<S: Serializer>(&self, serializer: S) -> Result<S::Ok, S::Error> {
-        let mut map = serializer.serialize_map(Some(3))?;
+        let mut map = serializer.serialize_map(None)?;
         map.serialize_entry("input", &FormsJson(&self.0.input, self.1))?;
         map.serialize_entry("results", &ResultsJson(self.0, self.1))?;
         map.serialize_entry("warnings", &self.0.warnings)?;
+        if let Some(model) = self.0.tdb_model {
+            map.serialize_entry("tdb_model", model.as_str())?;
+        }
         map.end()
     }
 }
@@ -173,6 +176,20 @@ mod tests {
                 FieldName::Named("at"),
             );
             converted.push(one.unwrap_or_else(|e| panic!("{epoch}: {e:?}")));
+        }
+        // With the ephemeris TDB model, and without TDB or TCB (no `tdb_model` written).
+        let ephemeris =
+            context.with_tdb_model(crate::physics::time::tdb_model::TdbModel::Ephemeris);
+        for (targets, context) in [(vec![Scale::Tcb], &ephemeris), (vec![Scale::Tai], &context)] {
+            let one = convert_one(
+                epochs[0],
+                InstantFormat::Iso,
+                Scale::Utc,
+                &targets,
+                context,
+                FieldName::Named("at"),
+            );
+            converted.push(one.unwrap_or_else(|e| panic!("{targets:?}: {e:?}")));
         }
         for forms in &selections {
             for one in &converted {

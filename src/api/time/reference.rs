@@ -201,13 +201,14 @@ pub async fn leap_seconds(State(state): State<AppState>, headers: HeaderMap) -> 
         (status = 200, description = "Now, in every scale (never cached)", body = Conversion,
             headers(("Cache-Control" = String, description = "`no-store`"))),
         QueryProblems,
-        (status = 422, description = "A name in `forms` is not a form (`unknown_format`, `field` names it)", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A name in `forms` is not a form (`unknown_format`, `field` names it), the TDB - TT model is not one (`unknown_tdb_model`), or the server's clock reads outside the span of the ephemeris model (`outside_tdb_model_span`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 503, description = "The server's clock reads before 1970 (`clock_unavailable`), or the request took longer than the configured timeout (`request_timeout`)", body = crate::api::error::Problem, content_type = "application/problem+json")))]
 pub async fn now(
     State(state): State<AppState>,
     QueryParams(query): QueryParams<NowQuery>,
 ) -> Result<Response, ApiError> {
     let forms = FormSelection::from_query(query.forms.as_deref(), "forms")?;
+    let tdb_model = crate::api::names::parse_tdb_model(query.tdb_model.as_deref(), "tdb_model")?;
     let since_epoch = std::time::SystemTime::now()
         .duration_since(std::time::UNIX_EPOCH)
         .map_err(|_| {
@@ -223,7 +224,7 @@ pub async fn now(
         since_epoch.subsec_nanos()
     );
     let table = state.leap_table();
-    let context = ConversionContext::geocentric(&table);
+    let context = ConversionContext::geocentric(&table).with_tdb_model(tdb_model);
     let conversion = convert_one(
         &text,
         InstantFormat::UnixS,

@@ -5,7 +5,7 @@ use utoipa::{IntoParams, ToSchema};
 
 use crate::api::names::{
     FormList, InstantFormatName, InstantString, ObserverPositionM, ScaleName, TargetScaleList,
-    TargetScaleName, ThreeNumbersText,
+    TargetScaleName, TdbModelName, ThreeNumbersText,
 };
 use crate::physics::time::format_name::InstantFormat;
 use crate::physics::time::formats::InstantText;
@@ -102,6 +102,11 @@ pub struct Conversion {
     /// Cautions about this answer (e.g. a UTC instant past the leap-second table's expiry, or
     /// UT1 - UTC from predicted days of the Earth orientation table, with its likely error).
     pub warnings: Vec<String>,
+    /// The TDB - TT model used (`series` or `ephemeris`), present when TDB or TCB is the input
+    /// scale or a target.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    #[schema(value_type = Option<TdbModelName>)]
+    pub tdb_model: Option<String>,
 }
 
 /// Answer of the batch conversion.
@@ -140,6 +145,10 @@ pub struct ConvertQuery {
     /// (default: every form but unix_s). In CSV one column per form per target.
     #[param(value_type = Option<FormList>, example = "iso,j2000_s")]
     pub forms: Option<String>,
+    /// The TDB - TT model for TDB and TCB: `series` (default) or `ephemeris` (JPL DE440,
+    /// 1959-12-30 to 2101-01-02 TT; 422 `outside_tdb_model_span` elsewhere).
+    #[param(value_type = Option<TdbModelName>, example = "ephemeris")]
+    pub tdb_model: Option<String>,
 }
 
 /// Observer on the Earth for the topocentric part of TDB - TT: either `itrf_position_m`, or
@@ -192,6 +201,10 @@ pub struct ConvertBatchRequest {
     /// every form but `unix_s`). In CSV one column per form per target.
     #[schema(value_type = Option<Vec<InstantFormatName>>, min_items = 1)]
     pub forms: Option<Vec<String>>,
+    /// The TDB - TT model for TDB and TCB: `series` (default) or `ephemeris` (JPL DE440,
+    /// 1959-12-30 to 2101-01-02 TT; 422 `outside_tdb_model_span` elsewhere).
+    #[schema(value_type = Option<TdbModelName>)]
+    pub tdb_model: Option<String>,
 }
 
 /// Query of `GET /v1/time/now`.
@@ -203,4 +216,7 @@ pub struct NowQuery {
     /// `GET /v1/time/convert`; default: every form but unix_s).
     #[param(value_type = Option<FormList>, example = "iso,unix_s")]
     pub forms: Option<String>,
+    /// The TDB - TT model for TDB and TCB: `series` (default) or `ephemeris` (JPL DE440).
+    #[param(value_type = Option<TdbModelName>, example = "ephemeris")]
+    pub tdb_model: Option<String>,
 }

@@ -11,7 +11,11 @@ use super::instant::{
 };
 use super::leap_seconds::LeapTable;
 use super::scale::Scale;
-use super::tdb_series::{tdb_minus_tt_fast_s, tdb_minus_tt_series_s, TopocentricObserver};
+use super::tdb_ephemeris::{tdb_minus_tt_ephemeris_s, SPAN_TEXT};
+use super::tdb_model::TdbModel;
+use super::tdb_series::{
+    tdb_minus_tt_fast_s, tdb_minus_tt_series_s, topocentric_part_s, TopocentricObserver,
+};
 use super::ut1::{tai_from_ut1_attos, ut1_from_tai, ut1_minus_tai_attos, Ut1Source};
 use crate::physics::constants;
 use crate::physics::constants::{L_B, L_G, T0_TO_J2000_ATTOS, TDB0_S, TT_MINUS_TAI_ATTOS};
@@ -42,8 +46,10 @@ pub struct ConversionContext<'a> {
     pub table: &'a LeapTable,
     /// An observer on the Earth for the topocentric part of TDB - TT (geocentric when `None`).
     pub observer: Option<TopocentricObserver>,
-    /// Fitted or full TDB - TT series.
+    /// Fitted or full TDB - TT series (for [`TdbModel::Series`]).
     pub tdb_evaluation: TdbEvaluation,
+    /// The model of TDB - TT: the series (default) or the DE440 integral.
+    pub tdb_model: TdbModel,
     /// The source of UT1 - UTC (the Earth orientation table in force), for UT1 and the
     /// topocentric TDB term; `None`: conversions to or from UT1 fail with
     /// [`TimeError::Ut1Unavailable`].
@@ -57,7 +63,16 @@ impl<'a> ConversionContext<'a> {
             table,
             observer: None,
             tdb_evaluation: TdbEvaluation::Fitted,
+            tdb_model: TdbModel::Series,
             ut1: None,
+        }
+    }
+
+    /// The same context with `model` for TDB - TT.
+    pub fn with_tdb_model(self, model: TdbModel) -> Self {
+        Self {
+            tdb_model: model,
+            ..self
         }
     }
 
@@ -116,16 +131,31 @@ fn ut_day_fraction(tt_attos: i128, context: &ConversionContext<'_>) -> f64 {
     seconds_of_day as f64 / ATTOS_PER_DAY as f64
 }
 
-/// TDB - TT at a TT count with the context's observer and series evaluation (seconds).
-pub fn tdb_minus_tt_s(tt_attos: i128, context: &ConversionContext<'_>) -> f64 {
+/// TDB - TT at a TT count with the context's observer, model and series evaluation (seconds).
+///
+/// Fails only for [`TdbModel::Ephemeris`] outside its span
+/// ([`TimeError::OutsideTdbModelSpan`]).
+pub fn tdb_minus_tt_s(tt_attos: i128, context: &ConversionContext<'_>) -> Result<f64, TimeError> {
     let tt_s = attos_to_seconds_f64(tt_attos);
     let (ut, observer) = match &context.observer {
         Some(observer) => (ut_day_fraction(tt_attos, context), Some(observer)),
         None => (0.0, None),
     };
-    match context.tdb_evaluation {
-        TdbEvaluation::Fitted => tdb_minus_tt_fast_s(tt_s, ut, observer),
-        TdbEvaluation::FullSeries => tdb_minus_tt_series_s(tt_s, ut, observer),
+    match context.tdb_model {
+        TdbModel::Series => Ok(match context.tdb_evaluation {
+            TdbEvaluation::Fitted => tdb_minus_tt_fast_s(tt_s, ut, observer),
+            TdbEvaluation::FullSeries => tdb_minus_tt_series_s(tt_s, ut, observer),
+        }),
+        TdbModel::Ephemeris => {
+            let geocentric_s = tdb_minus_tt_ephemeris_s(tt_s).ok_or_else(|| {
+                TimeError::OutsideTdbModelSpan(format!(
+                    "TDB - TT model `ephemeris` (JPL DE440) covers {SPAN_TEXT}; this instant is outside it (the `series` model covers any epoch)"
+                ))
+            })?;
+            let topocentric_s =
+                observer.map_or(0.0, |observer| topocentric_part_s(tt_s, ut, observer));
+            Ok(geocentric_s + topocentric_s)
+        }
     }
 }
 
@@ -140,23 +170,23 @@ pub fn to_tt_attos(instant: &Instant, context: &ConversionContext<'_>) -> Result
         }
         Scale::Bdt => count - BDT_MINUS_TAI_ATTOS + TT_MINUS_TAI_ATTOS,
         Scale::Tcg => count + seconds_f64_to_attos(tt_minus_tcg_s(count)),
-        Scale::Tdb => tt_from_tdb_attos(count, context),
+        Scale::Tdb => tt_from_tdb_attos(count, context)?,
         Scale::Tcb => {
             let tdb = count + seconds_f64_to_attos(tdb_minus_tcb_s(count));
-            tt_from_tdb_attos(tdb, context)
+            tt_from_tdb_attos(tdb, context)?
         }
         Scale::Ut1 => tai_from_ut1_attos(count, context.table, context.ut1)? + TT_MINUS_TAI_ATTOS,
     })
 }
 
-/// Solves TT = TDB - (TDB - TT)(TT) by fixed-point iteration (the series changes by less than
-/// 4e-10 s per second, so each step gains nine digits; three steps reach the attosecond).
-fn tt_from_tdb_attos(tdb_attos: i128, context: &ConversionContext<'_>) -> i128 {
+/// Solves TT = TDB - (TDB - TT)(TT) by fixed-point iteration (either model changes by less
+/// than 4e-10 s per second, so each step gains nine digits; three steps reach the attosecond).
+fn tt_from_tdb_attos(tdb_attos: i128, context: &ConversionContext<'_>) -> Result<i128, TimeError> {
     let mut tt = tdb_attos;
     for _ in 0..3 {
-        tt = tdb_attos - seconds_f64_to_attos(tdb_minus_tt_s(tt, context));
+        tt = tdb_attos - seconds_f64_to_attos(tdb_minus_tt_s(tt, context)?);
     }
-    tt
+    Ok(tt)
 }
 
 /// The instant in `target` of the event at TT count `tt_attos`.
@@ -180,9 +210,9 @@ pub fn from_tt_attos(
         Scale::Bdt => tai + BDT_MINUS_TAI_ATTOS,
         Scale::Ut1 => return ut1_from_tai(tai, context.table, context.ut1),
         Scale::Tcg => tt_attos + seconds_f64_to_attos(tcg_minus_tt_s(tt_attos)),
-        Scale::Tdb => tt_attos + seconds_f64_to_attos(tdb_minus_tt_s(tt_attos, context)),
+        Scale::Tdb => tt_attos + seconds_f64_to_attos(tdb_minus_tt_s(tt_attos, context)?),
         Scale::Tcb => {
-            let tdb = tt_attos + seconds_f64_to_attos(tdb_minus_tt_s(tt_attos, context));
+            let tdb = tt_attos + seconds_f64_to_attos(tdb_minus_tt_s(tt_attos, context)?);
             tdb + seconds_f64_to_attos(tcb_minus_tdb_s(tdb))
         }
     };

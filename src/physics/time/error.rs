@@ -28,6 +28,8 @@ vocabulary! {
         OutOfRange = "instant_out_of_range",
         /// [`TimeError::Ut1Unavailable`].
         Ut1Unavailable = "ut1_outside_eop_table",
+        /// [`TimeError::OutsideTdbModelSpan`].
+        OutsideTdbModelSpan = "outside_tdb_model_span",
     }
 }
 
@@ -66,6 +68,9 @@ pub enum TimeError {
     /// UT1 is needed at an epoch the Earth orientation table does not cover (or no table is
     /// given to the conversion).
     Ut1Unavailable(String),
+    /// TDB - TT is needed at an epoch outside the span of the chosen TDB model (the
+    /// ephemeris model covers 1959-12-30 to 2101-01-02 TT).
+    OutsideTdbModelSpan(String),
 }
 
 impl TimeError {
@@ -81,6 +86,7 @@ impl TimeError {
             Self::BeforeUtc(_) => TimeErrorKind::BeforeUtc,
             Self::OutOfRange(_) => TimeErrorKind::OutOfRange,
             Self::Ut1Unavailable(_) => TimeErrorKind::Ut1Unavailable,
+            Self::OutsideTdbModelSpan(_) => TimeErrorKind::OutsideTdbModelSpan,
         }
     }
 
@@ -118,7 +124,8 @@ impl fmt::Display for TimeError {
             | Self::InvalidLeapSecond(message)
             | Self::BeforeUtc(message)
             | Self::OutOfRange(message)
-            | Self::Ut1Unavailable(message) => f.write_str(message),
+            | Self::Ut1Unavailable(message)
+            | Self::OutsideTdbModelSpan(message) => f.write_str(message),
             Self::FormatNotForScale {
                 format,
                 scale,

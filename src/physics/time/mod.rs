@@ -11,5 +11,7 @@ pub mod instant;
 pub mod leap_seconds;
 pub mod offsets;
 pub mod scale;
+pub mod tdb_ephemeris;
+pub mod tdb_model;
 pub mod tdb_series;
 pub mod ut1;

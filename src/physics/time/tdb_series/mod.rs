@@ -105,6 +105,18 @@ pub fn tdb_minus_tt_series_s(
     topocentric_s + geocentric.series_s + geocentric.planetary_mass_adjustment_s
 }
 
+/// The topocentric part of TDB - TT alone (Moyer 1981 / Murray 1983, as ERFA `eraDtdb`), in
+/// seconds: the part added to either TDB - TT model for an observer on the Earth. Arguments as
+/// for [`tdb_minus_tt_series_s`].
+pub fn topocentric_part_s(
+    tt_since_j2000_s: f64,
+    ut1_day_fraction: f64,
+    observer: &TopocentricObserver,
+) -> f64 {
+    let t_millennia = julian_millennia_since_j2000(tt_since_j2000_s);
+    topocentric::topocentric_s(t_millennia, ut1_day_fraction, observer)
+}
+
 /// TDB - TT, fast form: fitted geocentric part + exact topocentric part.
 ///
 /// Same arguments, result and notes as [`tdb_minus_tt_series_s`]. Between 1899-12-31 and
