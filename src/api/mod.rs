@@ -16,6 +16,7 @@ pub mod openapi;
 pub mod problem_codes;
 pub mod proper_time;
 pub mod signal;
+pub mod stability;
 pub mod state;
 pub mod time;
 
@@ -33,6 +34,7 @@ pub fn router(state: AppState) -> Router {
         .merge(earth::router())
         .merge(proper_time::router())
         .merge(signal::router())
+        .merge(stability::router())
         .merge(docs::router())
         .with_state(state)
 }

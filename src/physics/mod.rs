@@ -12,5 +12,6 @@ pub mod rate;
 pub mod rate_error;
 pub mod readable;
 pub mod signal;
+pub mod stability;
 pub mod time;
 pub mod vocabulary;

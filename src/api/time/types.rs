@@ -140,6 +140,16 @@ pub struct ConvertQuery {
     /// (default: every form but unix_s). In CSV one column per form per target.
     #[param(value_type = Option<FormList>, example = "iso,j2000_s")]
     pub forms: Option<String>,
+    /// The broadcast week counter `at` was read from, when `format` is gnss_week and the week
+    /// is truncated (as broadcast): gps_lnav (10 bits), gps_cnav (13), galileo (12), beidou
+    /// (13). The full week is the one nearest to `week_near`; `warnings` say which rollover was
+    /// chosen.
+    #[param(value_type = Option<WeekCounterName>, example = "gps_lnav")]
+    pub week_counter: Option<String>,
+    /// The date (`YYYY-MM-DD`, 1980 or later) near which a broadcast week is resolved (default:
+    /// today on the server's clock); only with `week_counter`.
+    #[param(example = "2026-01-01")]
+    pub week_near: Option<String>,
 }
 
 /// Observer on the Earth for the topocentric part of TDB - TT: either `itrf_position_m`, or
@@ -192,6 +202,16 @@ pub struct ConvertBatchRequest {
     /// every form but `unix_s`). In CSV one column per form per target.
     #[schema(value_type = Option<Vec<InstantFormatName>>, min_items = 1)]
     pub forms: Option<Vec<String>>,
+    /// The broadcast week counter the epochs were read from, when `format` is gnss_week and the
+    /// weeks are truncated (as broadcast): gps_lnav (10 bits), gps_cnav (13), galileo (12),
+    /// beidou (13). Each full week is the one nearest to `week_near`; each conversion's
+    /// `warnings` say which rollover was chosen.
+    #[schema(value_type = Option<WeekCounterName>, example = "gps_lnav")]
+    pub week_counter: Option<String>,
+    /// The date (`YYYY-MM-DD`, 1980 or later) near which broadcast weeks are resolved (default:
+    /// today on the server's clock); only with `week_counter`.
+    #[schema(example = "2026-01-01")]
+    pub week_near: Option<String>,
 }
 
 /// Query of `GET /v1/time/now`.
@@ -203,4 +223,21 @@ pub struct NowQuery {
     /// `GET /v1/time/convert`; default: every form but unix_s).
     #[param(value_type = Option<FormList>, example = "iso,unix_s")]
     pub forms: Option<String>,
+}
+
+/// Schema of a week counter name.
+pub struct WeekCounterName;
+
+impl utoipa::PartialSchema for WeekCounterName {
+    fn schema() -> utoipa::openapi::RefOr<utoipa::openapi::Schema> {
+        crate::api::names::vocabulary_schema::<crate::physics::time::formats::WeekCounter>(
+            "The broadcast week counter a `gnss_week` instant was read from: `gps_lnav` (GPS/QZSS legacy message, 10 bits, IS-GPS-200), `gps_cnav` (GPS/QZSS CNAV, 13 bits), `galileo` (12 bits, Galileo OS SIS ICD), `beidou` (13 bits, BeiDou OS SIS ICD).",
+        )
+    }
+}
+
+impl utoipa::ToSchema for WeekCounterName {
+    fn name() -> std::borrow::Cow<'static, str> {
+        std::borrow::Cow::Borrowed("WeekCounterName")
+    }
 }
