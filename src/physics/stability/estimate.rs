@@ -201,7 +201,13 @@ pub fn analyse(request: &StabilityRequest) -> Result<Vec<Estimate>, StabilityErr
                 })?;
             let (alpha, identified) = alpha_at(m);
             let (edf, edf_method) = degrees_of_freedom(deviation, n, m, alpha);
-            let edf = edf.max(1.0);
+            // The approximate formulas can leave their range for a handful of terms (the
+            // random-walk one divides by (N - 3)^2): the count of terms then stands in.
+            let edf = if edf.is_finite() {
+                edf.max(1.0)
+            } else {
+                terms as f64
+            };
             let value = variance.max(0.0).sqrt();
             if !value.is_finite() {
                 return Err(StabilityError::new(

@@ -211,3 +211,39 @@ fn confidence_interval_from_edf() {
     );
     assert!(e.low < e.value && e.value < e.high);
 }
+
+#[test]
+fn intervals_stay_finite_for_the_shortest_series() {
+    // Three phase points of a random walk: one ADEV term; with every deviation and noise type
+    // the interval is finite and holds the value (common practice: sigma within its interval).
+    for values in [[0.0, 1.0, 3.0], [0.0, 1.0, 0.0], [0.0, 2.0, 3.0]] {
+        let all = analyse(&StabilityRequest {
+            kind: DataKind::Phase,
+            values: &values,
+            tau0_s: 1.0,
+            deviations: &[
+                Deviation::Adev,
+                Deviation::Oadev,
+                Deviation::Mdev,
+                Deviation::Totdev,
+            ],
+            factors: None,
+            confidence: 0.95,
+        })
+        .unwrap_or_default();
+        assert_eq!(all.len(), 4);
+        for e in all {
+            assert!(e.edf.is_finite() && e.edf >= 1.0, "{e:?}");
+            assert!(e.low.is_finite() && e.high.is_finite(), "{e:?}");
+            assert!(e.low <= e.value && e.value <= e.high, "{e:?}");
+        }
+    }
+    for alpha in -2..=2 {
+        for n in 3..12 {
+            for m in 1..=(n - 1) / 2 {
+                let edf = allan_edf(n, m, alpha);
+                assert!(!edf.is_nan(), "alpha {alpha} n {n} m {m}");
+            }
+        }
+    }
+}
