@@ -18,6 +18,7 @@ pub mod problem_codes;
 pub mod proper_time;
 pub mod signal;
 pub mod solar_system;
+pub mod stability;
 pub mod state;
 pub mod time;
 
@@ -37,6 +38,7 @@ pub fn router(state: AppState) -> Router {
         .merge(signal::router())
         .merge(plots::router())
         .merge(solar_system::router())
+        .merge(stability::router())
         .merge(docs::router())
         .with_state(state)
 }

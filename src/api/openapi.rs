@@ -24,6 +24,7 @@ use utoipa::{Modify, OpenApi};
         crate::api::time::reference::now,
         crate::api::clock::rate::rate,
         crate::api::clock::compare::compare,
+        crate::api::stability::handler::stability,
         crate::api::proper_time::proper_time,
         crate::api::signal::path::signal_path,
         crate::api::signal::two_way::two_way,
@@ -43,6 +44,7 @@ use utoipa::{Modify, OpenApi};
         crate::api::names::InstantFormatName,
         crate::api::names::InstantString,
         crate::api::names::ThreeNumbersText,
+        crate::api::time::types::WeekCounterName,
         crate::api::earth::types::UtcIsoInstant,
         crate::api::names::ReferenceName,
         crate::api::solar_system::types::BodyName,
@@ -50,7 +52,7 @@ use utoipa::{Modify, OpenApi};
     modifiers(&CrossFieldRules),
     tags(
         (name = "time", description = "Time scales: conversions, the scales, the leap-second table"),
-        (name = "clock", description = "Clock rates against TT or TCG: state vectors, orbits, ground and lunar sites; comparisons between clocks"),
+        (name = "clock", description = "Clock rates against TT or TCG: state vectors, orbits, ground and lunar sites; comparisons between clocks; the frequency stability of clock data (NIST SP 1065 deviations)"),
         (name = "signal", description = "Signal paths: light time with Sagnac, Shapiro and clock terms; two-way time-transfer Sagnac correction"),
         (name = "earth", description = "Earth orientation: the IERS EOP table in force (UT1 - UTC, polar motion, celestial pole offsets, length of day) and its values at an instant; the Earth rotation angle, sidereal times, CIP and the GCRS <-> ITRS rotation (IAU 2006/2000A) at an instant"),
         (name = "plots", description = "Plots as self-contained SVG (Okabe-Ito colours, dash patterns and markers), each with a CSV twin of the same numbers (`Accept: text/csv`): the rate of a clock on circular orbits by altitude, the offsets between time scales over a span; the proper-time plot is `POST /v1/clock/proper-time` with `Accept: image/svg+xml`"),
@@ -174,6 +176,8 @@ mod tests {
         collect::<crate::api::clock::types::CompareRequest>(&mut found);
         collect::<crate::api::clock::answer::RateBatchAnswer>(&mut found);
         collect::<crate::api::clock::answer::CompareAnswer>(&mut found);
+        collect::<crate::api::stability::types::StabilityBody>(&mut found);
+        collect::<crate::api::stability::types::StabilityAnswer>(&mut found);
         collect::<crate::api::signal::types::SignalPathRequest>(&mut found);
         collect::<crate::api::signal::types::SignalPathAnswer>(&mut found);
         collect::<crate::api::signal::types::TwoWayRequest>(&mut found);

@@ -17,6 +17,7 @@ use crate::physics::proper_time::ProperTimeErrorKind;
 use crate::physics::rate::RateErrorKind;
 use crate::physics::signal::SignalErrorKind;
 use crate::physics::solar_system::EphemerisErrorKind;
+use crate::physics::stability::StabilityErrorKind;
 use crate::physics::time::error::TimeErrorKind;
 
 /// (code, meaning) for every problem code the API answers; a code the physics library answers
@@ -93,6 +94,14 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "The instant or number is outside the range the time engine supports.",
     ),
     // Time conversion requests.
+    (
+        "unknown_week_counter",
+        "`week_counter` is not one of `gps_lnav` (10 bits), `gps_cnav` (13 bits), `galileo` (12 bits), `beidou` (13 bits).",
+    ),
+    (
+        "week_counter_needs_gnss_week",
+        "`week_counter` resolves a broadcast week of an instant written as `gnss_week` (give `format=gnss_week`), and `week_near` needs a `week_counter`.",
+    ),
     (
         "no_target_scale",
         "No target scale was given; name at least one scale, or `all`.",
@@ -433,6 +442,43 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         "sp3_unsupported_time_system",
         "The SP3 time system is not one the service reads (GPS, GAL, BDT, QZS, TAI, UTC, GLO).",
     ),
+    // Clock stability (NIST SP 1065 deviations).
+    (
+        "unknown_data_kind",
+        "`kind` is not `phase` (time error, seconds) or `frequency` (fractional frequency).",
+    ),
+    (
+        "unknown_deviation",
+        "A name in `deviations` is not one of `adev`, `oadev`, `mdev`, `tdev`, `hdev`, `ohdev`, `totdev` (or the list is empty).",
+    ),
+    (
+        StabilityErrorKind::EmptySeries.as_str(),
+        "The series has no values; send at least 3 phase or 2 frequency values.",
+    ),
+    (
+        StabilityErrorKind::NotFiniteSample.as_str(),
+        "A value of the series (or the phase accumulated from frequency values, or its square) is not a finite number; `field` names it where one value is at fault.",
+    ),
+    (
+        StabilityErrorKind::GapInSeries.as_str(),
+        "A sample is missing (`null`, or a step of several tau0 in `times_s`). Gaps are not filled: send each gap-free stretch as its own request.",
+    ),
+    (
+        StabilityErrorKind::SeriesTooShort.as_str(),
+        "An averaging time is longer than the series allows for a deviation; `detail` gives the longest one, `field` the averaging time.",
+    ),
+    (
+        StabilityErrorKind::TauNotMultiple.as_str(),
+        "An averaging time in `tau_s` is not a whole multiple (at least 1) of the sampling interval tau0.",
+    ),
+    (
+        StabilityErrorKind::NonUniformSampling.as_str(),
+        "The samples are not evenly spaced (`times_s` steps differ from tau0 by more than 1e-6 tau0), or no sampling interval is given, or it is not positive.",
+    ),
+    (
+        StabilityErrorKind::InvalidConfidence.as_str(),
+        "`confidence` must lie strictly between 0 and 1 (0.683 for 1 sigma, 0.95 ...).",
+    ),
 ];
 
 /// The meaning of `code`, when it is in [`PROBLEM_CODES`].
@@ -569,6 +615,12 @@ mod tests {
             .collect();
         expect("post", "/v1/clock/rate", &rate);
         expect("get", "/v1/time/convert", &TimeErrorKind::NAMES);
+        let stability: Vec<&str> = StabilityErrorKind::NAMES
+            .iter()
+            .copied()
+            .chain(["unknown_data_kind", "unknown_deviation"])
+            .collect();
+        expect("post", "/v1/clock/stability", &stability);
         let path: Vec<&str> = SignalErrorKind::ALL
             .iter()
             .filter(|kind| **kind != SignalErrorKind::NotVisible)
@@ -638,6 +690,11 @@ mod tests {
                         "position_m",
                         "unix_s",
                         "gnss_week",
+                        "tau_s",
+                        "times_s",
+                        "tau0_s",
+                        "week_counter",
+                        "week_near",
                     ];
                     if is_code_like
                         && !known_field.contains(&word.as_str())

@@ -13,5 +13,6 @@ pub mod rate_error;
 pub mod readable;
 pub mod signal;
 pub mod solar_system;
+pub mod stability;
 pub mod time;
 pub mod vocabulary;

@@ -172,6 +172,22 @@ def convert_get(api, m, document):
         "outside_tdb_model_span",
         field="at",
     )
+    # A broadcast GPS LNAV (10-bit) week: 337 near 2026 is full week 2385 (issue 13; IS-GPS-200).
+    week = expect(
+        api.call(
+            "convert_get",
+            at="337:0",
+            from_=m.ScaleName.GPST,
+            to="GPST",
+            format_=m.InstantFormatName.GNSS_WEEK,
+            forms="gnss_week",
+            week_counter=m.WeekCounterName.GPS_LNAV,
+            week_near="2026-01-01",
+        ),
+        200,
+    )
+    assert week.input_.gnss_week == "2385:0.0", week.input_
+    assert "full week 2385" in week.warnings[0], week.warnings
 
 
 @operation("convert_post")
@@ -261,6 +277,28 @@ def compare(api, m, document):
     near(answer.a_minus_b.fractional, difference, 1e-18, "a - b from the two rates")
     near(answer.a_minus_b.us_per_day, difference * 86_400e6, 1e-9, "a - b in us per day")
     near(answer.clock_a.fractional.total, circular_orbit_rate(29_600_000.0), 1e-15, "orbit a rate")
+
+
+@operation("stability")
+def stability(api, m, document):
+    # NBS14 10-point frequency set (NIST SP 1065): ADEV(1) 91.22945, MDEV(2) 74.78849.
+    body = m.StabilityBody.from_dict(
+        {
+            "kind": "frequency",
+            "tau0_s": 1.0,
+            "values": [892, 809, 823, 798, 671, 644, 883, 903, 677],
+            "deviations": ["adev", "mdev"],
+            "tau_s": [1, 2],
+        }
+    )
+    answer = expect(api.call("stability", body=body), 200)
+    adev1, adev2, mdev1, mdev2 = answer.results
+    near(adev1.value, 91.22945, 1e-4, "NBS14 ADEV(1)")
+    near(mdev2.value, 74.78849, 1e-4, "NBS14 MDEV(2)")
+    assert adev1.terms == 8, adev1
+    assert adev1.low < adev1.value < adev1.high, adev1
+    gap = m.StabilityBody.from_dict({"kind": "phase", "tau0_s": 1.0, "values": [0.0, None, 1.0]})
+    expect_problem(api.call("stability", body=gap), 422, "gap_in_series", field="values[1]")
 
 
 @operation("proper_time")

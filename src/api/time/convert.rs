@@ -4,6 +4,7 @@ use axum::extract::State;
 use axum::http::{header, HeaderMap};
 use axum::response::{IntoResponse, Response};
 
+use super::broadcast_week::read_broadcast_week;
 use super::conversion::{convert_one, FieldName};
 use super::csv::{self, CSV_CONTENT_TYPE};
 use super::forms::FormSelection;
@@ -63,7 +64,7 @@ const CSV_EXAMPLE: &str = "epoch,TAI_iso,TAI_j2000_s,TDB_iso,TDB_j2000_s,warning
             (Conversion = "application/json"),
             (String = "text/csv", example = json!(CSV_EXAMPLE)))),
         QueryProblems,
-        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales), ut1_outside_eop_table (UT1 asked for, or given, at an epoch the Earth orientation table does not cover: before 1962 or after the end of its predictions), not_finite, observer_not_on_ground, unknown_tdb_model, outside_tdb_model_span (TDB or TCB with the ephemeris model outside 1959-12-30 to 2101-01-02 TT)", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales, a week_counter of another system than the scale), unknown_week_counter, week_counter_needs_gnss_week (a week_counter with another format, or week_near without week_counter), ut1_outside_eop_table (UT1 asked for, or given, at an epoch the Earth orientation table does not cover: before 1962 or after the end of its predictions), not_finite, observer_not_on_ground, unknown_tdb_model, outside_tdb_model_span (TDB or TCB with the ephemeris model outside 1959-12-30 to 2101-01-02 TT)", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn convert_get(
     State(state): State<AppState>,
@@ -75,6 +76,14 @@ pub async fn convert_get(
     let format = parse_format(query.format.as_deref(), "format")?;
     let forms = FormSelection::from_query(query.forms.as_deref(), "forms")?;
     let tdb_model = parse_tdb_model(query.tdb_model.as_deref(), "tdb_model")?;
+    let broadcast = read_broadcast_week(
+        query.week_counter.as_deref(),
+        query.week_near.as_deref(),
+        format,
+        from,
+        "week_counter",
+        "week_near",
+    )?;
     let table = state.leap_table();
     let observer = query
         .observer_itrf_m
@@ -89,14 +98,22 @@ pub async fn convert_get(
         tdb_model,
         ut1: Some(&*eop),
     };
-    let converted = convert_one(
-        &query.at,
+    let (at, note) = match &broadcast {
+        Some(week) => {
+            let (text, note) = week.resolve(&query.at, from, FieldName::Named("at"))?;
+            (text, Some(note))
+        }
+        None => (query.at.clone(), None),
+    };
+    let mut converted = convert_one(
+        &at,
         format,
         from,
         &targets,
         &context,
         FieldName::Named("at"),
     )?;
+    converted.warnings.extend(note);
     let written = match answer_type(&headers) {
         // `answer_type` offers JSON and CSV only.
         AnswerType::Json | AnswerType::Svg => (
@@ -139,6 +156,14 @@ pub async fn convert_post(
         Some(names) => FormSelection::parse(names.iter().map(String::as_str), "forms")?,
     };
     let tdb_model = parse_tdb_model(request.tdb_model.as_deref(), "tdb_model")?;
+    let broadcast = read_broadcast_week(
+        request.week_counter.as_deref(),
+        request.week_near.as_deref(),
+        format,
+        from,
+        "week_counter",
+        "week_near",
+    )?;
     check_batch_size(
         request.epochs.len(),
         state.limits().batch_limit,
@@ -163,14 +188,14 @@ pub async fn convert_post(
             ut1: Some(&*eop),
         };
         let convert_at = |index: usize, text: &str| {
-            convert_one(
-                text,
-                format,
-                from,
-                &targets,
-                &context,
-                FieldName::Item("epochs", index),
-            )
+            let field = FieldName::Item("epochs", index);
+            let Some(week) = &broadcast else {
+                return convert_one(text, format, from, &targets, &context, field);
+            };
+            let (full, note) = week.resolve(text, from, field)?;
+            let mut converted = convert_one(&full, format, from, &targets, &context, field)?;
+            converted.warnings.push(note);
+            Ok(converted)
         };
         // Written here, in the blocking pool: a 100 000-epoch answer takes as long to write as
         // to compute, and written on an async worker it delays the shutdown signal.

@@ -1,5 +1,6 @@
 //! The time-scale endpoints: conversion, the scales, the leap-second table and now.
 
+pub mod broadcast_week;
 pub mod conversion;
 pub mod convert;
 pub mod csv;

@@ -149,6 +149,16 @@ pub struct ConvertQuery {
     /// 1959-12-30 to 2101-01-02 TT; 422 `outside_tdb_model_span` elsewhere).
     #[param(value_type = Option<TdbModelName>, example = "ephemeris")]
     pub tdb_model: Option<String>,
+    /// The broadcast week counter `at` was read from, when `format` is gnss_week and the week
+    /// is truncated (as broadcast): gps_lnav (10 bits), gps_cnav (13), galileo (12), beidou
+    /// (13). The full week is the one nearest to `week_near`; `warnings` say which rollover was
+    /// chosen.
+    #[param(value_type = Option<WeekCounterName>, example = "gps_lnav")]
+    pub week_counter: Option<String>,
+    /// The date (`YYYY-MM-DD`, 1980 or later) near which a broadcast week is resolved (default:
+    /// today on the server's clock); only with `week_counter`.
+    #[param(example = "2026-01-01")]
+    pub week_near: Option<String>,
 }
 
 /// Observer on the Earth for the topocentric part of TDB - TT: either `itrf_position_m`, or
@@ -205,6 +215,16 @@ pub struct ConvertBatchRequest {
     /// 1959-12-30 to 2101-01-02 TT; 422 `outside_tdb_model_span` elsewhere).
     #[schema(value_type = Option<TdbModelName>)]
     pub tdb_model: Option<String>,
+    /// The broadcast week counter the epochs were read from, when `format` is gnss_week and the
+    /// weeks are truncated (as broadcast): gps_lnav (10 bits), gps_cnav (13), galileo (12),
+    /// beidou (13). Each full week is the one nearest to `week_near`; each conversion's
+    /// `warnings` say which rollover was chosen.
+    #[schema(value_type = Option<WeekCounterName>, example = "gps_lnav")]
+    pub week_counter: Option<String>,
+    /// The date (`YYYY-MM-DD`, 1980 or later) near which broadcast weeks are resolved (default:
+    /// today on the server's clock); only with `week_counter`.
+    #[schema(example = "2026-01-01")]
+    pub week_near: Option<String>,
 }
 
 /// Query of `GET /v1/time/now`.
@@ -219,4 +239,21 @@ pub struct NowQuery {
     /// The TDB - TT model for TDB and TCB: `series` (default) or `ephemeris` (JPL DE440).
     #[param(value_type = Option<TdbModelName>, example = "ephemeris")]
     pub tdb_model: Option<String>,
+}
+
+/// Schema of a week counter name.
+pub struct WeekCounterName;
+
+impl utoipa::PartialSchema for WeekCounterName {
+    fn schema() -> utoipa::openapi::RefOr<utoipa::openapi::Schema> {
+        crate::api::names::vocabulary_schema::<crate::physics::time::formats::WeekCounter>(
+            "The broadcast week counter a `gnss_week` instant was read from: `gps_lnav` (GPS/QZSS legacy message, 10 bits, IS-GPS-200), `gps_cnav` (GPS/QZSS CNAV, 13 bits), `galileo` (12 bits, Galileo OS SIS ICD), `beidou` (13 bits, BeiDou OS SIS ICD).",
+        )
+    }
+}
+
+impl utoipa::ToSchema for WeekCounterName {
+    fn name() -> std::borrow::Cow<'static, str> {
+        std::borrow::Cow::Borrowed("WeekCounterName")
+    }
 }

@@ -7,6 +7,7 @@
 //! divided by that day's length (86 401 s on a leap-second day). `j2000_s` and `unix_s` of UTC
 //! count 86 400 s per day (a leap second cannot be written in them; use `iso`).
 
+mod broadcast_week;
 mod gnss_week;
 mod iso;
 mod write;
@@ -15,6 +16,7 @@ mod write_tests;
 
 use std::str::FromStr;
 
+pub use broadcast_week::{resolve_broadcast_week, ResolvedWeek, WeekCounter};
 pub use gnss_week::{gnss_week_origin_mjd, write_gnss_week, SECONDS_PER_WEEK};
 pub use iso::{parse_iso, write_iso, IsoReading};
 pub use write::InstantDigits;
