@@ -3,7 +3,8 @@
 //!
 //! A clock value is the clock's reading minus the file's system time, in seconds, at an epoch
 //! of that system time. Values marked bad or absent (SP3: 999999.999999 us or more, or an empty
-//! column) are left out and counted.
+//! column) are left out and counted; an SP3 clock column that cannot be read is left out with a
+//! warning naming its line.
 
 pub mod pair;
 #[cfg(test)]

@@ -129,4 +129,16 @@ fn sp3_clock_column_with_bad_markers() {
     assert_eq!(clocks.absent_values, 1);
     // G02's positions are all absent: the clock is kept, the orbit is not.
     assert_eq!(orbits.objects.len(), 1);
+    // An unreadable clock column is left out with a warning naming its line; the orbit stays.
+    let text = sp3_with_clocks().replacen("    13.500000", "    13.5x0000", 1);
+    let (orbits, clocks) =
+        read_sp3_with_clocks(&text, &ConversionContext::geocentric(LeapTable::builtin()))
+            .unwrap_or_else(|e| panic!("{e}"));
+    assert_eq!(orbits.objects[0].states.len(), 2);
+    assert_eq!(clocks.series[0].values.len(), 1);
+    assert!(
+        clocks.warnings[0].starts_with("line 9:"),
+        "{:?}",
+        clocks.warnings
+    );
 }

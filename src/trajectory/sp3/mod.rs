@@ -12,7 +12,8 @@
 //! The clock column (columns 47-60 of a `P` line, microseconds) is read by
 //! [`read_sp3_with_clocks`]: a value of 999999.999999 or more in magnitude, or an empty column,
 //! marks a bad or absent clock (SP3-c/d) and is left out (and counted); a clock is kept even
-//! when the position on its line is absent.
+//! when the position on its line is absent; a column that cannot be read is left out with a
+//! warning naming the line.
 //!
 //! Time systems: GPS, GAL, BDT, QZS, TAI, UTC as their scales; GLO (GLONASS time,
 //! UTC(SU) + 3 h) is read as UTC three hours earlier. A GLO epoch with second 60 is refused,
@@ -95,7 +96,7 @@ pub fn read_sp3_with_clocks(
             b'*' => epoch = Some(read_epoch(line, number, &header, context)?),
             b'P' => {
                 let at = epoch.ok_or_else(|| no_epoch(number))?;
-                read_clock(line, number, at, &mut clocks)?;
+                read_clock(line, number, at, &mut clocks);
                 read_position(line, number, at, &header, &mut tracks, &mut by_id)?;
             }
             b'V' => {
@@ -290,30 +291,31 @@ fn read_position(
 /// Magnitude from which a clock is read as bad or absent (999999.999999 us).
 const BAD_CLOCK_US: f64 = 999_999.0;
 
-/// Reads the clock column (columns 47-60, microseconds) of a `P` line.
-fn read_clock(
-    line: &str,
-    number: usize,
-    epoch: Instant,
-    clocks: &mut ClockCollector,
-) -> Result<(), TrajectoryError> {
-    let field = line
-        .get(46..60.min(line.len()))
-        .map(str::trim)
-        .unwrap_or("");
-    if field.is_empty() {
-        clocks.absent();
-        return Ok(());
-    }
-    let us = parse_number(field, "the clock in columns 47-60 (microseconds)", number).map_err(
-        |mut e| {
-            e.code = "sp3_bad_column";
-            e
-        },
-    )?;
+/// Reads the clock column (columns 47-60, microseconds) of a `P` line. A column that cannot be
+/// read is left out with a warning naming the line (the orbit of the line is still read, so
+/// that reading orbits alone, as [`read_sp3`] does, never fails on a clock).
+fn read_clock(line: &str, number: usize, epoch: Instant, clocks: &mut ClockCollector) {
+    let field = line.get(46..60.min(line.len())).map(str::trim);
+    let Some(field) = field.filter(|f| !f.is_empty()) else {
+        if line.len() > 46 && field.is_none() {
+            clocks.warn(format!(
+                "line {number}: the clock in columns 47-60 cannot be read; left out"
+            ));
+        } else {
+            clocks.absent();
+        }
+        return;
+    };
+    let us = match parse_number(field, "the clock in columns 47-60 (microseconds)", number) {
+        Ok(us) => us,
+        Err(error) => {
+            clocks.warn(format!("line {number}: {}; left out", error.message));
+            return;
+        }
+    };
     if us.abs() >= BAD_CLOCK_US {
         clocks.absent();
-        return Ok(());
+        return;
     }
     let value = ClockValue {
         epoch,
@@ -321,7 +323,6 @@ fn read_clock(
         line: number,
     };
     clocks.push(&satellite_id(line), false, value);
-    Ok(())
 }
 
 fn read_velocity(
