@@ -408,3 +408,40 @@ async fn a_gcrs_state_with_j2_is_taken_about_the_cip_at_its_epoch() {
     );
     assert!(expected > 1e-19, "{expected:e}");
 }
+
+#[tokio::test]
+async fn orbit_with_j2_answers_its_j2_terms() {
+    let server = TestServer::start().await;
+    let point_mass = one(
+        &server,
+        json!({"orbit": {"semi_major_axis_m": NAV_A_M, "eccentricity": 0.0, "inclination_deg": 20.0}}),
+    )
+    .await;
+    let with_j2 = one(
+        &server,
+        json!({"orbit": {"semi_major_axis_m": NAV_A_M, "eccentricity": 0.0, "inclination_deg": 20.0,
+            "argument_of_latitude_deg": 45.0}, "gravity_model": "j2"}),
+    )
+    .await;
+    assert_eq!(with_j2["gravity_model"], "j2");
+    let j2 = &with_j2["j2"];
+    // Kouba (2004) GPS Solutions 8:170-180: (3/2) J2 (a_E^2/c^2) sqrt(GM/a^3) sin^2(i),
+    // 107.2 ps times sin^2(20 deg) = 12.5 ps; period half the orbit, 5.98 h.
+    let amplitude_s = j2["periodic_amplitude_s"].as_f64().unwrap();
+    assert!(
+        (amplitude_s - 12.54e-12).abs() < 0.05e-12,
+        "{amplitude_s:e}"
+    );
+    assert!((j2["periodic_period_s"].as_f64().unwrap() / 3600.0 - 5.98).abs() < 0.01);
+    assert_eq!(j2["periodic_value_s"].as_f64().unwrap(), -amplitude_s);
+    // The mean change -4<U_J2>/c^2 (derivation in physics::clock_data) is the difference of
+    // the two totals; about -1.7e-14 at i = 20 deg.
+    let change = j2["mean_rate_change"].as_f64().unwrap();
+    let difference = with_j2["fractional"]["total"].as_f64().unwrap()
+        - point_mass["fractional"]["total"].as_f64().unwrap();
+    assert!(
+        (difference - change).abs() < 1e-20,
+        "{difference:e} {change:e}"
+    );
+    assert!((change + 1.72e-14).abs() < 0.02e-14, "{change:e}");
+}

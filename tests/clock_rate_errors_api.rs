@@ -99,8 +99,8 @@ fn bad_items() -> Vec<(Value, &'static str, &'static str)> {
         ),
         (
             json!({"orbit": {"semi_major_axis_m": NAV_A_M, "eccentricity": 0.0}, "gravity_model": "j2"}),
-            "unsupported_gravity_model",
-            "items[1].gravity_model",
+            "input_required",
+            "items[1].orbit.inclination_deg",
         ),
         // Latitude outside [-90, 90] (geodetic and selenographic latitudes).
         (

@@ -183,7 +183,7 @@ fn every_operation_documents_its_answers() {
             }
         }
     }
-    // rate, compare, stability, proper-time, signal path, two-way, time convert and earth
-    // orientation (the POST batches).
-    assert_eq!(with_body, 8, "operations with a request body");
+    // rate, compare, stability, proper-time, clock corrections, signal path, two-way, time
+    // convert and earth orientation (the POST batches).
+    assert_eq!(with_body, 9, "operations with a request body");
 }

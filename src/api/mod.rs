@@ -6,6 +6,7 @@
 //! and Earth orientation tables and the OpenAPI document come in as values ([`AppState`]); see tests/layers.rs.
 
 pub mod clock;
+pub mod clock_data;
 pub mod docs;
 pub mod earth;
 pub mod error;
@@ -33,6 +34,7 @@ pub fn router(state: AppState) -> Router {
     Router::new()
         .merge(time::router())
         .merge(clock::router())
+        .merge(clock_data::router())
         .merge(earth::router())
         .merge(proper_time::router())
         .merge(signal::router())

@@ -25,6 +25,7 @@ use utoipa::{Modify, OpenApi};
         crate::api::clock::rate::rate,
         crate::api::clock::compare::compare,
         crate::api::stability::handler::stability,
+        crate::api::clock_data::corrections,
         crate::api::proper_time::proper_time,
         crate::api::signal::path::signal_path,
         crate::api::signal::two_way::two_way,

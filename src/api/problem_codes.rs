@@ -199,7 +199,11 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     ),
     (
         RateErrorKind::UnsupportedGravityModel.as_str(),
-        "The gravity model does not apply to this subject (e.g. `j2` for a Keplerian orbit); use `point_mass` or give a state vector.",
+        "The gravity model does not apply to this subject (e.g. `grs80` for a Keplerian orbit); use `point_mass` or `j2`, or give a state vector.",
+    ),
+    (
+        RateErrorKind::InputRequired.as_str(),
+        "The chosen model needs a value the input lacks (an orbit with `gravity_model: j2` needs `inclination_deg`).",
     ),
     (
         "unknown_frame",
@@ -479,6 +483,46 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
         StabilityErrorKind::InvalidConfidence.as_str(),
         "`confidence` must lie strictly between 0 and 1 (0.683 for 1 sigma, 0.95 ...).",
     ),
+    (
+        "rinex_clock_bad_header",
+        "The RINEX clock text does not start with its `RINEX VERSION / TYPE` line (file type C in column 21, the version in columns 1-9); `line` says where.",
+    ),
+    (
+        "rinex_clock_unsupported_version",
+        "The RINEX clock version is not 2.xx or 3.xx (3.04 is the reference).",
+    ),
+    (
+        "rinex_clock_missing_end_of_header",
+        "The RINEX clock header has no `END OF HEADER` line (label in columns 61-80).",
+    ),
+    (
+        "rinex_clock_bad_record",
+        "An AS or AR record of the RINEX clock text cannot be read (fields, epoch, number of values, clock bias); `line` says where.",
+    ),
+    (
+        "rinex_clock_unsupported_time_system",
+        "The RINEX clock `TIME SYSTEM ID` is not one the service reads (GPS, GAL, BDT, QZS, TAI, UTC).",
+    ),
+    (
+        "unknown_convention",
+        "The clock convention is not `igs` (the conventional periodic term left out of the values) or `raw` (both periodic terms in them).",
+    ),
+    (
+        "orbit_required",
+        "RINEX clock values need the orbit: give the SP3 text in `sp3`.",
+    ),
+    (
+        "input_ambiguous",
+        "Both files (`sp3`, `rinex_clock`) and JSON `series` were given: give one of them.",
+    ),
+    (
+        "input_missing",
+        "Neither `sp3` nor `series` was given.",
+    ),
+    (
+        "nothing_to_correct",
+        "No satellite has two or more clock values with an orbit; the detail lists why for each.",
+    ),
 ];
 
 /// The meaning of `code`, when it is in [`PROBLEM_CODES`].
@@ -578,6 +622,7 @@ mod tests {
         check::<crate::physics::signal::TransmitterMotion>("unknown_motion");
         check::<crate::physics::solar_system::Body>("unknown_body");
         check::<crate::physics::time::tdb_model::TdbModel>("unknown_tdb_model");
+        check::<crate::physics::clock_data::series::ClockConvention>("unknown_convention");
     }
 
     #[test]
@@ -695,6 +740,7 @@ mod tests {
                         "tau0_s",
                         "week_counter",
                         "week_near",
+                        "rinex_clock",
                     ];
                     if is_code_like
                         && !known_field.contains(&word.as_str())

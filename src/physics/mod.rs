@@ -3,6 +3,7 @@
 //! Nothing in here knows about HTTP, JSON or async. Each formula is a small function whose doc
 //! comment names its publication and equation.
 
+pub mod clock_data;
 pub mod constants;
 pub mod earth;
 pub mod geodesy;

@@ -29,6 +29,9 @@ vocabulary! {
         AngleOutOfRange = "angle_out_of_range",
         /// A gravity model the computation does not offer.
         UnsupportedGravityModel = "unsupported_gravity_model",
+        /// A value that the chosen model needs and the input lacks (an orbit's inclination for
+        /// J2).
+        InputRequired = "input_required",
         /// A nominal frequency that is zero or negative.
         InvalidFrequency = "invalid_frequency",
         /// A fractional rate too large for the frequency answer (|y| above 1e-3).

@@ -9,6 +9,8 @@
 //! [`track_proper_time`] connects a track to the proper-time integrator of
 //! [`crate::physics::proper_time`].
 
+pub mod clock;
+pub mod clock_values;
 #[cfg(test)]
 mod demo_tests;
 #[cfg(test)]

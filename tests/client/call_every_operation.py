@@ -301,6 +301,34 @@ def stability(api, m, document):
     expect_problem(api.call("stability", body=gap), 422, "gap_in_series", field="values[1]")
 
 
+@operation("corrections")
+def corrections(api, m, document):
+    # An invented clock on an equatorial circular orbit (a = 26 561.75 km) in the GCRS: the
+    # conventional term -2 r.v/c^2 (IS-GPS-200 20.3.3.3.3.1) and the J2 term (Kouba 2004,
+    # sin^2 i = 0) vanish, so the fitted rate is the clock's own 1e-12.
+    a_m = 26_561_750.0
+    n = math.sqrt(3.986004418e14 / a_m**3)
+    samples = []
+    for k in range(6):
+        t = 600.0 * k
+        u = n * t
+        samples.append(
+            {
+                "epoch": f"2026-05-20T00:{10 * k:02d}:00",
+                "clock_s": 1e-4 + 1e-12 * t,
+                "position_m": [a_m * math.cos(u), a_m * math.sin(u), 0.0],
+                "velocity_m_s": [-a_m * n * math.sin(u), a_m * n * math.cos(u), 0.0],
+            }
+        )
+    body = m.CorrectionsRequest.from_dict(
+        {"series": [{"id": "LYR-01", "frame": "GCRS", "samples": samples}], "convention": "raw"}
+    )
+    answer = expect(api.call("corrections", body=body), 200)
+    (satellite,) = answer.satellites
+    near(satellite.rate, 1e-12, 1e-19, "rate of the invented clock")
+    near(answer.factory_setting_rate, 4.4647e-10, 1e-14, "IS-GPS-200 3.3.1.1 offset")
+
+
 @operation("proper_time")
 def proper_time(api, m, document):
     radius_m = 6_878_137.0

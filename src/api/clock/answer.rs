@@ -46,6 +46,25 @@ pub struct PeriodicAnswer {
     pub value_at_state_s: Option<f64>,
 }
 
+/// The J2 terms of an orbit (`gravity_model: j2`); `fractional` and `us_per_day` include the
+/// mean change.
+#[derive(Debug, Clone, Copy, Serialize, ToSchema)]
+pub struct OrbitJ2Answer {
+    /// Change of the mean fractional rate from J2, -4<U_J2>/c^2 (dimensionless), split equally
+    /// into sr and gr; a is the energy semi-major axis.
+    pub mean_rate_change: f64,
+    /// The same in microseconds per day.
+    pub mean_rate_change_us_per_day: f64,
+    /// Amplitude (3/2) J2 (a_E^2/c^2) sqrt(GM/a^3) sin^2(i) of the J2 periodic term, s
+    /// (Kouba 2004).
+    pub periodic_amplitude_s: f64,
+    /// Its period, s (half the orbital period).
+    pub periodic_period_s: f64,
+    /// Its value -amplitude sin(2u) at the given argument of latitude, s.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub periodic_value_s: Option<f64>,
+}
+
 /// The rate of one clock relative to the reference scale.
 #[derive(Debug, Clone, Serialize, ToSchema)]
 #[schema(example = json!({
@@ -76,6 +95,9 @@ pub struct RateAnswer {
     /// Present for orbits and states.
     #[serde(skip_serializing_if = "Option::is_none")]
     pub periodic: Option<PeriodicAnswer>,
+    /// The J2 terms of an orbit given with `gravity_model: j2`.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub j2: Option<OrbitJ2Answer>,
     /// The orbit's inclination as given, degrees (echoed; it does not change the first-order
     /// rate).
     #[serde(skip_serializing_if = "Option::is_none")]

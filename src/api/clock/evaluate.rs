@@ -3,9 +3,11 @@
 
 use super::answer::{FrequencyAnswer, PeriodicAnswer, RateAnswer, RateSplit};
 use super::notes;
+use super::orbit_item::{orbit_answer, Origins};
 use super::types::{GroundSiteInput, LunarSiteInput, OrbitInput, RateItem, StateInput};
 use crate::api::error::ApiError;
 use crate::api::names::{parse_named, parse_scale};
+use crate::physics::clock_data::orbit_j2::ORBIT_J2_NOTES;
 use crate::physics::earth::eop::EopTable;
 use crate::physics::earth::orientation::fast::celestial_pole_fast;
 use crate::physics::earth::orientation::span::{OrientationSpan, NODE_STEP_S};
@@ -13,11 +15,9 @@ use crate::physics::earth::orientation::JulianDate;
 use crate::physics::rate::state::state_rate_about_axis;
 use crate::physics::rate::state::{ITRF_EPOCH_NOTE, ITRF_WITHOUT_EPOCH_NOTE};
 use crate::physics::rate::{
-    frequency_offset, ground_site_rate, lunar_site_rate, orbit_rate, Anomaly, Frame, GravityModel,
-    GroundSite, HeightReference, KeplerianOrbit, LunarSite, RateError, RateParts, RateReference,
-    StateVector,
+    frequency_offset, ground_site_rate, lunar_site_rate, Frame, GravityModel, GroundSite,
+    HeightReference, LunarSite, RateParts, RateReference, StateVector,
 };
-use crate::physics::readable::readable;
 use crate::physics::time::convert::{convert, ConversionContext};
 use crate::physics::time::formats::{parse_instant, InstantFormat};
 use crate::physics::time::instant::Instant;
@@ -139,26 +139,6 @@ fn subject_of<'a>(item: &'a RateItem, path: &str) -> Result<Subject<'a>, ApiErro
 }
 
 /// Where the settings of one item came from, to name them in errors.
-struct Origins<'a> {
-    path: &'a str,
-    subject: &'static str,
-    gravity_field: String,
-    nominal_field: String,
-}
-
-impl Origins<'_> {
-    fn error(&self, error: RateError) -> ApiError {
-        let field = match error.field {
-            "gravity_model" => self.gravity_field.clone(),
-            "nominal_hz" => self.nominal_field.clone(),
-            "fractional_rate" => format!("{}.{}", self.path, self.subject),
-            other => format!("{}.{}.{other}", self.path, self.subject),
-        };
-        ApiError::unprocessable(error.code(), format!("{field}: {}", error.message))
-            .with_field(field)
-    }
-}
-
 fn setting_field(path: &str, name: &str, given_on_item: bool) -> String {
     if given_on_item {
         format!("{path}.{name}")
@@ -197,6 +177,7 @@ pub fn evaluate_item(
     };
     let requested_model = item_model.or(defaults.gravity_model);
     let mut notes: Vec<String> = Vec::new();
+    let mut j2_answer = None;
     let (parts, model_label, periodic, inclination_deg) = match subject {
         Subject::State(state) => {
             let model = requested_model.unwrap_or(GravityModel::PointMass);
@@ -219,9 +200,13 @@ pub fn evaluate_item(
                 }
                 _ => GravityModel::PointMass,
             };
-            let (parts, periodic, inclination) =
+            let (parts, periodic, inclination, j2) =
                 orbit_answer(orbit, reference, model, path, &origins)?;
             notes.extend(notes::orbit());
+            if j2.is_some() {
+                notes.extend(ORBIT_J2_NOTES.iter().map(|n| n.to_string()));
+            }
+            j2_answer = j2;
             (parts, model.as_str(), Some(periodic), inclination)
         }
         Subject::Ground(site) => {
@@ -270,6 +255,7 @@ pub fn evaluate_item(
         },
         frequency,
         periodic,
+        j2: j2_answer,
         inclination_deg,
         model_notes: notes,
     };
@@ -395,55 +381,6 @@ fn state_answer(
             value_at_state_s: Some(rate.periodic_value_s),
         },
         note,
-    ))
-}
-
-fn orbit_answer(
-    orbit: &OrbitInput,
-    reference: RateReference,
-    model: GravityModel,
-    path: &str,
-    origins: &Origins<'_>,
-) -> Result<(RateParts, PeriodicAnswer, Option<f64>), ApiError> {
-    let anomalies = [
-        orbit.true_anomaly_deg.map(Anomaly::TrueDeg),
-        orbit.mean_anomaly_deg.map(Anomaly::MeanDeg),
-        orbit.eccentric_anomaly_deg.map(Anomaly::EccentricDeg),
-    ];
-    let mut given = anomalies.into_iter().flatten();
-    let anomaly = given.next();
-    if given.next().is_some() {
-        return Err(ApiError::unprocessable(
-            "anomaly_ambiguous",
-            "give at most one of true_anomaly_deg, mean_anomaly_deg, eccentric_anomaly_deg",
-        )
-        .with_field(format!("{path}.orbit")));
-    }
-    if let Some(inclination) = orbit.inclination_deg {
-        if !(0.0..=180.0).contains(&inclination) {
-            return Err(ApiError::unprocessable(
-                "angle_out_of_range",
-                format!(
-                    "inclination must lie in [0, 180] degrees, got {inclination}",
-                    inclination = readable(inclination)
-                ),
-            )
-            .with_field(format!("{path}.orbit.inclination_deg")));
-        }
-    }
-    let keplerian = KeplerianOrbit {
-        semi_major_axis_m: orbit.semi_major_axis_m,
-        eccentricity: orbit.eccentricity,
-        anomaly,
-    };
-    let rate = orbit_rate(&keplerian, reference, model).map_err(|e| origins.error(e))?;
-    Ok((
-        rate.mean,
-        PeriodicAnswer {
-            amplitude_s: Some(rate.periodic.amplitude_s),
-            value_at_state_s: rate.periodic.value_s,
-        },
-        orbit.inclination_deg,
     ))
 }
 

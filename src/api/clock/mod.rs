@@ -5,6 +5,7 @@ pub mod answer;
 pub mod compare;
 pub mod evaluate;
 pub mod notes;
+mod orbit_item;
 pub mod rate;
 pub mod types;
 

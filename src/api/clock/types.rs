@@ -55,10 +55,15 @@ pub struct OrbitInput {
     /// Eccentricity e, in [0, 1).
     #[schema(minimum = 0.0, exclusive_maximum = 1.0)]
     pub eccentricity: f64,
-    /// Inclination, degrees in [0, 180]. Accepted and echoed; it does not change the
-    /// first-order rate of a point-mass orbit.
+    /// Inclination to the Earth's equator, degrees in [0, 180]. Echoed; it does not change the
+    /// first-order rate of a point-mass orbit; required with `gravity_model: j2` (422
+    /// `input_required`).
     #[schema(minimum = 0.0, maximum = 180.0)]
     pub inclination_deg: Option<f64>,
+    /// Argument of latitude u (argument of perigee + true anomaly), degrees (|value| <= 1e6):
+    /// with `gravity_model: j2`, the J2 periodic term's value there.
+    #[schema(minimum = -1.0e6, maximum = 1.0e6)]
+    pub argument_of_latitude_deg: Option<f64>,
     /// True anomaly nu, degrees (|value| <= 1e6).
     #[schema(minimum = -1.0e6, maximum = 1.0e6)]
     pub true_anomaly_deg: Option<f64>,
@@ -129,7 +134,8 @@ pub struct RateItem {
     #[schema(value_type = Option<ReferenceName>)]
     pub reference: Option<String>,
     /// Gravity model for this clock (`point_mass`, `j2` or `grs80`); overrides the request's.
-    /// Orbits offer only `point_mass`.
+    /// Orbits offer `point_mass` and `j2` (with `inclination_deg`; a the energy semi-major
+    /// axis).
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
     /// Nominal oscillator frequency for this clock, Hz, in (0, 9e15]; overrides the request's.

@@ -3,6 +3,7 @@
 
 mod answer;
 mod body;
+pub use body::ephemeris_problem;
 mod options;
 pub mod plot;
 pub mod types;

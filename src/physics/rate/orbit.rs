@@ -63,7 +63,7 @@ pub const ORBIT_NOTES: [&str; 3] = [
 ];
 /// The model note of an orbit when J2 (or the GRS80 field) was asked for at a level that also
 /// covers other subjects: [`orbit_rate`] has no J2 mean rate.
-pub const ORBIT_J2_NOT_APPLIED_NOTE: &str = "the request-level gravity_model j2 does not apply to orbit mean rates (the J2 average depends on the definition of a and e at the level of the J2 effect); point_mass used: give a state vector for J2";
+pub const ORBIT_J2_NOT_APPLIED_NOTE: &str = "the request-level gravity_model j2 does not apply to orbit mean rates (the J2 average needs the inclination and a definition of a at the level of the J2 effect); point_mass used: give gravity_model j2 and inclination_deg on the orbit's item, or a state vector";
 
 /// The same note for a request-level `grs80`.
 pub const ORBIT_GRS80_NOT_APPLIED_NOTE: &str = "the request-level gravity_model grs80 does not apply to orbit mean rates (the average of its zonal terms depends on the definition of a and e at their own level); point_mass used: give a state vector for grs80";
@@ -72,9 +72,9 @@ pub const ORBIT_GRS80_NOT_APPLIED_NOTE: &str = "the request-level gravity_model 
 /// table 1.1, TCG-compatible).
 ///
 /// Inputs: `orbit`, `reference` (TT or TCG), `model`: only [`GravityModel::PointMass`]. The
-/// J2 orbit average depends on how a and e are defined (osculating or mean elements) at the
-/// level of the J2 effect itself, so it is not offered here: J2 is applied to state vectors
-/// ([`super::state_rate`]) and ground sites only; `J2` returns an error naming `gravity_model`.
+/// J2 orbit average depends on the inclination and on how a is defined at the level of the J2
+/// effect itself: it is `physics::clock_data::orbit_j2::orbit_rate_j2` (a the energy semi-major axis);
+/// another model here returns an error naming `gravity_model`.
 ///
 /// Errors: a not finite or not positive, periapsis a(1 - e) deeper than 11 km below the
 /// GRS80 polar radius, apoapsis beyond 1.5e9 m, e outside [0, 1), anomaly not finite.

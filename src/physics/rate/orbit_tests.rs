@@ -241,7 +241,7 @@ fn bad_orbits_name_the_field() {
         let err = orbit_rate(&orbit, RateReference::Tt, GravityModel::PointMass).unwrap_err();
         assert_eq!(err.field, field, "{err}");
     }
-    let err = orbit_rate(&good, RateReference::Tt, GravityModel::J2).unwrap_err();
+    let err = orbit_rate(&good, RateReference::Tt, GravityModel::Grs80).unwrap_err();
     assert_eq!(err.field, "gravity_model");
     assert_eq!(err.code(), "unsupported_gravity_model");
     // Stable codes (the HTTP layer answers them).

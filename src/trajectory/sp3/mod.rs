@@ -9,6 +9,12 @@
 //! satellite are dropped (interpolation then differentiates the positions). Satellites with no
 //! valid sample are left out. `EP`/`EV` correlation lines are skipped.
 //!
+//! The clock column (columns 47-60 of a `P` line, microseconds) is read by
+//! [`read_sp3_with_clocks`]: a value of 999999.999999 or more in magnitude, or an empty column,
+//! marks a bad or absent clock (SP3-c/d) and is left out (and counted); a clock is kept even
+//! when the position on its line is absent; a column that cannot be read is left out with a
+//! warning naming the line.
+//!
 //! Time systems: GPS, GAL, BDT, QZS, TAI, UTC as their scales; GLO (GLONASS time,
 //! UTC(SU) + 3 h) is read as UTC three hours earlier. A GLO epoch with second 60 is refused,
 //! because the three-hour shift would move the leap second off 23:59:60.
@@ -17,6 +23,7 @@ pub mod header;
 
 use std::collections::HashMap;
 
+use super::clock_values::{ClockCollector, ClockData, ClockValue};
 use super::error::TrajectoryError;
 use super::text::parse_number;
 use super::{Frame, ObjectTrack, TrajectorySet, TrajectoryState};
@@ -35,6 +42,15 @@ pub fn read_sp3(
     text: &str,
     context: &ConversionContext<'_>,
 ) -> Result<TrajectorySet, TrajectoryError> {
+    read_sp3_with_clocks(text, context).map(|(set, _)| set)
+}
+
+/// Reads an SP3-c or SP3-d file with its satellite clock values.
+pub fn read_sp3_with_clocks(
+    text: &str,
+    context: &ConversionContext<'_>,
+) -> Result<(TrajectorySet, ClockData), TrajectoryError> {
+    let mut clocks = ClockCollector::default();
     let text = text.strip_prefix('\u{feff}').unwrap_or(text);
     let mut lines = text
         .split('\n')
@@ -80,6 +96,7 @@ pub fn read_sp3(
             b'*' => epoch = Some(read_epoch(line, number, &header, context)?),
             b'P' => {
                 let at = epoch.ok_or_else(|| no_epoch(number))?;
+                read_clock(line, number, at, &mut clocks);
                 read_position(line, number, at, &header, &mut tracks, &mut by_id)?;
             }
             b'V' => {
@@ -121,7 +138,7 @@ pub fn read_sp3(
         }
     }
     tracks.retain(|t| !t.states.is_empty());
-    Ok(TrajectorySet { objects: tracks })
+    Ok((TrajectorySet { objects: tracks }, clocks.finish()))
 }
 
 fn new_track(id: &str, header: &Sp3Header) -> ObjectTrack {
@@ -269,6 +286,43 @@ fn read_position(
         });
     }
     Ok(())
+}
+
+/// Magnitude from which a clock is read as bad or absent (999999.999999 us).
+const BAD_CLOCK_US: f64 = 999_999.0;
+
+/// Reads the clock column (columns 47-60, microseconds) of a `P` line. A column that cannot be
+/// read is left out with a warning naming the line (the orbit of the line is still read, so
+/// that reading orbits alone, as [`read_sp3`] does, never fails on a clock).
+fn read_clock(line: &str, number: usize, epoch: Instant, clocks: &mut ClockCollector) {
+    let field = line.get(46..60.min(line.len())).map(str::trim);
+    let Some(field) = field.filter(|f| !f.is_empty()) else {
+        if line.len() > 46 && field.is_none() {
+            clocks.warn(format!(
+                "line {number}: the clock in columns 47-60 cannot be read; left out"
+            ));
+        } else {
+            clocks.absent();
+        }
+        return;
+    };
+    let us = match parse_number(field, "the clock in columns 47-60 (microseconds)", number) {
+        Ok(us) => us,
+        Err(error) => {
+            clocks.warn(format!("line {number}: {}; left out", error.message));
+            return;
+        }
+    };
+    if us.abs() >= BAD_CLOCK_US {
+        clocks.absent();
+        return;
+    }
+    let value = ClockValue {
+        epoch,
+        clock_s: us * 1e-6,
+        line: number,
+    };
+    clocks.push(&satellite_id(line), false, value);
 }
 
 fn read_velocity(
