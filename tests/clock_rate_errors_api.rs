@@ -97,6 +97,12 @@ fn bad_items() -> Vec<(Value, &'static str, &'static str)> {
             "angle_out_of_range",
             "items[1].orbit.inclination_deg",
         ),
+        // Refused with any gravity model, not only where the J2 term reads it.
+        (
+            json!({"orbit": {"semi_major_axis_m": NAV_A_M, "eccentricity": 0.0, "argument_of_latitude_deg": -1000001.0}}),
+            "angle_out_of_range",
+            "items[1].orbit.argument_of_latitude_deg",
+        ),
         (
             json!({"orbit": {"semi_major_axis_m": NAV_A_M, "eccentricity": 0.0}, "gravity_model": "j2"}),
             "input_required",

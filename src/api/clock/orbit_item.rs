@@ -73,6 +73,20 @@ pub(super) fn orbit_answer(
             .with_field(format!("{path}.orbit.inclination_deg")));
         }
     }
+    // Read whatever the model: a value outside the documented range is refused wherever it
+    // appears, not only where the J2 term uses it.
+    if let Some(u) = orbit.argument_of_latitude_deg {
+        if !(-1.0e6..=1.0e6).contains(&u) {
+            return Err(ApiError::unprocessable(
+                "angle_out_of_range",
+                format!(
+                    "the argument of latitude must lie in [-1e6, 1e6] degrees, got {u}",
+                    u = readable(u)
+                ),
+            )
+            .with_field(format!("{path}.orbit.argument_of_latitude_deg")));
+        }
+    }
     let keplerian = KeplerianOrbit {
         semi_major_axis_m: orbit.semi_major_axis_m,
         eccentricity: orbit.eccentricity,

@@ -11,9 +11,11 @@ pub struct ClockStateInput {
     pub epoch: String,
     /// Clock reading minus system time, s.
     pub clock_s: f64,
-    /// Geocentric position, m.
+    /// Geocentric position [x, y, z], m.
+    #[schema(min_items = 3, max_items = 3)]
     pub position_m: [f64; 3],
-    /// Velocity, m/s (relative to the frame's axes: Earth-fixed for ITRF).
+    /// Velocity [vx, vy, vz], m/s (relative to the frame's axes: Earth-fixed for ITRF).
+    #[schema(min_items = 3, max_items = 3)]
     pub velocity_m_s: [f64; 3],
 }
 
