@@ -24,6 +24,8 @@ fn bench(c: &mut Criterion) {
         Settings::default(),
         LeapTable::builtin().clone(),
         EopTable::builtin().clone(),
+        eigenzeit::physics::solar_system::Ephemeris::embedded()
+            .unwrap_or_else(|e| panic!("ephemeris: {e}")),
         eigenzeit::ops::openapi::document_json(),
     );
     state.set_ready(true);

@@ -28,6 +28,7 @@ SETTINGS = {
     "EIGENZEIT_MAX_EPHEMERIS_GAP_S": "--max-ephemeris-gap-s",
     "EIGENZEIT_CORS_ORIGINS": "--cors-origins",
     "EIGENZEIT_LEAP_SECONDS_FILE": "--leap-seconds-file",
+    "EIGENZEIT_EPHEMERIS_FILE": "--ephemeris-file",
     "EIGENZEIT_LEAP_SECONDS_URL": "--leap-seconds-url",
     "EIGENZEIT_LEAP_SECONDS_REFRESH_S": "--leap-seconds-refresh-s",
 }

@@ -16,6 +16,7 @@ pub mod openapi;
 pub mod problem_codes;
 pub mod proper_time;
 pub mod signal;
+pub mod solar_system;
 pub mod state;
 pub mod time;
 
@@ -33,6 +34,7 @@ pub fn router(state: AppState) -> Router {
         .merge(earth::router())
         .merge(proper_time::router())
         .merge(signal::router())
+        .merge(solar_system::router())
         .merge(docs::router())
         .with_state(state)
 }

@@ -30,6 +30,7 @@ use utoipa::{Modify, OpenApi};
         crate::api::earth::eop::eop,
         crate::api::earth::orientation::orientation_get,
         crate::api::earth::orientation::orientation_post,
+        crate::api::solar_system::state::body_state,
     ),
     components(schemas(
         crate::api::error::Problem,
@@ -41,13 +42,15 @@ use utoipa::{Modify, OpenApi};
         crate::api::names::InstantString,
         crate::api::names::ThreeNumbersText,
         crate::api::earth::types::UtcIsoInstant,
+        crate::api::solar_system::types::BodyName,
     )),
     modifiers(&CrossFieldRules),
     tags(
         (name = "time", description = "Time scales: conversions, the scales, the leap-second table"),
         (name = "clock", description = "Clock rates against TT or TCG: state vectors, orbits, ground and lunar sites; comparisons between clocks"),
         (name = "signal", description = "Signal paths: light time with Sagnac, Shapiro and clock terms; two-way time-transfer Sagnac correction"),
-        (name = "earth", description = "Earth orientation: the IERS EOP table in force (UT1 - UTC, polar motion, celestial pole offsets, length of day) and its values at an instant; the Earth rotation angle, sidereal times, CIP and the GCRS <-> ITRS rotation (IAU 2006/2000A) at an instant")
+        (name = "earth", description = "Earth orientation: the IERS EOP table in force (UT1 - UTC, polar motion, celestial pole offsets, length of day) and its values at an instant; the Earth rotation angle, sidereal times, CIP and the GCRS <-> ITRS rotation (IAU 2006/2000A) at an instant"),
+        (name = "solar-system", description = "The solar system: positions and velocities of the Sun, the Moon, the Earth and the planets' barycentres (ICRF axes, TDB argument) from the planetary ephemeris in force (built in: JPL DE440, 1959-2101)")
     )
 )]
 pub struct ApiDoc;

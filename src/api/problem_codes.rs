@@ -16,6 +16,7 @@ use crate::physics::earth::eop::EopLookupErrorKind;
 use crate::physics::proper_time::ProperTimeErrorKind;
 use crate::physics::rate::RateErrorKind;
 use crate::physics::signal::SignalErrorKind;
+use crate::physics::solar_system::EphemerisErrorKind;
 use crate::physics::time::error::TimeErrorKind;
 
 /// (code, meaning) for every problem code the API answers; a code the physics library answers
@@ -152,6 +153,19 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     (
         "unknown_tdb_model",
         "The TDB - TT model (`tdb_model`) is not one of `series`, `ephemeris`.",
+    ),
+    // The solar system (the planetary ephemeris).
+    (
+        EphemerisErrorKind::UnknownBody.as_str(),
+        "The body or centre is not one of `ssb`, `sun`, `mercury_barycenter`, `venus_barycenter`, `emb`, `earth`, `moon`, `mars_barycenter`, `jupiter_barycenter`, `saturn_barycenter`, `uranus_barycenter`, `neptune_barycenter`, `pluto_barycenter`; `field` says which.",
+    ),
+    (
+        EphemerisErrorKind::OutsideSpan.as_str(),
+        "The epoch (read in TDB) is outside the span of the planetary ephemeris in force; `detail` names the span (the built-in DE440 excerpt covers 1959-01-01 .. 2102-01-01 TDB; the operators can load a longer kernel with `--ephemeris-file`).",
+    ),
+    (
+        EphemerisErrorKind::NotFinite.as_str(),
+        "An ephemeris epoch given as a number of seconds is not finite.",
     ),
     // Clock rates, comparisons and signal paths.
     (
@@ -486,7 +500,8 @@ mod tests {
             .chain(&RateErrorKind::NAMES)
             .chain(&SignalErrorKind::NAMES)
             .chain(&ProperTimeErrorKind::NAMES)
-            .chain(&EopLookupErrorKind::NAMES);
+            .chain(&EopLookupErrorKind::NAMES)
+            .chain(&EphemerisErrorKind::NAMES);
         for code in codes {
             assert!(
                 meaning(code).is_some(),
@@ -516,6 +531,7 @@ mod tests {
         check::<HeightReference>("unknown_height_reference");
         check::<crate::physics::signal::TransmitterMotion>("unknown_motion");
         check::<crate::physics::time::tdb_model::TdbModel>("unknown_tdb_model");
+        check::<crate::physics::solar_system::Body>("unknown_body");
     }
 
     #[test]

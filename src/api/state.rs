@@ -6,6 +6,7 @@
 use std::sync::{Arc, RwLock};
 
 use crate::physics::earth::eop::EopTable;
+use crate::physics::solar_system::Ephemeris;
 use crate::physics::time::leap_seconds::LeapTable;
 
 /// The default of [`Limits::batch_limit`], and the `maxItems` the OpenAPI document states for
@@ -98,16 +99,19 @@ struct Inner {
     limits: Limits,
     leap_table: LeapTableHandle,
     eop_table: EopTableHandle,
+    ephemeris: Arc<Ephemeris>,
     openapi_json: String,
 }
 
 impl AppState {
-    /// State with the given limits, leap-second and EOP tables and OpenAPI document (served as
-    /// `/openapi.json`: the service's whole document, which this layer does not assemble).
+    /// State with the given limits, leap-second and EOP tables, planetary ephemeris and OpenAPI
+    /// document (served as `/openapi.json`: the service's whole document, which this layer does
+    /// not assemble).
     pub fn new(
         limits: Limits,
         leap_table: LeapTableHandle,
         eop_table: EopTableHandle,
+        ephemeris: Arc<Ephemeris>,
         openapi_json: String,
     ) -> Self {
         Self {
@@ -115,6 +119,7 @@ impl AppState {
                 limits,
                 leap_table,
                 eop_table,
+                ephemeris,
                 openapi_json,
             }),
         }
@@ -134,6 +139,11 @@ impl AppState {
     /// request).
     pub fn eop_table(&self) -> Arc<EopTable> {
         self.inner.eop_table.current()
+    }
+
+    /// The planetary ephemeris in force (the built-in DE440 excerpt or a loaded kernel).
+    pub fn ephemeris(&self) -> Arc<Ephemeris> {
+        Arc::clone(&self.inner.ephemeris)
     }
 
     /// The OpenAPI document as JSON text.

@@ -124,6 +124,10 @@ pub struct Settings {
     /// Interval between polls of the EOP URL, in seconds.
     #[arg(long, env = "EIGENZEIT_EOP_REFRESH_S", default_value_t = 86_400.0)]
     pub eop_refresh_s: f64,
+    /// Planetary ephemeris file to use instead of the built-in DE440 excerpt (1959-2101): a NAIF
+    /// SPK kernel such as JPL's de440.bsp or de441.bsp (type 2 and 3 segments), read at start-up.
+    #[arg(long, env = "EIGENZEIT_EPHEMERIS_FILE")]
+    pub ephemeris_file: Option<PathBuf>,
     /// Longest gap between ephemeris states accepted, in seconds.
     #[arg(long, env = "EIGENZEIT_MAX_EPHEMERIS_GAP_S", default_value_t = DEFAULT_MAX_EPHEMERIS_GAP_S)]
     pub max_ephemeris_gap_s: f64,
@@ -147,6 +151,7 @@ impl Default for Settings {
             eop_file: None,
             eop_url: None,
             eop_refresh_s: 86_400.0,
+            ephemeris_file: None,
             max_ephemeris_gap_s: DEFAULT_MAX_EPHEMERIS_GAP_S,
         }
     }

@@ -8,6 +8,8 @@ use axum::{Json, Router};
 use serde::Serialize;
 use utoipa::ToSchema;
 
+use crate::api::solar_system::state::ephemeris_info;
+use crate::api::solar_system::types::EphemerisInfo;
 use crate::api::state::unix_now_s;
 use crate::api::time::reference::iso_date;
 
@@ -32,6 +34,8 @@ pub struct Readiness {
     pub leap_seconds: LeapReadiness,
     /// The Earth orientation (EOP) table in force and its refresh.
     pub eop: EopReadiness,
+    /// The planetary ephemeris in force and its span.
+    pub ephemeris: EphemerisInfo,
 }
 
 /// The leap-second part of the readiness answer.
@@ -133,6 +137,7 @@ pub async fn readyz(State(state): State<ServiceState>) -> Response {
         status: if ready { "ready" } else { "draining" }.to_string(),
         leap_seconds: leap_readiness(&state),
         eop: eop_readiness(&state),
+        ephemeris: ephemeris_info(&state.api().ephemeris()),
     };
     let status = if ready {
         StatusCode::OK
@@ -157,6 +162,10 @@ pub async fn metrics(State(state): State<ServiceState>) -> Response {
         eop_end_of_predictions_mjd: eop.end_of_predictions_mjd(),
         eop_table_end_days: eop.days_to_end(now_s),
         ready: state.is_ready(),
+        ephemeris: {
+            let info = ephemeris_info(&state.api().ephemeris());
+            [info.name, info.first_tdb, info.last_tdb]
+        },
     };
     (
         [(header::CONTENT_TYPE, super::metrics::CONTENT_TYPE)],

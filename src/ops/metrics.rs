@@ -97,6 +97,8 @@ pub struct Gauges {
     pub eop_table_end_days: Option<f64>,
     /// Whether the service is ready.
     pub ready: bool,
+    /// The planetary ephemeris in force: its name and span (first, last epoch; TDB, ISO 8601).
+    pub ephemeris: [String; 3],
 }
 
 impl Default for Metrics {
@@ -209,6 +211,12 @@ impl Metrics {
             ConstGauge::new(days),
         );
         register_eop(&mut scrape, gauges);
+        let [name, first, last] = gauges.ephemeris.clone();
+        scrape.register(
+            "eigenzeit_ephemeris",
+            "The planetary ephemeris in force, with its span (TDB)",
+            Info::new([("name", name), ("first_tdb", first), ("last_tdb", last)]),
+        );
         let _ = encode(&mut out, &scrape);
         out
     }

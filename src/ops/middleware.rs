@@ -132,6 +132,7 @@ mod tests {
             Settings::default(),
             LeapTable::builtin().clone(),
             EopTable::builtin().clone(),
+            crate::physics::solar_system::Ephemeris::embedded().expect("built-in ephemeris"),
             String::new(),
         )
     }

@@ -5,6 +5,7 @@
 
 pub mod app;
 pub mod config;
+pub mod ephemeris;
 pub mod health;
 pub mod metrics;
 pub mod middleware;

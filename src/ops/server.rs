@@ -145,12 +145,19 @@ pub async fn run(settings: Settings) -> Result<(), String> {
     }
     let eop_table = initial_table::<EopTable>(&settings)?;
     log_eop_table(&eop_table);
+    let ephemeris = super::ephemeris::initial_ephemeris(&settings)?;
     let listener = TcpListener::bind(settings.addr)
         .await
         .map_err(|e| format!("cannot listen on {}: {e}", settings.addr))?;
     let local = listener.local_addr().map_err(|e| e.to_string())?;
     // Built before the `serving` line, which callers take as ready for requests and signals.
-    let state = ServiceState::new(settings, table, eop_table, super::openapi::document_json());
+    let state = ServiceState::new(
+        settings,
+        table,
+        eop_table,
+        ephemeris,
+        super::openapi::document_json(),
+    );
     let shutdown = shutdown_signal();
     tracing::info!(addr = %local, "eigenzeit serving");
     serve(listener, state, shutdown)

@@ -7,6 +7,7 @@ use std::sync::{Arc, Mutex};
 
 use crate::api::{AppState, TableHandle};
 use crate::physics::earth::eop::EopTable;
+use crate::physics::solar_system::Ephemeris;
 use crate::physics::time::leap_seconds::LeapTable;
 
 use super::config::Settings;
@@ -86,6 +87,7 @@ impl ServiceState {
         settings: Settings,
         leap_table: LeapTable,
         eop_table: EopTable,
+        ephemeris: Arc<Ephemeris>,
         openapi_json: String,
     ) -> Self {
         let leap = TableSlot::new(leap_table);
@@ -94,6 +96,7 @@ impl ServiceState {
             settings.limits(),
             leap.handle.clone(),
             eop.handle.clone(),
+            ephemeris,
             openapi_json,
         );
         Self {

@@ -383,6 +383,33 @@ def orientation_get(api, m, document):
     )
 
 
+@operation("body_state")
+def body_state(api, m, document):
+    answer = expect(
+        api.call(
+            "body_state",
+            body=m.BodyName.MOON,
+            center=m.BodyName.SSB,
+            at="0",
+            scale=m.ScaleName.TDB,
+            format_=m.InstantFormatName.J2000_S,
+        ),
+        200,
+    )
+    # JPL DE440 read by jplephem at 2000-01-01T12:00:00 TDB
+    # (tests/reference/solar_system_de440.csv, from its seeded script); same records: 1 mm.
+    expected = [-27858348867.43948, 132094664320.14929, 57342550799.15141]
+    for axis in range(3):
+        near(answer.position_m[axis], expected[axis], 1e-3, f"Moon about the SSB, axis {axis}")
+    assert answer.frame == "ICRF" and "DE440" in answer.ephemeris.name, answer
+    expect_problem(
+        api.call("body_state", body=m.BodyName.MOON, at="1900-01-01T00:00:00"),
+        422,
+        "outside_ephemeris_span",
+        field="at",
+    )
+
+
 @operation("orientation_post")
 def orientation_post(api, m, document):
     body = m.OrientationBatchRequest.from_dict(

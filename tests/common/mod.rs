@@ -43,6 +43,7 @@ impl TestServer {
     pub async fn start_with_table(settings: Settings, table: LeapTable) -> Self {
         let eop =
             initial_table::<EopTable>(&settings).unwrap_or_else(|_| EopTable::builtin().clone());
+        let settings_for_ephemeris = settings.clone();
         let listener = TcpListener::bind("127.0.0.1:0")
             .await
             .expect("bind loopback");
@@ -51,6 +52,8 @@ impl TestServer {
             settings,
             table,
             eop,
+            eigenzeit::ops::ephemeris::initial_ephemeris(&settings_for_ephemeris)
+                .expect("ephemeris of the settings"),
             eigenzeit::ops::openapi::document_json(),
         );
         let (stop, stopped) = oneshot::channel::<()>();

@@ -172,9 +172,13 @@ pub struct TempFile(PathBuf);
 
 impl TempFile {
     pub fn new(name: &str, text: &str) -> Self {
+        Self::bytes(name, text.as_bytes())
+    }
+
+    pub fn bytes(name: &str, bytes: &[u8]) -> Self {
         let path =
             std::env::temp_dir().join(format!("eigenzeit-ops-{}-{name}", std::process::id()));
-        std::fs::write(&path, text).expect("write temp file");
+        std::fs::write(&path, bytes).expect("write temp file");
         Self(path)
     }
 
