@@ -62,7 +62,7 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     // Time scales and instants (the time engine).
     (
         TimeErrorKind::UnknownScale.as_str(),
-        "The time scale is not one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST, UT1.",
+        "The time scale is not one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST, UT1, TCL, TL.",
     ),
     (
         TimeErrorKind::UnknownFormat.as_str(),
@@ -149,6 +149,10 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     (
         TimeErrorKind::OutsideTdbModelSpan.as_str(),
         "TDB - TT (for TDB or TCB) is needed at an epoch outside the span of the chosen `tdb_model`: `ephemeris` (JPL DE440) covers 1959-12-30 to 2101-01-02 TT; the default `series` covers any epoch.",
+    ),
+    (
+        TimeErrorKind::OutsideLunarTimeSpan.as_str(),
+        "TCL or TL is needed at an epoch outside the fitted TCB - TCL at the Moon's centre (JPL DE440 integral): it covers 1959-12-30 to 2101-01-02 TDB.",
     ),
     (
         "unknown_tdb_model",
@@ -633,6 +637,7 @@ mod tests {
                         "position_m",
                         "unix_s",
                         "gnss_week",
+                        "tdb_model",
                     ];
                     if is_code_like
                         && !known_field.contains(&word.as_str())
