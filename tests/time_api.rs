@@ -313,8 +313,8 @@ async fn reference_documents() {
     let server = TestServer::start().await;
     let (status, _, scales) = get_json(&server, "/v1/time/scales").await;
     assert_eq!(status, 200);
-    // The ten scales of the first release and UT1 (src/physics/time/scale.rs).
-    assert_eq!(scales["scales"].as_array().map(Vec::len), Some(11));
+    // The ten scales of the first release, UT1, TCL and TL (src/physics/time/scale.rs).
+    assert_eq!(scales["scales"].as_array().map(Vec::len), Some(13));
     let (status, _, table) = get_json(&server, "/v1/time/leap-seconds").await;
     assert_eq!(status, 200);
     // The last step of the table: 2017-01-01, TAI - UTC = 37 s (IERS Bulletin C 52).
@@ -329,7 +329,8 @@ async fn reference_documents() {
     assert_eq!(table["expires"], "2027-06-28");
     let (status, _, now) = get_json(&server, "/v1/time/now").await;
     assert_eq!(status, 200);
-    assert_eq!(now["results"].as_array().map(Vec::len), Some(10));
+    // Every scale but UT1 (TCL and TL included, inside their span until 2101).
+    assert_eq!(now["results"].as_array().map(Vec::len), Some(12));
 }
 
 #[tokio::test]

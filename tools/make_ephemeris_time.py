@@ -11,6 +11,10 @@ Writes (reproducibly: fixed grids, seeded random epochs):
   tests/reference/tdb_ephemeris_reference.csv     integral, fit input and ERFA dtdb at random
                                                   epochs 1960-2100 (tests of the service)
   tests/reference/ephemeris_time_checks.txt       recorded figures (mean rates, annual term)
+  src/physics/time/data/tcl_ephemeris_de440.txt   TCB - TCL at the Moon's centre, fitted pieces
+                                                  (the same integral with body = Moon; issue 12)
+  tests/reference/tcl_ephemeris_reference.csv     TCB - TCL from the integral (before the fit) at
+                                                  seeded random TDB epochs 1960-2100
 
 The relation (IAU 2000 Resolution B1.5; IERS Conventions (2010) eq. 10.4, 10.5), for a body B
 (the Earth here; the Moon for TCL, issue 12) at its centre of mass (x = x_B):
@@ -63,6 +67,9 @@ ROOT = pathlib.Path(__file__).resolve().parent.parent
 DATA_OUT = ROOT / "src/physics/time/data/tdb_ephemeris_de440.txt"
 REFERENCE_OUT = ROOT / "tests/reference/tdb_ephemeris_reference.csv"
 CHECKS_OUT = ROOT / "tests/reference/ephemeris_time_checks.txt"
+TCL_DATA_OUT = ROOT / "src/physics/time/data/tcl_ephemeris_de440.txt"
+TCL_REFERENCE_OUT = ROOT / "tests/reference/tcl_ephemeris_reference.csv"
+TCL_GENERATOR_STATE = 20_241_120  # arbitrary fixed integer (TCL reference epochs)
 
 C_KM_S = 299792.458
 DAY_S = 86400.0
@@ -242,6 +249,52 @@ def fitted_value(coefficients, tt_s):
     return chebyshev_values(coefficients[index], x)
 
 
+def fit_tcl_pieces(moon):
+    """Chebyshev pieces of TCB - TCL at the Moon's centre as a function of TDB (DE440's own
+    argument; no iteration needed), on the same grid as TDB - TT (start, piece, count)."""
+    nodes = chebyshev_nodes(COEFFICIENT_COUNT)
+    starts = FIT_START_DAYS + PIECE_DAYS * np.arange(PIECE_COUNT)
+    half_days = 0.5 * PIECE_DAYS
+    tdb_days = (starts[:, None] + half_days) + half_days * nodes[None, :]
+    values = moon.delta_s((tdb_days * DAY_S).ravel()).reshape(tdb_days.shape)
+    return chebyshev_coefficients(values)
+
+
+def write_tcl(moon):
+    """The TCL product and its reference values (issue 12)."""
+    coefficients = fit_tcl_pieces(moon)
+    rng = random.Random(TCL_GENERATOR_STATE)
+    tdb_s = np.array(sorted(rng.uniform(REF_START_S, REF_END_S) for _ in range(REFERENCE_ROWS)))
+    integrated = moon.delta_s(tdb_s)
+    fitted = fitted_value(coefficients, tdb_s)
+    fit_error = np.abs(fitted - integrated).max()
+    with TCL_DATA_OUT.open("w") as out:
+        out.write(
+            "# TCB - TCL at the Moon's centre from JPL DE440, integrated by tools/make_ephemeris_time.py\n"
+            "# (IAU 2000 Res. B1.5 / IERS Conventions (2010) eq. 10.4-10.5 with the Moon in place of\n"
+            "# the Earth; origin: TCL = TCB at TCB = T0, 1977-01-01T00:00:32.184). See\n"
+            "# tcl_ephemeris_README.md. Do not edit.\n"
+            f"# start_days_tt_since_j2000 {FIT_START_DAYS:.1f}\n"
+            f"# piece_days {PIECE_DAYS:.1f}\n"
+            f"# piece_count {PIECE_COUNT}\n"
+            f"# coefficient_count {COEFFICIENT_COUNT}\n"
+            "# (the argument is TDB days since J2000.0 here, not TT: same layout keys as TDB - TT)\n"
+            "# one line per piece: Chebyshev coefficients c0..cN-1 of TCB - TCL in seconds,\n"
+            "# x = 2 (t - start) / piece - 1 on each piece\n"
+        )
+        for row in coefficients:
+            out.write(" ".join(repr(float(c)) for c in row) + "\n")
+    with TCL_REFERENCE_OUT.open("w") as out:
+        out.write(
+            "# TCB - TCL at the Moon's centre at seeded random TDB epochs 1960-2100, made by\n"
+            "# tools/make_ephemeris_time.py: integrated from DE440 (before the fit).\n"
+            "tdb_since_j2000_s,tcb_minus_tcl_s\n"
+        )
+        for t, a in zip(tdb_s, integrated):
+            out.write(f"{float(t)!r},{float(a)!r}\n")
+    return f"TCL fit: {PIECE_COUNT} pieces of {PIECE_DAYS:g} d, {COEFFICIENT_COUNT} coefficients; max |fit - integral| of TCB - TCL at {REFERENCE_ROWS} random epochs: {fit_error:.3e} s"
+
+
 def mean_slope(function, start_s, end_s, count=20001):
     t = np.linspace(start_s, end_s, count)
     y = function(t)
@@ -315,6 +368,7 @@ def main():
         f"ephemeris - ERFA dtdb 1960-2050: drift {drift[0] * 1e9:.4f} ns/century, offset at J2000 {drift[1] * 1e9:.4f} ns, periodic residual max {np.abs(residual).max() * 1e9:.4f} ns, rms {residual.std() * 1e9:.4f} ns",
         f"ephemeris - ERFA dtdb 1960-2100: drift {drift_all[0] * 1e9:.4f} ns/century, offset at J2000 {drift_all[1] * 1e9:.4f} ns, periodic residual max {np.abs(residual_all).max() * 1e9:.4f} ns",
         f"ephemeris - ERFA dtdb raw 1960-2050: min {difference[window].min() * 1e9:.4f} ns, max {difference[window].max() * 1e9:.4f} ns",
+        write_tcl(moon),
     ]
     CHECKS_OUT.write_text("\n".join(lines) + "\n")
     print("\n".join(lines))

@@ -186,7 +186,7 @@ impl PartialSchema for TargetScaleName {
     fn schema() -> RefOr<Schema> {
         string_enum(
             std::iter::once(ALL_SCALES).chain(Scale::SPELLINGS.iter().copied()),
-            "A target time scale, by its abbreviation, or `all` for every scale but UT1 (UT1 exists only where the Earth orientation table covers the epoch: name it).",
+            "A target time scale, by its abbreviation, or `all` for every scale but UT1, TCL and TL (UT1 exists only where the Earth orientation table covers the epoch, TCL and TL only from 1959-12-30 to 2101-01-02 TDB: name them).",
         )
     }
 }
@@ -404,7 +404,7 @@ impl PartialSchema for TargetScaleList {
             .schema_type(Type::String)
             .pattern(Some(scale_list_pattern()))
             .description(Some(
-                "Scale abbreviations or `all` (every scale but UT1), comma-separated, no spaces (e.g. `TAI,TT,TDB`).",
+                "Scale abbreviations or `all` (every scale but UT1, TCL and TL), comma-separated, no spaces (e.g. `TAI,TT,TDB`).",
             ))
             .into()
     }

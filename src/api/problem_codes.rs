@@ -63,7 +63,7 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     // Time scales and instants (the time engine).
     (
         TimeErrorKind::UnknownScale.as_str(),
-        "The time scale is not one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST, UT1.",
+        "The time scale is not one of UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST, UT1, TCL, TL.",
     ),
     (
         TimeErrorKind::UnknownFormat.as_str(),
@@ -154,6 +154,10 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     (
         TimeErrorKind::Ut1Unavailable.as_str(),
         "A conversion to or from UT1 at an epoch the Earth orientation table in force does not cover (it runs from 1962 to the end of its predictions; `detail` names the edge day); the operators can give a newer file (`--eop-file`, `--eop-url`).",
+    ),
+    (
+        TimeErrorKind::OutsideLunarTimeSpan.as_str(),
+        "TCL or TL is needed at an epoch outside the fitted TCB - TCL at the Moon's centre (JPL DE440 integral): it covers 1959-12-30 to 2101-01-02 TDB.",
     ),
     // The solar system (the planetary ephemeris).
     (
@@ -741,6 +745,7 @@ mod tests {
                         "week_counter",
                         "week_near",
                         "rinex_clock",
+                        "tdb_model",
                     ];
                     if is_code_like
                         && !known_field.contains(&word.as_str())

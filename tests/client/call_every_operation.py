@@ -188,6 +188,20 @@ def convert_get(api, m, document):
     )
     assert week.input_.gnss_week == "2385:0.0", week.input_
     assert "full week 2385" in week.warnings[0], week.warnings
+    # The lunar scales: TCL runs ahead of TDB (mean rate 6.8e-10, Lu, Yang & Xie 2025): in 2026
+    # TCL - TDB is near +1.05 s plus periodic terms; TL carries the proposal warning; both end
+    # with the fitted span in 2101.
+    lunar = expect(api.call("convert_get", at="2026-03-14T06:30:00", to="TDB,TCL,TL"), 200)
+    tdb, tcl, tl = (Decimal(r.difference_exact_s) for r in lunar.results)
+    assert Decimal("1.0") < tcl - tdb < Decimal("1.1"), tcl - tdb
+    assert Decimal("0") < tcl - tl < Decimal("0.1"), tcl - tl
+    assert any("proposal" in w for w in lunar.warnings), lunar.warnings
+    expect_problem(
+        api.call("convert_get", at="2150-01-01T00:00:00", to="TCL"),
+        422,
+        "outside_lunar_time_span",
+        field="at",
+    )
 
 
 @operation("convert_post")

@@ -16,7 +16,8 @@ use crate::physics::time::tdb_model::TdbModel;
 
 /// Whether a conversion from `from` into `targets` goes through TDB - TT.
 fn uses_tdb(from: Scale, targets: &[Scale]) -> bool {
-    let barycentric = |scale: Scale| matches!(scale, Scale::Tdb | Scale::Tcb);
+    let barycentric =
+        |scale: Scale| matches!(scale, Scale::Tdb | Scale::Tcb | Scale::Tcl | Scale::Tl);
     barycentric(from) || targets.iter().any(|&target| barycentric(target))
 }
 
@@ -132,6 +133,9 @@ pub fn convert_one(
         targets,
         context,
     ));
+    if from == Scale::Tl || targets.contains(&Scale::Tl) {
+        warnings.push(crate::physics::time::lunar::TL_WARNING.to_string());
+    }
     Ok(Converted {
         input,
         results,

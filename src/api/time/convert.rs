@@ -26,7 +26,7 @@ fn parse_targets<'a>(
     let mut scales = Vec::new();
     for (index, name) in names.enumerate() {
         if name == ALL_SCALES {
-            scales.extend(Scale::without_earth_orientation());
+            scales.extend(Scale::any_epoch());
         } else {
             scales.push(parse_scale(name, &format!("{field}[{index}]"))?);
         }
@@ -64,7 +64,7 @@ const CSV_EXAMPLE: &str = "epoch,TAI_iso,TAI_j2000_s,TDB_iso,TDB_j2000_s,warning
             (Conversion = "application/json"),
             (String = "text/csv", example = json!(CSV_EXAMPLE)))),
         QueryProblems,
-        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales, a week_counter of another system than the scale), unknown_week_counter, week_counter_needs_gnss_week (a week_counter with another format, or week_near without week_counter), ut1_outside_eop_table (UT1 asked for, or given, at an epoch the Earth orientation table does not cover: before 1962 or after the end of its predictions), not_finite, observer_not_on_ground, unknown_tdb_model, outside_tdb_model_span (TDB or TCB with the ephemeris model outside 1959-12-30 to 2101-01-02 TT)", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales, a week_counter of another system than the scale), unknown_week_counter, week_counter_needs_gnss_week (a week_counter with another format, or week_near without week_counter), ut1_outside_eop_table (UT1 asked for, or given, at an epoch the Earth orientation table does not cover: before 1962 or after the end of its predictions), not_finite, observer_not_on_ground, unknown_tdb_model, outside_tdb_model_span (TDB or TCB with the ephemeris model outside 1959-12-30 to 2101-01-02 TT), outside_lunar_time_span (TCL or TL outside 1959-12-30 to 2101-01-02 TDB)", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn convert_get(
     State(state): State<AppState>,

@@ -201,7 +201,7 @@ pub async fn leap_seconds(State(state): State<AppState>, headers: HeaderMap) -> 
         (status = 200, description = "Now, in every scale (never cached)", body = Conversion,
             headers(("Cache-Control" = String, description = "`no-store`"))),
         QueryProblems,
-        (status = 422, description = "A name in `forms` is not a form (`unknown_format`, `field` names it), the TDB - TT model is not one (`unknown_tdb_model`), or the server's clock reads outside the span of the ephemeris model (`outside_tdb_model_span`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A name in `forms` is not a form (`unknown_format`, `field` names it), `tdb_model` is not a model (`unknown_tdb_model`), or the server's clock reads outside the span of `tdb_model=ephemeris` (`outside_tdb_model_span`) or of TCL and TL (`outside_lunar_time_span`, after 2101-01-02)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 503, description = "The server's clock reads before 1970 (`clock_unavailable`), or the request took longer than the configured timeout (`request_timeout`)", body = crate::api::error::Problem, content_type = "application/problem+json")))]
 pub async fn now(
     State(state): State<AppState>,

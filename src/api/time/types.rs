@@ -130,7 +130,7 @@ pub struct ConvertQuery {
     pub from: Option<String>,
     /// Target scales, comma-separated without spaces, or `all` (default `all`: every scale but
     /// UT1, which exists only where the Earth orientation table covers the epoch; name it).
-    #[param(value_type = Option<TargetScaleList>, example = "TAI,TT,TDB")]
+    #[param(value_type = Option<TargetScaleList>, example = "TAI,TT,TDB,TCL")]
     pub to: Option<String>,
     /// How `at` is written: iso (default), mjd, jd, j2000_s, unix_s (UTC only), gnss_week (GNSS scales).
     #[param(value_type = Option<InstantFormatName>, example = "iso")]

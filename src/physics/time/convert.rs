@@ -10,6 +10,7 @@ use super::instant::{
     ATTOS_PER_SECOND,
 };
 use super::leap_seconds::LeapTable;
+use super::lunar::{tcb_minus_tcl_s, tcl_minus_tl_s, tl_minus_tcl_s, SPAN_TEXT as LUNAR_SPAN_TEXT};
 use super::scale::Scale;
 use super::tdb_ephemeris::{tdb_minus_tt_ephemeris_s, SPAN_TEXT};
 use super::tdb_model::TdbModel;
@@ -176,7 +177,38 @@ pub fn to_tt_attos(instant: &Instant, context: &ConversionContext<'_>) -> Result
             tt_from_tdb_attos(tdb, context)?
         }
         Scale::Ut1 => tai_from_ut1_attos(count, context.table, context.ut1)? + TT_MINUS_TAI_ATTOS,
+        Scale::Tcl => tt_from_tdb_attos(tdb_from_tcl_attos(count)?, context)?,
+        Scale::Tl => {
+            let tcl = count + seconds_f64_to_attos(tcl_minus_tl_s(seconds_since_t0(count)));
+            tt_from_tdb_attos(tdb_from_tcl_attos(tcl)?, context)?
+        }
     })
+}
+
+/// TCB - TCL at a TDB count, or the lunar span error.
+fn tcb_minus_tcl_at_tdb_s(tdb_attos: i128) -> Result<f64, TimeError> {
+    tcb_minus_tcl_s(attos_to_seconds_f64(tdb_attos)).ok_or_else(|| {
+        TimeError::OutsideLunarTimeSpan(format!(
+            "TCL and TL come from the DE440 integral of TCB - TCL at the Moon's centre, which covers {LUNAR_SPAN_TEXT}; this instant is outside it"
+        ))
+    })
+}
+
+/// The TCL count of the event at TDB count `tdb_attos` (at the Moon's centre).
+fn tcl_from_tdb_attos(tdb_attos: i128) -> Result<i128, TimeError> {
+    let tcb = tdb_attos + seconds_f64_to_attos(tcb_minus_tdb_s(tdb_attos));
+    Ok(tcb - seconds_f64_to_attos(tcb_minus_tcl_at_tdb_s(tdb_attos)?))
+}
+
+/// Solves TCL = TCB(TDB) - (TCB - TCL)(TDB) for TDB by fixed-point iteration (both terms
+/// change by less than 2e-8 s per second, so each step gains about eight digits).
+fn tdb_from_tcl_attos(tcl_attos: i128) -> Result<i128, TimeError> {
+    let mut tdb = tcl_attos;
+    for _ in 0..3 {
+        let tcb = tcl_attos + seconds_f64_to_attos(tcb_minus_tcl_at_tdb_s(tdb)?);
+        tdb = tcb + seconds_f64_to_attos(tdb_minus_tcb_s(tcb));
+    }
+    Ok(tdb)
 }
 
 /// Solves TT = TDB - (TDB - TT)(TT) by fixed-point iteration (either model changes by less
@@ -214,6 +246,15 @@ pub fn from_tt_attos(
         Scale::Tcb => {
             let tdb = tt_attos + seconds_f64_to_attos(tdb_minus_tt_s(tt_attos, context)?);
             tdb + seconds_f64_to_attos(tcb_minus_tdb_s(tdb))
+        }
+        Scale::Tcl => {
+            let tdb = tt_attos + seconds_f64_to_attos(tdb_minus_tt_s(tt_attos, context)?);
+            tcl_from_tdb_attos(tdb)?
+        }
+        Scale::Tl => {
+            let tdb = tt_attos + seconds_f64_to_attos(tdb_minus_tt_s(tt_attos, context)?);
+            let tcl = tcl_from_tdb_attos(tdb)?;
+            tcl + seconds_f64_to_attos(tl_minus_tcl_s(seconds_since_t0(tcl)))
         }
     };
     Ok(Instant::from_count_attos(target, count))

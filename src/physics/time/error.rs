@@ -30,6 +30,8 @@ vocabulary! {
         Ut1Unavailable = "ut1_outside_eop_table",
         /// [`TimeError::OutsideTdbModelSpan`].
         OutsideTdbModelSpan = "outside_tdb_model_span",
+        /// [`TimeError::OutsideLunarTimeSpan`].
+        OutsideLunarTimeSpan = "outside_lunar_time_span",
     }
 }
 
@@ -71,6 +73,9 @@ pub enum TimeError {
     /// TDB - TT is needed at an epoch outside the span of the chosen TDB model (the
     /// ephemeris model covers 1959-12-30 to 2101-01-02 TT).
     OutsideTdbModelSpan(String),
+    /// TCL or TL is needed at an epoch outside the fitted TCB - TCL representation
+    /// (1959-12-30 to 2101-01-02 TDB).
+    OutsideLunarTimeSpan(String),
 }
 
 impl TimeError {
@@ -87,6 +92,7 @@ impl TimeError {
             Self::OutOfRange(_) => TimeErrorKind::OutOfRange,
             Self::Ut1Unavailable(_) => TimeErrorKind::Ut1Unavailable,
             Self::OutsideTdbModelSpan(_) => TimeErrorKind::OutsideTdbModelSpan,
+            Self::OutsideLunarTimeSpan(_) => TimeErrorKind::OutsideLunarTimeSpan,
         }
     }
 
@@ -125,7 +131,8 @@ impl fmt::Display for TimeError {
             | Self::BeforeUtc(message)
             | Self::OutOfRange(message)
             | Self::Ut1Unavailable(message)
-            | Self::OutsideTdbModelSpan(message) => f.write_str(message),
+            | Self::OutsideTdbModelSpan(message)
+            | Self::OutsideLunarTimeSpan(message) => f.write_str(message),
             Self::FormatNotForScale {
                 format,
                 scale,

@@ -9,6 +9,7 @@ pub mod format_name;
 pub mod formats;
 pub mod instant;
 pub mod leap_seconds;
+pub mod lunar;
 pub mod offsets;
 pub mod scale;
 pub mod tdb_ephemeris;

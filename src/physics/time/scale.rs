@@ -32,6 +32,11 @@ vocabulary! {
         /// Universal Time UT1 (IERS Conventions (2010) ch. 5.4.2): the Earth's rotation angle
         /// as a time; UTC + (UT1 - UTC) from the Earth orientation table.
         Ut1 = "UT1",
+        /// Lunar Coordinate Time (IAU 2024 Resolution II): the coordinate time of the LCRS.
+        Tcl = "TCL",
+        /// Lunar surface time TL (Turyshev et al., arXiv:2406.16147): a proposal, TCL scaled
+        /// by L_L.
+        Tl = "TL",
     }
 }
 
@@ -55,6 +60,18 @@ impl Scale {
             .filter(|scale| !scale.needs_earth_orientation())
     }
 
+    /// True for the lunar scales TCL and TL: they exist only inside the span of the fitted
+    /// TCB - TCL (1959-12-30 to 2101-01-02 TDB).
+    pub fn is_lunar(self) -> bool {
+        matches!(self, Scale::Tcl | Scale::Tl)
+    }
+
+    /// The scales that exist at any epoch without a table (every scale but UT1, TCL and TL),
+    /// in vocabulary order: what the `all` target means.
+    pub fn any_epoch() -> impl Iterator<Item = Scale> {
+        Scale::without_earth_orientation().filter(|scale| !scale.is_lunar())
+    }
+
     /// The full name.
     pub fn full_name(self) -> &'static str {
         match self {
@@ -69,6 +86,8 @@ impl Scale {
             Scale::Bdt => "BeiDou Time",
             Scale::Qzsst => "QZSS Time",
             Scale::Ut1 => "Universal Time UT1",
+            Scale::Tcl => "Lunar Coordinate Time",
+            Scale::Tl => "Lunar surface time TL (a proposal, not a standard)",
         }
     }
 
@@ -85,6 +104,8 @@ impl Scale {
             Scale::Gst => "the Galileo ground segment's precise timing facility, steered to TAI modulo 19 s",
             Scale::Bdt => "the BeiDou ground segment's master clock, steered to UTC(NTSC) modulo leap seconds",
             Scale::Qzsst => "the QZSS ground segment, steered to GPS Time",
+            Scale::Tcl => "computed from TCB by the time-dilation integral at the Moon's centre, here from JPL DE440 (fitted 1959-12-30 to 2101-01-02 TDB)",
+            Scale::Tl => "computed from TCL by the constant L_L; a proposal (Turyshev, Williams, Boggs & Park, arXiv:2406.16147), not a standard: no agency realizes it yet",
             Scale::Ut1 => "the Earth's rotation, measured by VLBI and published by the IERS as UT1 - UTC (EOP 20 C04, Bulletin A observations and predictions): the EOP table in force",
         }
     }
@@ -102,6 +123,8 @@ impl Scale {
             Scale::Gst => "GST = TAI - 19 s; weeks from 1999-08-22T00:00:00 GST (Galileo OS SIS ICD)",
             Scale::Bdt => "BDT = TAI - 33 s; weeks from 2006-01-01T00:00:00 BDT (BeiDou OS ICD)",
             Scale::Qzsst => "QZSST = TAI - 19 s; GPS week numbering (IS-QZSS)",
+            Scale::Tcl => "TCB - TCL = c^-2 [integral (v_M^2/2 + w_ext(x_M)) dTCB] + c^-4 terms at the Moon's centre (IAU 2000 B1.5 / IERS Conventions (2010) eq. 10.4-10.5 with the Moon for the Earth; IAU 2024 Resolution II), TCL = TCB at 1977-01-01T00:00:32.184 TCB; mean dTCL/dTCB = 1 - 1.4825e-8",
+            Scale::Tl => "TL - TCL = -L_L * (TCL - T0), T0 = 1977-01-01T00:00:32.184 TCL, L_L = 3.1398e-11 = GM_M / (c^2 R_M) + (omega_M R_M)^2 / (2 c^2) with GM_M of DE440, R_M = 1737.4 km (definition of Turyshev et al., arXiv:2406.16147 v5; a proposal)",
             Scale::Ut1 => "UT1 = UTC + (UT1 - UTC), UT1 - UTC interpolated from the EOP table at the UTC epoch (4-point Lagrange through UT1 - TAI); readings count 86 400 s per day from J2000.0 of UT1; only inside the table (1962 to the end of its predictions)",
         }
     }

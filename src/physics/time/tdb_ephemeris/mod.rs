@@ -14,7 +14,7 @@
 //! References: Park, R.S. et al., Astron. J. 161:105 (2021) (DE440); IAU 2000 Resolution B1.5
 //! and B1.9, IAU 2006 Resolution B3; IERS Conventions (2010) ch. 10, eq. 10.4-10.5.
 
-mod table;
+pub(crate) mod table;
 
 #[cfg(test)]
 mod tests;
@@ -35,7 +35,7 @@ pub const fn span_tt_since_j2000_s() -> (f64, f64) {
 
 /// Clenshaw's recurrence for `sum_j c_j T_j(x)`, x in [-1, 1] (Numerical Recipes, 3rd ed.,
 /// eq. 5.8.11, with the full `c_0`).
-fn clenshaw(coefficients: &[f64], x: f64) -> f64 {
+pub(crate) fn clenshaw(coefficients: &[f64], x: f64) -> f64 {
     let two_x = 2.0 * x;
     let (mut b1, mut b2) = (0.0, 0.0);
     for &c in coefficients.iter().skip(1).rev() {
@@ -48,7 +48,7 @@ fn clenshaw(coefficients: &[f64], x: f64) -> f64 {
 
 /// The piece that holds `days` (TT days since J2000.0) and x in [-1, 1] inside it; `None`
 /// outside the span or for a non-finite time.
-fn locate(days: f64) -> Option<(usize, f64)> {
+pub(crate) fn locate(days: f64) -> Option<(usize, f64)> {
     let offset_days = days - FIRST_PIECE_START_DAYS;
     // Written so that NaN fails the test.
     if !(offset_days >= 0.0 && offset_days < PIECE_COUNT as f64 * PIECE_DAYS) {

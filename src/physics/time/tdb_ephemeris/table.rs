@@ -98,6 +98,22 @@ pub(crate) fn table() -> Option<&'static EphemerisTable> {
     TABLE.get_or_init(|| parse(TABLE_TEXT).ok()).as_ref()
 }
 
+/// The TCB - TCL pieces at the Moon's centre (`data/tcl_ephemeris_de440.txt`, same layout,
+/// argument TDB), parsed on first use; `None` only if the shipped file were broken.
+pub(crate) fn tcl_table() -> Option<&'static EphemerisTable> {
+    static TABLE: OnceLock<Option<EphemerisTable>> = OnceLock::new();
+    TABLE.get_or_init(|| parse(TCL_TABLE_TEXT).ok()).as_ref()
+}
+
+/// The TCB - TCL table as shipped, written by `tools/make_ephemeris_time.py`.
+const TCL_TABLE_TEXT: &str = include_str!("../data/tcl_ephemeris_de440.txt");
+
+/// The parse result of the shipped TCB - TCL text (for the tests).
+#[cfg(test)]
+pub(crate) fn parse_shipped_tcl() -> Result<EphemerisTable, TableError> {
+    parse(TCL_TABLE_TEXT)
+}
+
 /// The parse result of the shipped text (for the tests).
 #[cfg(test)]
 pub(crate) fn parse_shipped() -> Result<EphemerisTable, TableError> {
