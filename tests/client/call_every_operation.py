@@ -613,7 +613,9 @@ def main():
     for item in document["paths"].values():
         for method, op in item.items():
             if method in ("get", "put", "post", "delete", "patch", "head", "options", "trace"):
-                tag = (op.get("tags") or ["default"])[0]
+                # The generator writes a tag's module in snake case (`solar-system` ->
+                # `solar_system`).
+                tag = (op.get("tags") or ["default"])[0].replace("-", "_")
                 modules[op["operationId"]] = f"eigenzeit_client.api.{tag}.{op['operationId']}"
     missing, stale = sorted(set(modules) - set(CHECKS)), sorted(set(CHECKS) - set(modules))
     if missing or stale:
