@@ -5,9 +5,12 @@ use std::fmt::Write as _;
 use std::hint::black_box;
 
 use criterion::{criterion_group, criterion_main, Criterion, Throughput};
-use eigenzeit::physics::constants::{GM_EARTH_M3_S2, SPEED_OF_LIGHT_SQUARED_M2_S2};
+use eigenzeit::physics::constants::{
+    EARTH_ROTATION_RAD_S, GM_EARTH_M3_S2, SPEED_OF_LIGHT_SQUARED_M2_S2,
+};
+use eigenzeit::physics::earth::eop::EopTable;
 use eigenzeit::physics::proper_time::kepler::KeplerOrbit;
-use eigenzeit::physics::proper_time::{ProperTimeOptions, Trajectory};
+use eigenzeit::physics::proper_time::{integrate_proper_time, ProperTimeOptions, Trajectory};
 use eigenzeit::physics::time::convert::ConversionContext;
 use eigenzeit::physics::time::instant::{Instant, ATTOS_PER_SECOND};
 use eigenzeit::physics::time::leap_seconds::LeapTable;
@@ -32,15 +35,31 @@ fn orbit() -> KeplerOrbit {
 }
 
 fn track(velocities: bool) -> ObjectTrack {
+    track_in(Frame::Inertial, velocities)
+}
+
+/// The orbit in `frame`: Earth-fixed states are the inertial ones turned by omega_E t about z
+/// (a plausible ITRS track for timing; the benchmark measures cost, not physics).
+fn track_in(frame: Frame, velocities: bool) -> ObjectTrack {
     let orbit = orbit();
     let start = 832_593_600 * ATTOS_PER_SECOND;
+    let turn = |t: f64, (r, v): ([f64; 3], [f64; 3])| {
+        if frame == Frame::Inertial {
+            return (r, v);
+        }
+        let (s, c) = (EARTH_ROTATION_RAD_S * t).sin_cos();
+        let r = [c * r[0] + s * r[1], -s * r[0] + c * r[1], r[2]];
+        let v = [c * v[0] + s * v[1], -s * v[0] + c * v[1], v[2]];
+        let w = EARTH_ROTATION_RAD_S;
+        (r, [v[0] + w * r[1], v[1] - w * r[0], v[2]])
+    };
     ObjectTrack {
         id: "BENCH".into(),
-        frame: Frame::Inertial,
+        frame,
         scale: Scale::Tt,
         states: (0..STATES)
             .map(|i| {
-                let (position_m, velocity_m_s) = orbit.state_at(i as f64);
+                let (position_m, velocity_m_s) = turn(i as f64, orbit.state_at(i as f64));
                 TrajectoryState {
                     epoch: Instant::from_count_attos(
                         Scale::Tt,
@@ -100,7 +119,48 @@ fn benches(c: &mut Criterion) {
                     &InterpolationOptions::default(),
                     &ProperTimeOptions::default(),
                     &context,
+                    EopTable::builtin(),
                     rate,
+                )
+            })
+        });
+    }
+    // Earth-fixed (SP3-like) tracks: every state goes into the GCRS with the full IERS 2010
+    // rotation; `former_*` is the treatment before it (v + omega_E x r about the ITRS z axis),
+    // measured in the same run for the before/after ratio.
+    for velocities in [true, false] {
+        let track = track_in(Frame::EarthFixed, velocities);
+        let name = if velocities { "hermite" } else { "lagrange" };
+        group.bench_function(format!("earth_fixed_{name}"), |b| {
+            b.iter(|| {
+                proper_time_of_track(
+                    black_box(&track),
+                    &InterpolationOptions::default(),
+                    &ProperTimeOptions::default(),
+                    &context,
+                    EopTable::builtin(),
+                    rate,
+                )
+            })
+        });
+        group.bench_function(format!("former_earth_fixed_{name}"), |b| {
+            b.iter(|| {
+                let interpolator = Interpolator::from_track(
+                    black_box(&track),
+                    &InterpolationOptions::default(),
+                    &context,
+                )
+                .unwrap();
+                let turning = |t_s: f64| {
+                    let (r, v) = interpolator.state_at(t_s);
+                    let w = EARTH_ROTATION_RAD_S;
+                    (r, [v[0] - w * r[1], v[1] + w * r[0], v[2]])
+                };
+                integrate_proper_time(
+                    &turning,
+                    interpolator.times_s(),
+                    rate,
+                    &ProperTimeOptions::default(),
                 )
             })
         });

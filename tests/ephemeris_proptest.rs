@@ -65,6 +65,7 @@ fn read_and_integrate(
             &InterpolationOptions::default(),
             &ProperTimeOptions::default(),
             &context,
+            eigenzeit::physics::earth::eop::EopTable::builtin(),
             |_| rate,
         );
     }

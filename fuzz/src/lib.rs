@@ -67,6 +67,7 @@ where
         &InterpolationOptions::default(),
         &ProperTimeOptions::default(),
         &context,
+        eigenzeit::physics::earth::eop::EopTable::builtin(),
         |_| rate,
     );
 }

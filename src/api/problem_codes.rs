@@ -575,10 +575,15 @@ mod tests {
             ],
         );
         // `too_few_epochs` cannot reach the endpoint: the readers require two states.
+        // Earth-fixed tracks outside the EOP table: eop_before_table, eop_after_table.
         let proper_time: Vec<&str> = ProperTimeErrorKind::ALL
             .iter()
             .filter(|kind| **kind != ProperTimeErrorKind::TooFewEpochs)
             .map(|kind| kind.as_str())
+            .chain([
+                EopLookupErrorKind::BeforeTable.as_str(),
+                EopLookupErrorKind::AfterTable.as_str(),
+            ])
             .collect();
         expect("post", "/v1/clock/proper-time", &proper_time);
         // `eop_not_finite` and `eop_bad_utc` cannot reach the endpoint: the instant is read and

@@ -38,6 +38,7 @@ fn demo_files_give_the_expected_rates() {
             &InterpolationOptions::default(),
             &ProperTimeOptions::default(),
             &context,
+            crate::physics::earth::eop::EopTable::builtin(),
             |_| rate_tt,
         )
         .unwrap_or_else(|e| panic!("{e}"))

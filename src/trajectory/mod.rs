@@ -11,6 +11,8 @@
 
 #[cfg(test)]
 mod demo_tests;
+#[cfg(test)]
+mod earth_fixed_tests;
 pub mod error;
 pub mod interpolate;
 pub mod json;

@@ -3,19 +3,27 @@
 //!
 //! Coordinate time is TT: every epoch is converted to TT through the engine, so a UTC track
 //! across a leap second keeps a continuous time axis. The rate function must therefore be
-//! relative to TT (or the caller accepts the L_G rate difference of TCG). Earth-fixed tracks are
-//! given inertial-equivalent velocities v + omega_E x r (see [`crate::physics::proper_time`]).
+//! relative to TT (or the caller accepts the L_G rate difference of TCG). Earth-fixed tracks go
+//! into the GCRS at every epoch with the Earth orientation from the EOP table (see
+//! [`crate::physics::proper_time::EarthFixed`]); a track outside the table is refused
+//! (`eop_before_table`, `eop_after_table`) naming its first or last state.
 
 use super::error::TrajectoryError;
 use super::interpolate::{InterpolationOptions, Interpolator};
 use super::{Frame, ObjectTrack, TrajectorySet};
+use crate::physics::constants::TT_MINUS_TAI_ATTOS;
+use crate::physics::earth::eop::{EopLookupError, EopTable};
+use crate::physics::earth::orientation::span::{EopAtEpoch, OrientationSpan};
+use crate::physics::earth::orientation::ARCSEC_TO_RAD;
 use crate::physics::proper_time::{
     integrate_proper_time, EarthFixed, ProperTimeError, ProperTimeOptions, ProperTimeSeries,
     Trajectory,
 };
 use crate::physics::readable::readable;
 use crate::physics::time::convert::{from_tt_attos, to_tt_attos, ConversionContext};
+use crate::physics::time::formats::{day_reading, write_iso, ISO_DECIMALS};
 use crate::physics::time::instant::{seconds_f64_to_attos, Instant};
+use crate::physics::time::leap_seconds::LeapTable;
 
 /// The proper time of one object.
 #[derive(Debug, Clone, PartialEq)]
@@ -55,12 +63,14 @@ pub const COORDINATE_TIME_NOTE: &str = "coordinate time is TT from the ephemeris
 /// Integrates the proper time of one track at its own epochs.
 ///
 /// `rate(position_m, velocity_m_s)` returns the (velocity, gravity) parts of the fractional
-/// rate offset relative to TT, from an inertial-equivalent state.
+/// rate offset relative to TT, from a GCRS state; `eop` is the Earth orientation table that
+/// takes Earth-fixed tracks into the GCRS.
 pub fn proper_time_of_track<R>(
     track: &ObjectTrack,
     interpolation: &InterpolationOptions,
     options: &ProperTimeOptions,
     context: &ConversionContext<'_>,
+    eop: &EopTable,
     rate: R,
 ) -> Result<TrackProperTime, TrajectoryError>
 where
@@ -82,7 +92,12 @@ where
     let series = match track.frame {
         Frame::Inertial => integrate_proper_time(&interpolator, &epochs_s, rate, options),
         Frame::EarthFixed => {
-            let rotating = EarthFixed(|t_s: f64| interpolator.state_at(t_s));
+            let span_s = interpolator.times_s().last().copied().unwrap_or(0.0);
+            let orientation = orientation_over_track(track, span_s, context, eop)?;
+            let rotating = EarthFixed {
+                track: |t_s: f64| interpolator.state_at(t_s),
+                orientation: &orientation,
+            };
             integrate_proper_time(&rotating, &epochs_s, rate, options)
         }
     }
@@ -94,6 +109,74 @@ where
         epochs,
         series,
     })
+}
+
+/// The Earth orientation parameters at TT `tt_attos` from `eop` (4-point Lagrange, as the
+/// table interpolates): UT1 - TT = (UT1 - UTC) - (TAI - UTC) - 32.184 s, the pole and dX, dY
+/// (zero where the table has none) in radians.
+pub fn eop_at_tt(
+    eop: &EopTable,
+    leaps: &LeapTable,
+    tt_attos: i128,
+) -> Result<EopAtEpoch, EopLookupError> {
+    let (utc_mjd, sod_attos) = leaps
+        .utc_from_tai(tt_attos - TT_MINUS_TAI_ATTOS)
+        .map_err(|_| EopLookupError::BeforeTable {
+            // before 1960 there is no UTC, and the table (from 1962) has no values either
+            first_mjd: eop.first_mjd().unwrap_or(0),
+        })?;
+    let tai_minus_utc_attos = leaps.tai_minus_utc_attos(utc_mjd, sod_attos).unwrap_or(0);
+    let values = eop.at_utc_attos(leaps, utc_mjd, sod_attos)?;
+    let tt_minus_utc_s = (tai_minus_utc_attos + TT_MINUS_TAI_ATTOS) as f64 / 1e18;
+    Ok(EopAtEpoch {
+        ut1_minus_tt_s: values.ut1_minus_utc_s - tt_minus_utc_s,
+        xp_rad: values.xp_arcsec * ARCSEC_TO_RAD,
+        yp_rad: values.yp_arcsec * ARCSEC_TO_RAD,
+        dx_rad: values.dx_arcsec.unwrap_or(0.0) * ARCSEC_TO_RAD,
+        dy_rad: values.dy_arcsec.unwrap_or(0.0) * ARCSEC_TO_RAD,
+    })
+}
+
+/// The Earth orientation over an Earth-fixed track's span; outside the EOP table a problem
+/// naming the state (first or last) whose epoch the table does not cover.
+fn orientation_over_track(
+    track: &ObjectTrack,
+    span_s: f64,
+    context: &ConversionContext<'_>,
+    eop: &EopTable,
+) -> Result<OrientationSpan, TrajectoryError> {
+    let refuse = |error: EopLookupError, index: usize| {
+        let epoch = track
+            .states
+            .get(index)
+            .and_then(|s| day_reading(&s.epoch, context.table).ok())
+            .map(|reading| write_iso(&reading, ISO_DECIMALS))
+            .unwrap_or_default();
+        let mut problem = TrajectoryError::new(
+            error.code(),
+            format!(
+                "the state at {epoch} {scale}: {error}; an Earth-fixed track goes into the GCRS with the Earth orientation at each epoch, which the table in force must cover",
+                scale = track.scale.as_str()
+            ),
+        )
+        .for_object(&track.id);
+        problem.index = Some(index);
+        problem
+    };
+    let start = track.states.first().map(|s| s.epoch);
+    let start_tt = start
+        .map(|epoch| to_tt_attos(&epoch, context))
+        .transpose()
+        .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(&track.id))?
+        .unwrap_or(0);
+    let last_index = track.states.len().saturating_sub(1);
+    OrientationSpan::new(start_tt, span_s, |tt_attos| {
+        eop_at_tt(eop, context.table, tt_attos).map_err(|error| {
+            let index = if tt_attos == start_tt { 0 } else { last_index };
+            (error, index)
+        })
+    })
+    .map_err(|(error, index)| refuse(error, index))
 }
 
 /// Most output epochs one track may ask for through a step.
@@ -151,6 +234,7 @@ pub fn proper_time_of_ephemeris<F, R>(
     interpolation: &InterpolationOptions,
     options: &ProperTimeOptions,
     context: &ConversionContext<'_>,
+    eop: &EopTable,
     rate_for_track: F,
 ) -> Result<Vec<TrackProperTime>, TrajectoryError>
 where
@@ -168,7 +252,7 @@ where
         .iter()
         .map(|track| {
             let rate = rate_for_track(track);
-            proper_time_of_track(track, interpolation, options, context, &rate)
+            proper_time_of_track(track, interpolation, options, context, eop, &rate)
         })
         .collect()
 }

@@ -1,5 +1,6 @@
 //! `POST /v1/clock/compare`.
 
+use axum::extract::State;
 use axum::Json;
 
 use super::answer::{CompareAnswer, RateDifferenceAnswer};
@@ -7,6 +8,7 @@ use super::evaluate::{evaluate_item, Defaults};
 use super::types::CompareRequest;
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, TimeoutProblem};
 use crate::api::extract::JsonBody;
+use crate::api::state::AppState;
 use crate::physics::rate::{
     fractional_to_microseconds_per_day, fractional_to_nanoseconds_per_day, rate_difference,
 };
@@ -21,15 +23,17 @@ use crate::physics::rate::{
         (status = 422, description = "A value cannot be used; `field` names it (e.g. `clock_b.ground_site.latitude_deg`); the codes are those of `POST /v1/clock/rate`, plus reference_mismatch when the two clocks use different references", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn compare(
+    State(state): State<AppState>,
     JsonBody(request): JsonBody<CompareRequest>,
 ) -> Result<Json<CompareAnswer>, ApiError> {
+    let eop = state.eop_table();
     let defaults = Defaults::parse(
         request.reference.as_deref(),
         request.gravity_model.as_deref(),
         request.nominal_frequency_hz,
     )?;
-    let a = evaluate_item(&request.clock_a, &defaults, "clock_a")?;
-    let b = evaluate_item(&request.clock_b, &defaults, "clock_b")?;
+    let a = evaluate_item(&request.clock_a, &defaults, "clock_a", &eop)?;
+    let b = evaluate_item(&request.clock_b, &defaults, "clock_b", &eop)?;
     let fractional = rate_difference(&a.parts, &b.parts).map_err(|_| {
         let field = if request.clock_b.reference.is_some() {
             "clock_b.reference"

@@ -8,8 +8,10 @@ use crate::api::error::ApiError;
 use crate::api::names::{parse_named, parse_scale};
 use crate::physics::earth::eop::EopTable;
 use crate::physics::earth::orientation::fast::celestial_pole_fast;
+use crate::physics::earth::orientation::span::{OrientationSpan, NODE_STEP_S};
 use crate::physics::earth::orientation::JulianDate;
 use crate::physics::rate::state::state_rate_about_axis;
+use crate::physics::rate::state::{ITRF_EPOCH_NOTE, ITRF_WITHOUT_EPOCH_NOTE};
 use crate::physics::rate::{
     frequency_offset, ground_site_rate, lunar_site_rate, orbit_rate, Anomaly, Frame, GravityModel,
     GroundSite, HeightReference, KeplerianOrbit, LunarSite, RateError, RateParts, RateReference,
@@ -18,8 +20,10 @@ use crate::physics::rate::{
 use crate::physics::readable::readable;
 use crate::physics::time::convert::{convert, ConversionContext};
 use crate::physics::time::formats::{parse_instant, InstantFormat};
+use crate::physics::time::instant::Instant;
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::scale::Scale;
+use crate::trajectory::track_proper_time::eop_at_tt;
 
 /// Settings given at the request level, already read.
 #[derive(Debug, Clone, Copy, Default)]
@@ -164,10 +168,12 @@ fn setting_field(path: &str, name: &str, given_on_item: bool) -> String {
 }
 
 /// Evaluates one item at JSON path `path` (e.g. `items[3]` or `clock_a`).
+/// `eop` is the Earth orientation table in force (UT1 epochs, ITRF states with an epoch).
 pub fn evaluate_item(
     item: &RateItem,
     defaults: &Defaults,
     path: &str,
+    eop: &EopTable,
 ) -> Result<Evaluated, ApiError> {
     let subject = subject_of(item, path)?;
     let reference = match &item.reference {
@@ -194,8 +200,10 @@ pub fn evaluate_item(
     let (parts, model_label, periodic, inclination_deg) = match subject {
         Subject::State(state) => {
             let model = requested_model.unwrap_or(GravityModel::PointMass);
-            let (parts, periodic) = state_answer(state, reference, model, path, &origins)?;
+            let (parts, periodic, frame_note) =
+                state_answer(state, reference, model, path, &origins, eop)?;
             notes.extend(notes::state(model));
+            notes.extend(frame_note.map(String::from));
             (parts, model.as_str(), Some(periodic), None)
         }
         Subject::Orbit(orbit) => {
@@ -268,14 +276,12 @@ pub fn evaluate_item(
     Ok(Evaluated { answer, parts })
 }
 
-/// The Earth's figure axis in the state's frame: the ITRF z axis, or for a GCRS state with a
-/// zonal model the CIP at the state's epoch (required then).
-fn figure_axis(
+/// The state's epoch as TT, when given (a UT1 epoch through the EOP table in force).
+fn state_epoch_tt(
     state: &StateInput,
-    frame: Frame,
-    model: GravityModel,
     path: &str,
-) -> Result<[f64; 3], ApiError> {
+    eop: &EopTable,
+) -> Result<Option<Instant>, ApiError> {
     let scale = parse_scale(
         state.epoch_scale.as_deref().unwrap_or("UTC"),
         &format!("{path}.state.epoch_scale"),
@@ -284,36 +290,53 @@ fn figure_axis(
     // The built-in leap-second table: the pole moves about 1e-11 rad a second, so a leap
     // second announced after this build would change the axis by far less than any term here.
     let table = LeapTable::builtin();
-    let tt = match &state.epoch {
-        Some(text) => {
-            let instant = parse_instant(text, InstantFormat::Iso, scale, table)
-                .map_err(|e| ApiError::from_time(&e, &field))?;
-            // A UT1 epoch through the built-in EOP table, for the same reason.
-            let context = ConversionContext::geocentric(table).with_ut1(EopTable::builtin());
-            Some(
-                convert(&instant, Scale::Tt, &context)
-                    .map_err(|e| ApiError::from_time(&e, &field))?,
-            )
-        }
-        None => None,
+    let Some(text) = &state.epoch else {
+        return Ok(None);
     };
-    if frame == Frame::Itrf || model == GravityModel::PointMass {
-        return Ok([0.0, 0.0, 1.0]);
-    }
-    let tt = tt.ok_or_else(|| {
+    let instant = parse_instant(text, InstantFormat::Iso, scale, table)
+        .map_err(|e| ApiError::from_time(&e, &field))?;
+    let context = ConversionContext::geocentric(table).with_ut1(eop);
+    convert(&instant, Scale::Tt, &context)
+        .map(Some)
+        .map_err(|e| ApiError::from_time(&e, &field))
+}
+
+/// The CIP at TT `tt` as a GCRS unit vector (IAU 2006/2000A, fast path).
+fn cip_at(tt: &Instant) -> [f64; 3] {
+    celestial_pole_fast(JulianDate::from_count_attos_since_j2000(tt.count_attos()))
+        .unit_vector_gcrs()
+}
+
+/// An ITRF state at TT `tt` in the GCRS, with the CIP there: the full IERS Conventions (2010)
+/// ch. 5 rotation with the EOP table in force (polar motion with s', UT1, precession-nutation
+/// with dX, dY) and its time derivative (see [`OrientationSpan`]). Outside the table a 422
+/// naming the epoch.
+fn itrf_into_gcrs(
+    vector: &StateVector,
+    tt: &Instant,
+    eop: &EopTable,
+    field: &str,
+) -> Result<(StateVector, [f64; 3]), ApiError> {
+    let span = OrientationSpan::new(tt.count_attos(), NODE_STEP_S, |tt_attos| {
+        eop_at_tt(eop, LeapTable::builtin(), tt_attos)
+    })
+    .map_err(|error| {
         ApiError::unprocessable(
-            "epoch_required",
-            format!(
-                "a GCRS state with the {} model needs its epoch: the field is taken about the Earth's true pole (the CIP), which is 0.15 deg from the GCRS z axis in 2026 and moves; give `epoch` (ISO 8601, in `epoch_scale`, default UTC)",
-                model.as_str()
-            ),
+            error.code(),
+            format!("{error}; an ITRF state with an epoch goes into the GCRS with the Earth orientation at that epoch, which the table in force must cover (without `epoch` the state is answered in its own frame)"),
         )
-        .with_field(field)
+        .with_field(field.to_string())
     })?;
-    Ok(
-        celestial_pole_fast(JulianDate::from_count_attos_since_j2000(tt.count_attos()))
-            .unit_vector_gcrs(),
-    )
+    let (position_m, velocity_m_s) =
+        span.itrs_to_gcrs(0.0, &vector.position_m, &vector.velocity_m_s);
+    Ok((
+        StateVector {
+            frame: Frame::Gcrs,
+            position_m,
+            velocity_m_s,
+        },
+        span.pole_gcrs(0.0),
+    ))
 }
 
 fn state_answer(
@@ -322,7 +345,8 @@ fn state_answer(
     model: GravityModel,
     path: &str,
     origins: &Origins<'_>,
-) -> Result<(RateParts, PeriodicAnswer), ApiError> {
+    eop: &EopTable,
+) -> Result<(RateParts, PeriodicAnswer, Option<&'static str>), ApiError> {
     let frame: Frame = parse_named(
         &state.frame,
         "unknown_frame",
@@ -334,15 +358,43 @@ fn state_answer(
         position_m: state.position_m,
         velocity_m_s: state.velocity_m_s,
     };
-    let axis = figure_axis(state, frame, model, path)?;
-    let rate =
-        state_rate_about_axis(&vector, reference, model, axis).map_err(|e| origins.error(e))?;
+    let tt = state_epoch_tt(state, path, eop)?;
+    let field = format!("{path}.state.epoch");
+    // The state is checked in its own frame first, so problems name its own fields.
+    let own = state_rate_about_axis(&vector, reference, model, [0.0, 0.0, 1.0])
+        .map_err(|e| origins.error(e))?;
+    let (rate, note) = match (frame, tt) {
+        (Frame::Itrf, Some(tt)) => {
+            let (inertial, axis) = itrf_into_gcrs(&vector, &tt, eop, &field)?;
+            let rate = state_rate_about_axis(&inertial, reference, model, axis)
+                .map_err(|e| origins.error(e))?;
+            (rate, Some(ITRF_EPOCH_NOTE))
+        }
+        (Frame::Itrf, None) => (own, Some(ITRF_WITHOUT_EPOCH_NOTE)),
+        (Frame::Gcrs, _) if model == GravityModel::PointMass => (own, None),
+        (Frame::Gcrs, Some(tt)) => (
+            state_rate_about_axis(&vector, reference, model, cip_at(&tt))
+                .map_err(|e| origins.error(e))?,
+            None,
+        ),
+        (Frame::Gcrs, None) => {
+            return Err(ApiError::unprocessable(
+                "epoch_required",
+                format!(
+                    "a GCRS state with the {} model needs its epoch: the field is taken about the Earth's true pole (the CIP), which is 0.15 deg from the GCRS z axis in 2026 and moves; give `epoch` (ISO 8601, in `epoch_scale`, default UTC)",
+                    model.as_str()
+                ),
+            )
+            .with_field(field))
+        }
+    };
     Ok((
         rate.parts,
         PeriodicAnswer {
             amplitude_s: rate.osculating_amplitude_s,
             value_at_state_s: Some(rate.periodic_value_s),
         },
+        note,
     ))
 }
 

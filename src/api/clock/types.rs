@@ -27,7 +27,11 @@ pub struct StateInput {
     pub velocity_m_s: [f64; 3],
     /// The state's epoch, ISO 8601 in `epoch_scale`. Required for a GCRS state with the `j2` or
     /// `grs80` model (their field is taken about the Celestial Intermediate Pole, which moves in
-    /// the GCRS: 422 `epoch_required` without it); accepted and unused otherwise.
+    /// the GCRS: 422 `epoch_required` without it). Optional for an ITRF state: with it the state
+    /// goes into the GCRS with the full Earth rotation at that epoch (polar motion, UT1,
+    /// precession-nutation, from the EOP table in force; 422 `eop_before_table` /
+    /// `eop_after_table` outside it) and the field is taken about the CIP; without it the ITRF z
+    /// axis and omega_E x r are used (a note states the neglect, up to 1.6e-16 in rate).
     #[schema(value_type = Option<InstantString>, example = "2026-05-20T00:00:00")]
     pub epoch: Option<String>,
     /// Scale of `epoch` (default UTC).

@@ -6,6 +6,7 @@ use super::body::{ephemeris_problem, ProperTimeRequest};
 use super::types::{ObjectOutput, ProperTimeAnswer, SampleOutput, SummaryOutput};
 use crate::api::error::ApiError;
 use crate::api::time::types::InstantForms;
+use crate::physics::earth::eop::EopTable;
 use crate::physics::earth::orientation::fast::celestial_pole_fast;
 use crate::physics::earth::orientation::JulianDate;
 use crate::physics::proper_time::{
@@ -37,15 +38,13 @@ fn model_notes(request: &ProperTimeRequest) -> Vec<String> {
     .collect()
 }
 
-/// The Earth's figure axis in a track's frame: the CIP at the track's middle epoch for inertial
-/// (GCRS) tracks, the z axis for Earth-fixed ones.
+/// The Earth's figure axis in the GCRS, where every track is integrated (Earth-fixed ones are
+/// rotated into it): the CIP at the track's middle epoch.
 fn figure_axis(track: &ObjectTrack, context: &ConversionContext<'_>) -> [f64; 3] {
-    match (track.frame, middle_tt_attos(track, context)) {
-        (Frame::Inertial, Some(tt_attos)) => {
-            celestial_pole_fast(JulianDate::from_count_attos_since_j2000(tt_attos))
-                .unit_vector_gcrs()
-        }
-        _ => [0.0, 0.0, 1.0],
+    match middle_tt_attos(track, context) {
+        Some(tt_attos) => celestial_pole_fast(JulianDate::from_count_attos_since_j2000(tt_attos))
+            .unit_vector_gcrs(),
+        None => [0.0, 0.0, 1.0],
     }
 }
 
@@ -124,6 +123,7 @@ fn object_output(
 pub fn compute(
     request: &ProperTimeRequest,
     table: &LeapTable,
+    eop: &EopTable,
 ) -> Result<ProperTimeAnswer, ApiError> {
     let context = ConversionContext::geocentric(table);
     let tracks = proper_time_of_ephemeris(
@@ -131,6 +131,7 @@ pub fn compute(
         &request.interpolation,
         &ProperTimeOptions::default(),
         &context,
+        eop,
         |track| {
             let axis = figure_axis(track, &context);
             inertial_rate_function_about_axis(RateReference::Tt, request.gravity_model, axis)

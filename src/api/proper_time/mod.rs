@@ -38,7 +38,7 @@ pub fn router() -> Router<AppState> {
         (status = 400, description = "The query string cannot be read (`invalid_query`: an unknown parameter or `format`, a wrong type), the body is not UTF-8 (`unreadable_body`), or a body sent as application/json is not the JSON ephemeris (`invalid_json`, `invalid_body`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 413, description = "Body above the configured limit (`body_too_large`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 415, description = "A Content-Type the endpoint does not read (`unsupported_media_type`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 422, description = "The ephemeris or an option cannot be used: `code` says why (a file that does not follow its format: unknown_ephemeris_format, json_invalid, the OEM and SP3 reader codes; unsupported_frame, unknown_scale, unsupported_time_scale (UT1), unknown_format, bad_epoch, mixed_velocity, not_finite, below_surface, beyond_model_range, speed_not_below_c, epochs_not_increasing, gap_too_long, too_few_states, sampling_too_coarse, bad_option, empty_batch, batch_too_large, unknown_reference, unknown_gravity_model, integration_failed); `line` (files), `object`, `index` and `field` say where", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 422, description = "The ephemeris or an option cannot be used: `code` says why (a file that does not follow its format: unknown_ephemeris_format, json_invalid, the OEM and SP3 reader codes; unsupported_frame, unknown_scale, unsupported_time_scale (UT1), unknown_format, bad_epoch, mixed_velocity, not_finite, below_surface, beyond_model_range, speed_not_below_c, epochs_not_increasing, gap_too_long, too_few_states, sampling_too_coarse, bad_option, empty_batch, batch_too_large, unknown_reference, unknown_gravity_model, integration_failed; for Earth-fixed tracks eop_before_table, eop_after_table: their epochs must lie inside the Earth orientation table in force); `line` (files), `object`, `index` and `field` say where", body = crate::api::error::Problem, content_type = "application/problem+json"),
         crate::api::error::TimeoutProblem))]
 pub async fn proper_time(
     State(state): State<AppState>,
@@ -55,10 +55,11 @@ pub async fn proper_time(
     })?;
     let csv = answer_type(&headers) == AnswerType::Csv;
     let table = state.leap_table();
+    let eop = state.eop_table();
     let settings = state.limits().clone();
     let work = move || -> Result<Response, ApiError> {
         let request = body::read_request(&headers, query, &body, &table, &settings)?;
-        let answer = answer::compute(&request, &table)?;
+        let answer = answer::compute(&request, &table, &eop)?;
         Ok(if csv {
             (
                 [

@@ -18,11 +18,11 @@
 //! unperturbed orbit around a point mass the residual is zero, so its RMS measures how far the
 //! trajectory departs from a Keplerian clock behaviour (J2, drag, manoeuvres, interpolation).
 //!
-//! Earth-fixed trajectories: a rotation about the z axis changes neither |r| nor z nor r.v, so
-//! a potential that depends on |r| and z (point mass, J2) and the periodic term are the same in
-//! the rotating and the inertial frame at the same instant; only the velocity must be made
-//! inertial: v_inertial = v_ecef + omega_E x r. [`EarthFixed`] does this, so no full
-//! ITRF-to-GCRS rotation (precession, nutation, polar motion) is needed for the clock rate.
+//! Earth-fixed trajectories: [`EarthFixed`] takes each ITRS state into the GCRS with the full
+//! IERS Conventions (2010) ch. 5 transformation at that epoch (precession-nutation, the Earth
+//! rotation angle from UT1, polar motion with s'), velocities with the rates of all three
+//! ([`crate::physics::earth::orientation::span`]), so the rate function sees an inertial state
+//! and takes the zonal field about the CIP as for GCRS trajectories.
 
 pub mod kepler;
 mod quadrature;
@@ -39,7 +39,8 @@ use std::fmt;
 
 use crate::physics::vocabulary::vocabulary;
 
-use crate::physics::constants::{EARTH_ROTATION_RAD_S, SPEED_OF_LIGHT_SQUARED_M2_S2};
+use crate::physics::constants::SPEED_OF_LIGHT_SQUARED_M2_S2;
+use crate::physics::earth::orientation::span::OrientationSpan;
 
 /// A trajectory: inertial-equivalent geocentric position (m) and velocity (m/s) at coordinate
 /// time `t_s` (seconds since the first output epoch).
@@ -58,33 +59,25 @@ where
 }
 
 /// The model note of [`EarthFixed`] trajectories.
-pub const EARTH_FIXED_NOTE: &str = "Earth-fixed tracks: inertial speed from v + omega_E x r with the nominal omega_E; precession, nutation and polar motion are neglected (they change neither |r|, z nor r.v to first order)";
+pub const EARTH_FIXED_NOTE: &str = "Earth-fixed tracks (SP3, ITRF OEM and JSON) go into the GCRS at every epoch with the IERS Conventions (2010) ch. 5 transformation (IAU 2006/2000A X, Y, s with dX, dY; the Earth rotation angle from UT1; polar motion with s'), parameters from the Earth orientation table in force; velocities are the time derivative of that rotation (Earth rotation rate with the length-of-day variation, and the precession-nutation and polar-motion rates); then the field is taken about the CIP as for GCRS tracks. Predicted table values are used as they are: a UT1 error only turns the orbit about the CIP (no change in rate), a polar-motion error of 50 mas tilts the figure axis by 2.4e-7 rad (below 1e-18 in rate); the sub-daily tidal EOP terms are not applied";
 
-/// An Earth-fixed trajectory seen with inertial-equivalent velocity.
+/// An Earth-fixed (ITRS) trajectory seen in the GCRS: each state goes through
+/// [`OrientationSpan::itrs_to_gcrs`] at its time (the span must start at the trajectory's
+/// `t_s = 0`).
 #[derive(Debug, Clone)]
-pub struct EarthFixed<T>(pub T);
-
-impl<T: Trajectory> Trajectory for EarthFixed<T> {
-    fn state_at(&self, t_s: f64) -> ([f64; 3], [f64; 3]) {
-        let (position_m, velocity_m_s) = self.0.state_at(t_s);
-        (
-            position_m,
-            inertial_velocity_m_s(&position_m, &velocity_m_s),
-        )
-    }
+pub struct EarthFixed<'a, T> {
+    /// The trajectory in the ITRS.
+    pub track: T,
+    /// The Earth's orientation over the trajectory's span.
+    pub orientation: &'a OrientationSpan,
 }
 
-/// Inertial velocity of a point given in an Earth-fixed frame: v + omega_E x r with
-/// omega_E = (0, 0, 7.292115e-5 rad/s) (IERS Conventions (2010) table 1.1; kinematics of a
-/// rotating frame). Inputs: position_m (m), velocity_ecef_m_s (m/s) in the Earth-fixed frame.
-/// Result: m/s, along the Earth-fixed axes at that instant. Polar motion and the variation of
-/// the rotation rate (below 1e-8 relative) are neglected.
-pub fn inertial_velocity_m_s(position_m: &[f64; 3], velocity_ecef_m_s: &[f64; 3]) -> [f64; 3] {
-    [
-        velocity_ecef_m_s[0] - EARTH_ROTATION_RAD_S * position_m[1],
-        velocity_ecef_m_s[1] + EARTH_ROTATION_RAD_S * position_m[0],
-        velocity_ecef_m_s[2],
-    ]
+impl<T: Trajectory> Trajectory for EarthFixed<'_, T> {
+    fn state_at(&self, t_s: f64) -> ([f64; 3], [f64; 3]) {
+        let (position_m, velocity_m_s) = self.track.state_at(t_s);
+        self.orientation
+            .itrs_to_gcrs(t_s, &position_m, &velocity_m_s)
+    }
 }
 
 /// Settings of the integration.

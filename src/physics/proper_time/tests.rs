@@ -128,11 +128,27 @@ fn summary_of_a_keplerian_orbit() {
 }
 
 #[test]
-fn earth_fixed_velocity_adds_rotation() {
-    // omega x r for r on the x axis is (0, omega |r|, 0) (rotating-frame kinematics; omega_E
-    // from IERS Conventions (2010) table 1.1).
-    let v = inertial_velocity_m_s(&[7.0e6, 0.0, 1.0e6], &[0.0, 0.0, 0.0]);
-    assert_eq!(v, [0.0, 7.0e6 * 7.292_115e-5, 0.0]);
+fn earth_fixed_point_turns_with_the_earth() {
+    // A point at rest in the ITRS, 7000 km from the axis, with the pole at the ITRS z axis
+    // (x_p = y_p = 0): its GCRS speed is d(ERA)/dt x 7000 km (IERS Conventions (2010)
+    // eq. 5.15), to the precession-nutation rate (below 1e-10 m/s per m, 2e-7 relative).
+    use crate::physics::earth::orientation::rotation::EARTH_ROTATION_RATE_RAD_S;
+    use crate::physics::earth::orientation::span::{EopAtEpoch, OrientationSpan};
+    let span = OrientationSpan::new(832_593_600 * 1_000_000_000_000_000_000, 600.0, |_| {
+        Ok::<_, ()>(EopAtEpoch::default())
+    })
+    .unwrap();
+    let fixed = EarthFixed {
+        track: |_: f64| ([7.0e6, 0.0, 1.0e6], [0.0; 3]),
+        orientation: &span,
+    };
+    let (position_m, velocity_m_s) = fixed.state_at(100.0);
+    let speed = norm(&velocity_m_s);
+    assert!(
+        (speed / (EARTH_ROTATION_RATE_RAD_S * 7.0e6) - 1.0).abs() < 1e-6,
+        "{speed}"
+    );
+    assert!((norm(&position_m) - (5.0e13f64).sqrt()).abs() < 1e-6);
 }
 
 #[test]

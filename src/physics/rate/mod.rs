@@ -135,7 +135,7 @@ pub const INERTIAL_J2_NOTE: &str = "J2 potential with the IERS Conventions (2010
 pub const INERTIAL_GRS80_NOTE: &str = "GRS80 normal field in closed form (every zonal term of the level ellipsoid; Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)) with the GRS80 GM 3.986005e14, 1.5e-9 above the IERS Conventions (2010) GM (about 1e-16 of rate near the Earth)";
 
 /// The model note of the pole of the zonal fields for tracks (J2 and GRS80).
-pub const TRACK_POLE_NOTE: &str = "for inertial (GCRS) tracks the zonal field is taken about the Celestial Intermediate Pole at the track's middle epoch (IAU 2006/2000A, IERS Conventions (2010) ch. 5; without dX, dY), about 0.15 deg from the GCRS z axis in 2026; its motion over a track of days changes the rate by below 1e-18; Earth-fixed tracks use the ITRF z axis (polar motion, below 1e-6 rad, is not applied)";
+pub const TRACK_POLE_NOTE: &str = "the zonal field is taken about the Celestial Intermediate Pole at the track's middle epoch (IAU 2006/2000A, IERS Conventions (2010) ch. 5; without dX, dY), about 0.15 deg from the GCRS z axis in 2026, for GCRS tracks and for Earth-fixed tracks after their rotation into the GCRS (which brings polar motion in); its motion over a track of days changes the rate by below 1e-18";
 
 /// The model note of an inertial rate with `model`, if it has one (J2 or GRS80).
 pub fn inertial_model_note(model: GravityModel) -> Option<&'static str> {

@@ -64,10 +64,16 @@ pub const STATE_NOTES: [&str; 2] = [
     "periodic.value_at_state_s = -2 (r . v)/c^2 (IS-GPS-200 20.3.3.3.3.1); periodic.amplitude_s is that of the osculating point-mass Keplerian orbit (IERS Conventions (2010) GM), absent when the state is not on a closed orbit above the Earth",
 ];
 /// The model note of [`state_rate`] with [`GravityModel::J2`].
-pub const STATE_J2_NOTE: &str = "J2 about the Earth's figure axis: the ITRF z axis (polar motion, below 1e-6 rad, not applied), or for GCRS the Celestial Intermediate Pole at the state's epoch (IAU 2006/2000A, IERS Conventions (2010) ch. 5, without dX, dY)";
+pub const STATE_J2_NOTE: &str = "J2 about the Earth's figure axis: the Celestial Intermediate Pole at the state's epoch (IAU 2006/2000A, IERS Conventions (2010) ch. 5) for GCRS states and ITRF states with an epoch, the ITRF z axis for ITRF states without one";
+
+/// The model note of an ITRF state given with its epoch.
+pub const ITRF_EPOCH_NOTE: &str = "ITRF state with its epoch: taken into the GCRS with the IERS Conventions (2010) ch. 5 transformation at that epoch (IAU 2006/2000A with dX, dY; Earth rotation angle from UT1; polar motion with s'; EOP from the table in force), velocity with the rotation's rates (length of day, precession-nutation, polar motion); the zonal field about the CIP there";
+
+/// The model note of an ITRF state given without an epoch.
+pub const ITRF_WITHOUT_EPOCH_NOTE: &str = "ITRF state without an epoch: inertial velocity v + omega_E x r with the nominal omega_E about the ITRF z axis, and the zonal field about that axis; polar motion (the true pole is up to 2.5e-6 rad from the z axis), the length-of-day variation and the precession-nutation rate are neglected, up to about 1.6e-16 in rate; give `epoch` to apply them";
 
 /// The model note of [`state_rate`] with [`GravityModel::Grs80`].
-pub const STATE_GRS80_NOTE: &str = "GRS80 normal field in closed form about the Earth's figure axis (Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)), with no disturbing potential and the GRS80 GM 3.986005e14 (1.5e-9 above the IERS Conventions (2010) GM, about 1e-16 of rate near the Earth): a state at rest on the ellipsoid gets (W0 - U0)/c^2 = -5.4e-17 where a ground_site (taken on the geoid) gets 0; the axis is that of j2 (ITRF z axis, or the CIP at the state's epoch for GCRS)";
+pub const STATE_GRS80_NOTE: &str = "GRS80 normal field in closed form about the Earth's figure axis (Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)), with no disturbing potential and the GRS80 GM 3.986005e14 (1.5e-9 above the IERS Conventions (2010) GM, about 1e-16 of rate near the Earth): a state at rest on the ellipsoid gets (W0 - U0)/c^2 = -5.4e-17 where a ground_site (taken on the geoid) gets 0; the axis is that of j2 (the CIP at the state's epoch for GCRS states and ITRF states with an epoch, the ITRF z axis for ITRF states without one)";
 
 /// Instantaneous fractional rate of a clock at a geocentric state (first post-Newtonian order).
 ///

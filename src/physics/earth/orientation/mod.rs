@@ -21,6 +21,7 @@ pub mod pole;
 pub mod precession;
 pub mod rotation;
 mod series_data;
+pub mod span;
 mod value;
 
 #[cfg(test)]
