@@ -6,6 +6,7 @@ pub mod compare;
 pub mod evaluate;
 pub mod notes;
 pub mod rate;
+pub mod tides;
 pub mod types;
 
 use axum::routing::post;

@@ -7,6 +7,7 @@ use crate::physics::rate::ground::{ground_height_note, GROUND_NOTE};
 use crate::physics::rate::lunar::{LUNAR_EARTH_J2_NOTE, LUNAR_NOTES};
 use crate::physics::rate::orbit::ORBIT_NOTES;
 use crate::physics::rate::state::{STATE_GRS80_NOTE, STATE_J2_NOTE, STATE_NOTES};
+use crate::physics::rate::state_tides::{STATE_NO_TIDES_NOTE, STATE_TIDES_NOTE};
 use crate::physics::rate::{HeightReference, FIRST_ORDER_NOTE};
 
 pub use crate::physics::rate::orbit::ORBIT_GRS80_NOT_APPLIED_NOTE as ORBIT_REQUEST_GRS80;
@@ -22,11 +23,18 @@ pub fn state(model: GravityModel) -> Vec<String> {
         GravityModel::PointMass => None,
         GravityModel::J2 => Some(STATE_J2_NOTE),
         GravityModel::Grs80 => Some(STATE_GRS80_NOTE),
+        GravityModel::J2SunMoon => Some(STATE_J2_NOTE),
+    };
+    let tides = if model == GravityModel::J2SunMoon {
+        STATE_TIDES_NOTE
+    } else {
+        STATE_NO_TIDES_NOTE
     };
     owned(
         std::iter::once(FIRST_ORDER_NOTE)
             .chain(STATE_NOTES)
-            .chain(j2),
+            .chain(j2)
+            .chain([tides]),
     )
 }
 
