@@ -129,3 +129,22 @@ async fn tides_without_a_usable_epoch_are_refused() {
     let problem = assert_problem(&answer, 422, "beyond_model_range");
     assert_eq!(problem["field"], "items[0].gravity_model");
 }
+
+/// A request-level j2_sun_moon does not reach an orbit (no epoch): point_mass, and the answer
+/// says so (the request-level rule of the other zonal models; common practice).
+#[tokio::test]
+async fn a_request_level_tide_model_is_named_as_not_applied_to_orbits() {
+    let server = TestServer::start().await;
+    let request = json!({"gravity_model": "j2_sun_moon",
+        "items": [{"orbit": {"semi_major_axis_m": 26_561_750.0, "eccentricity": 0.01}}]});
+    let (status, _, body) = post_json(&server, "/v1/clock/rate", &request).await;
+    assert_eq!(status, 200, "{body}");
+    let result = &body["results"][0];
+    assert_eq!(result["gravity_model"], "point_mass", "{result}");
+    assert!(
+        result["model_notes"]
+            .to_string()
+            .contains("j2_sun_moon does not apply"),
+        "{result}"
+    );
+}

@@ -227,6 +227,10 @@ pub fn evaluate_item(
                     notes.push(notes::ORBIT_REQUEST_GRS80.to_string());
                     GravityModel::PointMass
                 }
+                (None, Some(GravityModel::J2SunMoon)) => {
+                    notes.push(notes::ORBIT_REQUEST_TIDES.to_string());
+                    GravityModel::PointMass
+                }
                 _ => GravityModel::PointMass,
             };
             let (parts, periodic, inclination) =

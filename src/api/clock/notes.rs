@@ -13,6 +13,9 @@ use crate::physics::rate::{HeightReference, FIRST_ORDER_NOTE};
 pub use crate::physics::rate::orbit::ORBIT_GRS80_NOT_APPLIED_NOTE as ORBIT_REQUEST_GRS80;
 pub use crate::physics::rate::orbit::ORBIT_J2_NOT_APPLIED_NOTE as ORBIT_REQUEST_J2;
 
+/// The note of an orbit under a request-level `j2_sun_moon`.
+pub const ORBIT_REQUEST_TIDES: &str = "the request-level gravity_model j2_sun_moon does not apply to orbit mean rates (an orbit has no epoch for the Sun and the Moon); point_mass used: give a state vector with its epoch for the tides";
+
 fn owned<'a>(notes: impl IntoIterator<Item = &'a str>) -> Vec<String> {
     notes.into_iter().map(String::from).collect()
 }
