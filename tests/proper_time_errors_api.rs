@@ -260,7 +260,7 @@ async fn an_option_out_of_range_is_refused_even_when_the_other_source_wins() {
         assert_eq!(body["field"], field, "{query} with {options}: {body}");
     }
     // The body's value is out of range, the query's is fine: the body's field is named.
-    let cases: [(&str, Value, &str, &str); 5] = [
+    let cases: [(&str, Value, &str, &str); 6] = [
         (
             "?interpolation_points=4",
             json!({"interpolation_points": 67853}),
@@ -290,6 +290,14 @@ async fn an_option_out_of_range_is_refused_even_when_the_other_source_wins() {
             json!({"reference": "TAI"}),
             "unknown_reference",
             "options.reference",
+        ),
+        // The Sun and Moon tides are not yet in the proper-time integrators: refused, not
+        // silently left out.
+        (
+            "?gravity_model=j2",
+            json!({"gravity_model": "j2_sun_moon"}),
+            "unsupported_gravity_model",
+            "options.gravity_model",
         ),
     ];
     for (query, options, code, field) in cases {

@@ -199,7 +199,7 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     ),
     (
         "unknown_gravity_model",
-        "The gravity model is not `point_mass`, `j2` or `grs80`.",
+        "The gravity model is not `point_mass`, `j2`, `grs80` or `j2_sun_moon`.",
     ),
     (
         RateErrorKind::UnsupportedGravityModel.as_str(),

@@ -119,16 +119,22 @@ vocabulary! {
         /// every zonal term (Heiskanen & Moritz 1967 eq. 2-126; Moritz 2000), the default for
         /// ground sites.
         Grs80 = "grs80",
+        /// The J2 Earth plus the tidal potentials of the Sun and the Moon at the clock, from
+        /// the planetary ephemeris at the epoch (IAU 2000 Resolution B1.3; IERS Conventions
+        /// (2010) eq. 10.6): needs the epoch; the default for states with an epoch.
+        J2SunMoon = "j2_sun_moon",
     }
 }
 
-/// The Earth's Newtonian potential U(x) for the chosen model (m^2/s^2). For
+/// The Earth's Newtonian potential U(x) for the chosen model (m^2/s^2); for
+/// [`GravityModel::J2SunMoon`] the Earth's part only (J2): the tides need the epoch and are
+/// added by the callers that have it (`rate::state_rate_with_tides`). For
 /// [`GravityModel::Grs80`] the attraction of the GRS80 level ellipsoid, V = U_normal - Phi
 /// (no disturbing potential: T = 0); `position_m` has the Earth's axis as z, as for J2.
 pub fn earth_potential_m2_s2(model: GravityModel, position_m: [f64; 3]) -> Result<f64, RateError> {
     match model {
         GravityModel::PointMass => earth_point_mass_potential_m2_s2(position_m),
-        GravityModel::J2 => earth_j2_potential_m2_s2(position_m),
+        GravityModel::J2 | GravityModel::J2SunMoon => earth_j2_potential_m2_s2(position_m),
         GravityModel::Grs80 => {
             distance_m("position_m", position_m)?;
             grs80_normal_gravitational_potential_m2_s2(position_m)

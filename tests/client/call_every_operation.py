@@ -268,6 +268,28 @@ def rate(api, m, document):
     near(orbit.fractional.total, 4.4647e-10, 1e-14, "IS-GPS-200 3.3.1.1 offset")
     # A clock on the geoid keeps TT (IAU 2000 B1.9: TT is defined through W0 on the geoid).
     near(ground.fractional.total, 0.0, 1e-18, "geoid clock against TT")
+    # An invented GEO clock with its epoch: the default model is j2_sun_moon (J2 + the Sun and
+    # Moon tides); its rate differs from the j2 rate by the tide, at most the closed-form bound
+    # at GEO of 3.25e-15 (the tides tests) and not zero.
+    def geo(model):
+        item = {
+            "state": {
+                "frame": "GCRS",
+                "position_m": [30_000_000.0, 29_600_000.0, 0.0],
+                "velocity_m_s": [-2_150.0, 2_180.0, 0.0],
+                "epoch": "2026-03-20T06:30:00",
+                "epoch_scale": "TT",
+            }
+        }
+        if model is not None:
+            item["gravity_model"] = model
+        return item
+
+    tides_body = m.RateRequest.from_dict({"items": [geo(None), geo("j2")]})
+    with_tides, j2_only = expect(api.call("rate", body=tides_body), 200).results
+    assert with_tides.gravity_model == "j2_sun_moon", with_tides.gravity_model
+    tide = with_tides.fractional.total - j2_only.fractional.total
+    assert 1e-17 < abs(tide) <= 3.25e-15, tide
 
 
 @operation("compare")

@@ -4,6 +4,7 @@
 use super::answer::{FrequencyAnswer, PeriodicAnswer, RateAnswer, RateSplit};
 use super::notes;
 use super::orbit_item::{orbit_answer, Origins};
+use super::tides;
 use super::types::{GroundSiteInput, LunarSiteInput, OrbitInput, RateItem, StateInput};
 use crate::api::error::ApiError;
 use crate::api::names::{parse_named, parse_scale};
@@ -14,10 +15,12 @@ use crate::physics::earth::orientation::span::{OrientationSpan, NODE_STEP_S};
 use crate::physics::earth::orientation::JulianDate;
 use crate::physics::rate::state::state_rate_about_axis;
 use crate::physics::rate::state::{ITRF_EPOCH_NOTE, ITRF_WITHOUT_EPOCH_NOTE};
+use crate::physics::rate::state_rate_with_tides;
 use crate::physics::rate::{
     frequency_offset, ground_site_rate, lunar_site_rate, Frame, GravityModel, GroundSite,
     HeightReference, LunarSite, RateParts, RateReference, StateVector,
 };
+use crate::physics::solar_system::Ephemeris;
 use crate::physics::time::convert::{convert, ConversionContext};
 use crate::physics::time::formats::{parse_instant, InstantFormat};
 use crate::physics::time::instant::Instant;
@@ -148,12 +151,14 @@ fn setting_field(path: &str, name: &str, given_on_item: bool) -> String {
 }
 
 /// Evaluates one item at JSON path `path` (e.g. `items[3]` or `clock_a`).
-/// `eop` is the Earth orientation table in force (UT1 epochs, ITRF states with an epoch).
+/// `eop` is the Earth orientation table in force (UT1 epochs, ITRF states with an epoch),
+/// `ephemeris` the planetary ephemeris in force (the Sun and Moon tides of states).
 pub fn evaluate_item(
     item: &RateItem,
     defaults: &Defaults,
     path: &str,
     eop: &EopTable,
+    ephemeris: &Ephemeris,
 ) -> Result<Evaluated, ApiError> {
     let subject = subject_of(item, path)?;
     let reference = match &item.reference {
@@ -180,9 +185,14 @@ pub fn evaluate_item(
     let mut j2_answer = None;
     let (parts, model_label, periodic, inclination_deg) = match subject {
         Subject::State(state) => {
-            let model = requested_model.unwrap_or(GravityModel::PointMass);
+            // The most complete model the inputs allow: with an epoch the Sun and Moon tides.
+            let model = requested_model.unwrap_or(if state.epoch.is_some() {
+                GravityModel::J2SunMoon
+            } else {
+                GravityModel::PointMass
+            });
             let (parts, periodic, frame_note) =
-                state_answer(state, reference, model, path, &origins, eop)?;
+                state_answer(state, reference, model, path, &origins, (eop, ephemeris))?;
             notes.extend(notes::state(model));
             notes.extend(frame_note.map(String::from));
             (parts, model.as_str(), Some(periodic), None)
@@ -196,6 +206,10 @@ pub fn evaluate_item(
                 }
                 (None, Some(GravityModel::Grs80)) => {
                     notes.push(notes::ORBIT_REQUEST_GRS80.to_string());
+                    GravityModel::PointMass
+                }
+                (None, Some(GravityModel::J2SunMoon)) => {
+                    notes.push(notes::ORBIT_REQUEST_TIDES.to_string());
                     GravityModel::PointMass
                 }
                 _ => GravityModel::PointMass,
@@ -331,7 +345,7 @@ fn state_answer(
     model: GravityModel,
     path: &str,
     origins: &Origins<'_>,
-    eop: &EopTable,
+    (eop, ephemeris): (&EopTable, &Ephemeris),
 ) -> Result<(RateParts, PeriodicAnswer, Option<&'static str>), ApiError> {
     let frame: Frame = parse_named(
         &state.frame,
@@ -349,20 +363,31 @@ fn state_answer(
     // The state is checked in its own frame first, so problems name its own fields.
     let own = state_rate_about_axis(&vector, reference, model, [0.0, 0.0, 1.0])
         .map_err(|e| origins.error(e))?;
+    let tides = model == GravityModel::J2SunMoon;
+    // The rate of a GCRS state about `axis`, with the tides at `tt` for j2_sun_moon.
+    let gcrs_rate = |gcrs: &StateVector, axis: [f64; 3], tt: &Instant| {
+        if tides {
+            let bodies = tides::bodies_at_tt(tt, ephemeris, &field)?;
+            state_rate_with_tides(gcrs, reference, axis, &bodies).map_err(|e| origins.error(e))
+        } else {
+            state_rate_about_axis(gcrs, reference, model, axis).map_err(|e| origins.error(e))
+        }
+    };
     let (rate, note) = match (frame, tt) {
         (Frame::Itrf, Some(tt)) => {
             let (inertial, axis) = itrf_into_gcrs(&vector, &tt, eop, &field)?;
-            let rate = state_rate_about_axis(&inertial, reference, model, axis)
-                .map_err(|e| origins.error(e))?;
-            (rate, Some(ITRF_EPOCH_NOTE))
+            (gcrs_rate(&inertial, axis, &tt)?, Some(ITRF_EPOCH_NOTE))
+        }
+        (_, None) if tides => {
+            return Err(ApiError::unprocessable(
+                "epoch_required",
+                "a state with the j2_sun_moon model needs its epoch: the Sun and the Moon move (their tides change the rate by up to 3e-15 within hours); give `epoch` (ISO 8601, in `epoch_scale`, default UTC) or another gravity_model",
+            )
+            .with_field(field))
         }
         (Frame::Itrf, None) => (own, Some(ITRF_WITHOUT_EPOCH_NOTE)),
         (Frame::Gcrs, _) if model == GravityModel::PointMass => (own, None),
-        (Frame::Gcrs, Some(tt)) => (
-            state_rate_about_axis(&vector, reference, model, cip_at(&tt))
-                .map_err(|e| origins.error(e))?,
-            None,
-        ),
+        (Frame::Gcrs, Some(tt)) => (gcrs_rate(&vector, cip_at(&tt), &tt)?, None),
         (Frame::Gcrs, None) => {
             return Err(ApiError::unprocessable(
                 "epoch_required",

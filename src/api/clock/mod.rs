@@ -7,6 +7,7 @@ pub mod evaluate;
 pub mod notes;
 mod orbit_item;
 pub mod rate;
+pub mod tides;
 pub mod types;
 
 use axum::routing::post;

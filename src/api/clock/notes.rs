@@ -7,10 +7,14 @@ use crate::physics::rate::ground::{ground_height_note, GROUND_NOTE};
 use crate::physics::rate::lunar::{LUNAR_EARTH_J2_NOTE, LUNAR_NOTES};
 use crate::physics::rate::orbit::ORBIT_NOTES;
 use crate::physics::rate::state::{STATE_GRS80_NOTE, STATE_J2_NOTE, STATE_NOTES};
+use crate::physics::rate::state_tides::{STATE_NO_TIDES_NOTE, STATE_TIDES_NOTE};
 use crate::physics::rate::{HeightReference, FIRST_ORDER_NOTE};
 
 pub use crate::physics::rate::orbit::ORBIT_GRS80_NOT_APPLIED_NOTE as ORBIT_REQUEST_GRS80;
 pub use crate::physics::rate::orbit::ORBIT_J2_NOT_APPLIED_NOTE as ORBIT_REQUEST_J2;
+
+/// The note of an orbit under a request-level `j2_sun_moon`.
+pub const ORBIT_REQUEST_TIDES: &str = "the request-level gravity_model j2_sun_moon does not apply to orbit mean rates (an orbit has no epoch for the Sun and the Moon); point_mass used: give a state vector with its epoch for the tides";
 
 fn owned<'a>(notes: impl IntoIterator<Item = &'a str>) -> Vec<String> {
     notes.into_iter().map(String::from).collect()
@@ -22,11 +26,18 @@ pub fn state(model: GravityModel) -> Vec<String> {
         GravityModel::PointMass => None,
         GravityModel::J2 => Some(STATE_J2_NOTE),
         GravityModel::Grs80 => Some(STATE_GRS80_NOTE),
+        GravityModel::J2SunMoon => Some(STATE_J2_NOTE),
+    };
+    let tides = if model == GravityModel::J2SunMoon {
+        STATE_TIDES_NOTE
+    } else {
+        STATE_NO_TIDES_NOTE
     };
     owned(
         std::iter::once(FIRST_ORDER_NOTE)
             .chain(STATE_NOTES)
-            .chain(j2),
+            .chain(j2)
+            .chain([tides]),
     )
 }
 

@@ -18,7 +18,7 @@ use crate::api::state::AppState;
     responses(
         (status = 200, description = "One answer per item, in order", body = RateBatchAnswer),
         JsonBodyProblems,
-        (status = 422, description = "A value cannot be used; `field` names it (e.g. `items[3].orbit.eccentricity`) and `code` says why: epoch_required (a GCRS state with a zonal model and no epoch; the epoch's own codes malformed_instant, impossible_date, unknown_scale; for an ITRF state with an epoch eop_before_table, eop_after_table: the epoch must lie inside the Earth orientation table in force), subject_missing, subject_ambiguous, unknown_reference, unknown_gravity_model, unknown_frame, unknown_height_reference, anomaly_ambiguous, empty_batch, batch_too_large, not_finite, speed_not_below_c, below_surface, beyond_model_range, invalid_semi_major_axis, invalid_eccentricity, latitude_out_of_range, angle_out_of_range, unsupported_gravity_model, input_required, invalid_frequency, rate_out_of_range", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it (e.g. `items[3].orbit.eccentricity`) and `code` says why: epoch_required (a GCRS state with a zonal model and no epoch, any state with the Sun and Moon tide model and no epoch; outside_ephemeris_span for that model at an epoch outside the planetary ephemeris; the epoch's own codes malformed_instant, impossible_date, unknown_scale; for an ITRF state with an epoch eop_before_table, eop_after_table: the epoch must lie inside the Earth orientation table in force), subject_missing, subject_ambiguous, unknown_reference, unknown_gravity_model, unknown_frame, unknown_height_reference, anomaly_ambiguous, empty_batch, batch_too_large, not_finite, speed_not_below_c, below_surface, beyond_model_range, invalid_semi_major_axis, invalid_eccentricity, latitude_out_of_range, angle_out_of_range, unsupported_gravity_model, input_required, invalid_frequency, rate_out_of_range", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn rate(
     State(state): State<AppState>,
@@ -37,14 +37,21 @@ pub async fn rate(
     )?;
     let items = request.items.len();
     let eop = state.eop_table();
+    let ephemeris = state.ephemeris();
     let work = move || {
         request
             .items
             .iter()
             .enumerate()
             .map(|(index, item)| {
-                evaluate_item(item, &defaults, &format!("items[{index}]"), &eop)
-                    .map(|evaluated| evaluated.answer)
+                evaluate_item(
+                    item,
+                    &defaults,
+                    &format!("items[{index}]"),
+                    &eop,
+                    &ephemeris,
+                )
+                .map(|evaluated| evaluated.answer)
             })
             .collect::<Result<Vec<_>, _>>()
     };

@@ -75,7 +75,7 @@ pub struct ProperTimeBodyOptions {
     /// Coordinate time the clock is compared with: `TT` (default) or `TCG`.
     #[schema(value_type = Option<ReferenceName>)]
     pub reference: Option<String>,
-    /// Earth potential: `point_mass` (default), `j2` or `grs80`.
+    /// Earth potential: `point_mass` (default), `j2` or `grs80` (not yet `j2_sun_moon`).
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
     /// Output step, seconds of TT, from 0.001 to 315 537 897 600.

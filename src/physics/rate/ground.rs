@@ -4,7 +4,7 @@ use crate::physics::constants::{EARTH_ROTATION_RAD_S, L_G, SPEED_OF_LIGHT_SQUARE
 use crate::physics::earth::normal_field::grs80_normal_potential_drop_at_m2_s2;
 use crate::physics::geodesy::geodetic_to_ecef_m;
 use crate::physics::gravity::{centrifugal_potential_m2_s2, earth_potential_m2_s2, GravityModel};
-use crate::physics::rate::error::RateError;
+use crate::physics::rate::error::{RateError, RateErrorKind};
 use crate::physics::rate::{RateParts, RateReference};
 use crate::physics::vocabulary::vocabulary;
 
@@ -60,6 +60,7 @@ pub fn ground_height_note(height_reference: HeightReference, model: GravityModel
         (HeightReference::Geoid, _) => "height above the geoid: W0 - W from GRS80 normal gravity (Heiskanen & Moritz (1967) eq. 2-215), so a clock on the geoid has rate 0 against TT; gravity_model is not used",
         (HeightReference::Ellipsoid, GravityModel::Grs80) => "height above the GRS80 ellipsoid with the GRS80 normal field in closed form (Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)): W0 - W = U0 - U(x), the ellipsoid taken as the geoid (undulation N = 0), so a site on the ellipsoid has rate 0 against TT and the answer equals height_reference geoid at the same height; the real N, up to about +-100 m (about +-1.1e-14 per 100 m), is not in the model: give height_reference geoid with the orthometric height for 1e-16 work. A normal field with no disturbing potential instead (T = 0) would add (W0 - U0)/c^2 = (62 636 856.0 - 62 636 860.850)/c^2 = -5.4e-17 (IERS Conventions (2010) table 1.1 W0; Moritz (2000) U0); TT's L_G c^2 = 62 636 856.0 m^2/s^2 is itself about 2.6 m^2/s^2 (2.9e-17) above the present best geoid potential 62 636 853.4 (IAG 2015 Resolution 1; from memory)",
         (HeightReference::Ellipsoid, GravityModel::J2) => "height above the GRS80 ellipsoid with a J2 Earth: within 1.8e-15 of W0 on the ellipsoid (the truncated J4 term); grs80 (the default for ground sites) is the exact normal field; the geoid undulation (up to about +-100 m, +-1.1e-14) is in neither model: give height_reference geoid for 1e-16 work",
+        (HeightReference::Ellipsoid, GravityModel::J2SunMoon) => "j2_sun_moon needs an epoch, which a ground site does not have: refused (give an ITRF state with its epoch for the Sun and Moon tides)",
         (HeightReference::Ellipsoid, GravityModel::PointMass) => "height above the GRS80 ellipsoid with a point-mass Earth: ignores the Earth's flattening, off by up to about 7e-13 on the ground; grs80 (the default for ground sites) is exact for the normal field",
     }
 }
@@ -97,6 +98,13 @@ pub fn ground_site_rate(
     reference: RateReference,
     model: GravityModel,
 ) -> Result<RateParts, RateError> {
+    if model == GravityModel::J2SunMoon {
+        return Err(RateError::new(
+            "gravity_model",
+            "j2_sun_moon needs the clock's epoch (the Sun and the Moon move), which a ground site does not have: give an ITRF state with `epoch` for the tides, or grs80, j2 or point_mass here",
+        )
+        .with_kind(RateErrorKind::BeyondModelRange));
+    }
     let height_m = match site.height {
         GroundHeight::EllipsoidalM(height_m) | GroundHeight::AboveGeoidM(height_m) => height_m,
     };
@@ -104,9 +112,10 @@ pub fn ground_site_rate(
     let centrifugal_m2_s2 = centrifugal_potential_m2_s2(position_m)?;
     let speed_squared_m2_s2 = 2.0 * centrifugal_m2_s2;
     let potential_m2_s2 = match (site.height, model) {
-        (GroundHeight::EllipsoidalM(_), GravityModel::PointMass | GravityModel::J2) => {
-            earth_potential_m2_s2(model, position_m)?
-        }
+        (
+            GroundHeight::EllipsoidalM(_),
+            GravityModel::PointMass | GravityModel::J2 | GravityModel::J2SunMoon,
+        ) => earth_potential_m2_s2(model, position_m)?,
         (GroundHeight::EllipsoidalM(_), GravityModel::Grs80)
         | (GroundHeight::AboveGeoidM(_), _) => {
             let w0_m2_s2 = L_G * SPEED_OF_LIGHT_SQUARED_M2_S2;

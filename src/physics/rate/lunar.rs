@@ -71,7 +71,7 @@ pub fn lunar_site_geocentric_state(site: &LunarSite) -> Result<([f64; 3], [f64; 
 /// The model notes of [`lunar_site_rate`].
 pub const LUNAR_NOTES: [&str; 2] = [
     "mean rate in the geocentric frame: the Moon on a circular orbit of 384 400 km at the two-body speed, rotating synchronously; the monthly periodic term of the lunar eccentricity (about 0.47 us amplitude) is not included",
-    "the Moon's own potential as a point mass (GM of JPL DE430) through its geocentric tidal part; the Sun's tidal potential (about 0.001 to 0.004 us/day), the lunar J2 (about 6e-15), librations and the tilts of the lunar axis and orbit are neglected",
+    "the Moon's own potential as a point mass (GM of JPL DE430) through its geocentric tidal part; the Sun's tidal potential (GM_Sun D^2/d^3 P2 with D the Earth-Moon distance: a mean of +1.6e-14, 0.0014 us/day, varying over a month between about -3.3e-14 and +6.5e-14, -0.003 to +0.006 us/day), the lunar J2 (about 6e-15), librations and the tilts of the lunar axis and orbit are neglected",
 ];
 /// The model note of [`lunar_site_rate`] when J2 was asked for: the Earth is a point mass there.
 pub const LUNAR_EARTH_J2_NOTE: &str = "the Earth's J2 (or GRS80 normal field) changes the potential at the Moon by less than 1 m^2/s^2 (below 1e-17 of rate): a point-mass Earth is used";
@@ -94,8 +94,9 @@ pub const LUNAR_EARTH_J2_NOTE: &str = "the Earth's J2 (or GRS80 normal field) ch
 ///   about 6e-15 of rate) minus 2 GM_M/D for the geocentre's share (about 2.8e-13, 0.025
 ///   us/day).
 ///
-/// Neglected: the Sun's tidal potential in the geocentric frame (mean about +1.6e-14 and a
-/// monthly term of a few 1e-14, i.e. about 0.001-0.004 us/day) and the solar perturbation of
+/// Neglected: the Sun's tidal potential in the geocentric frame (GM_Sun D^2/d^3 P2(cos theta):
+/// mean +1.6e-14, between about -3.3e-14 and +6.5e-14 over a month, i.e. -0.003 to +0.006
+/// us/day) and the solar perturbation of
 /// the lunar orbit; the tilts of the lunar spin axis (1.5 deg) and orbit (5.1 deg); librations.
 ///
 /// Reference: IERS Conventions (2010) ch. 10 eq. 10.6; Ashby & Patla (2024), Astron. J. 168,

@@ -35,6 +35,7 @@ pub mod lunar;
 pub mod orbit;
 pub mod profile;
 pub mod state;
+pub mod state_tides;
 
 #[cfg(test)]
 mod robustness_tests;
@@ -46,6 +47,7 @@ pub use ground::{ground_site_rate, GroundHeight, GroundSite, HeightReference};
 pub use lunar::{lunar_site_rate, LunarSite};
 pub use orbit::{orbit_rate, Anomaly, KeplerianOrbit, OrbitRate, PeriodicTerm};
 pub use state::{state_rate, Frame, StateRate, StateVector};
+pub use state_tides::state_rate_with_tides;
 
 use crate::physics::constants::{L_G, MICROSECONDS_PER_DAY, SPEED_OF_LIGHT_SQUARED_M2_S2};
 use crate::physics::gravity::{dot, earth_potential_m2_s2, position_about_axis_m};
@@ -142,7 +144,7 @@ pub const TRACK_POLE_NOTE: &str = "the zonal field is taken about the Celestial 
 pub fn inertial_model_note(model: GravityModel) -> Option<&'static str> {
     match model {
         GravityModel::PointMass => None,
-        GravityModel::J2 => Some(INERTIAL_J2_NOTE),
+        GravityModel::J2 | GravityModel::J2SunMoon => Some(INERTIAL_J2_NOTE),
         GravityModel::Grs80 => Some(INERTIAL_GRS80_NOTE),
     }
 }

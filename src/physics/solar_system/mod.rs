@@ -16,6 +16,7 @@ pub mod ephemeris;
 pub mod error;
 pub mod gm;
 pub mod segment;
+pub mod tides;
 
 #[cfg(test)]
 mod tests;
@@ -24,3 +25,4 @@ pub use body::Body;
 pub use daf::KernelError;
 pub use ephemeris::{BodyState, Ephemeris, EphemerisSpan};
 pub use error::{EphemerisError, EphemerisErrorKind};
+pub use tides::{sun_moon_tidal_potential_m2_s2, TidalBodies, TidalTrack};
