@@ -119,8 +119,8 @@ impl ChebyshevSegment {
     /// J2000), from the record whose interval holds it (the last record at the segment's end);
     /// `None` when the bytes do not hold the record (prevented by [`Self::new`]'s checks).
     ///
-    /// Only the coefficients summed are decoded (straight from the record's bytes, no copy of
-    /// the kernel), and each component's value and derivative come from one Clenshaw pass.
+    /// Only the coefficients summed are decoded, straight from the record's bytes (no copy of
+    /// the kernel), with the byte order chosen once per sum.
     pub fn state_km(&self, bytes: &[u8], tdb_attos: i128) -> Option<StateKm> {
         let tdb_s = tdb_attos as f64 / ATTOS_PER_S_F64;
         let index = ((tdb_s - self.init_s) / self.interval_s).floor();
@@ -138,18 +138,36 @@ impl ChebyshevSegment {
         let dt_s = offset_attos as f64 / ATTOS_PER_S_F64 - (mid_s - mid_whole);
         let x = dt_s / radius_s;
         let n = self.coefficients;
-        let mut coefficients = [0.0_f64; 3 * MAX_COEFFICIENTS];
-        self.order
-            .decode(words.get(2..2 + 3 * n)?, &mut coefficients[..3 * n]);
-        let (position, derivative) = clenshaw_three(&coefficients[..3 * n], n, x);
-        let velocity = if self.data_type == 3 {
+        let mut t = [0.0_f64; MAX_COEFFICIENTS];
+        let mut dt = [0.0_f64; MAX_COEFFICIENTS];
+        chebyshev_values(x, &mut t[..n], &mut dt[..n]);
+        let coefficients = words.get(2..2 + self.components() * n)?;
+        let series = |component: usize, basis: &[f64]| {
             self.order
-                .decode(words.get(2 + 3 * n..2 + 6 * n)?, &mut coefficients[..3 * n]);
-            clenshaw_three(&coefficients[..3 * n], n, x).0
-        } else {
-            derivative.map(|d| d / radius_s)
+                .dot(&coefficients[component * n..(component + 1) * n], basis)
         };
+        let mut position = [0.0; 3];
+        let mut velocity = [0.0; 3];
+        for axis in 0..3 {
+            position[axis] = series(axis, &t[..n]);
+            velocity[axis] = if self.data_type == 3 {
+                series(axis + 3, &t[..n])
+            } else {
+                series(axis, &dt[..n]) / radius_s
+            };
+        }
         Some((position, velocity))
+    }
+}
+
+impl ChebyshevSegment {
+    /// Components per record: 3 (type 2) or 6 (type 3).
+    fn components(&self) -> usize {
+        if self.data_type == 3 {
+            6
+        } else {
+            3
+        }
     }
 }
 
@@ -163,36 +181,17 @@ impl ByteOrder {
             Self::Big => pairs.for_each(|(o, w)| *o = f64::from_be_bytes(*w)),
         }
     }
-}
 
-/// Values and derivatives (with respect to x) of three Chebyshev series of `n` terms each,
-/// stored one after the other in `coefficients`, at `x`: sum_k a_k T_k(x) and its derivative.
-///
-/// Clenshaw's recurrence (C. W. Clenshaw, "A note on the summation of Chebyshev series", Math.
-/// Tables Aids Comput. 9 (1955) 118-120; Press et al., Numerical Recipes, 3rd ed. (2007), sec.
-/// 5.4.2): b_k = a_k + 2x b_{k+1} - b_{k+2} (b_n = b_{n+1} = 0), f = a_0 + x b_1 - b_2; its
-/// derivative with respect to x, d_k = 2 b_{k+1} + 2x d_{k+1} - d_{k+2}, f' = b_1 + x d_1 - d_2.
-/// The three series run side by side (independent chains).
-pub fn clenshaw_three(coefficients: &[f64], n: usize, x: f64) -> ([f64; 3], [f64; 3]) {
-    let mut values = [0.0; 3];
-    let mut derivatives = [0.0; 3];
-    if n == 0 || coefficients.len() < 3 * n {
-        return (values, derivatives);
-    }
-    let two_x = 2.0 * x;
-    let (mut b1, mut b2, mut d1, mut d2) = ([0.0_f64; 3], [0.0_f64; 3], [0.0_f64; 3], [0.0; 3]);
-    for k in (1..n).rev() {
-        for axis in 0..3 {
-            let b = coefficients[axis * n + k] + two_x * b1[axis] - b2[axis];
-            let d = 2.0 * b1[axis] + two_x * d1[axis] - d2[axis];
-            (b2[axis], b1[axis], d2[axis], d1[axis]) = (b1[axis], b, d1[axis], d);
+    /// sum_k c_k basis_k with the coefficients c_k decoded from the 8-byte IEEE doubles
+    /// `words` as they are summed (as many terms as both hold).
+    #[inline]
+    fn dot(self, words: &[[u8; 8]], basis: &[f64]) -> f64 {
+        let pairs = words.iter().zip(basis);
+        match self {
+            Self::Little => pairs.map(|(w, b)| f64::from_le_bytes(*w) * b).sum(),
+            Self::Big => pairs.map(|(w, b)| f64::from_be_bytes(*w) * b).sum(),
         }
     }
-    for axis in 0..3 {
-        values[axis] = coefficients[axis * n] + x * b1[axis] - b2[axis];
-        derivatives[axis] = b1[axis] + x * d1[axis] - d2[axis];
-    }
-    (values, derivatives)
 }
 
 /// Chebyshev polynomials of the first kind T_k(x) and their derivatives T_k'(x), k = 0..n-1,

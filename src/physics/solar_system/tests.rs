@@ -294,31 +294,6 @@ fn chebyshev_values_match_closed_forms() {
 }
 
 #[test]
-fn clenshaw_sums_match_closed_forms() {
-    // sum_k a_k T_k(cos a) = sum_k a_k cos(k a) and its derivative sum_k a_k k sin(k a) / sin(a)
-    // (Abramowitz & Stegun 22.3.15), for three series of 13 terms (DE440's Moon record size).
-    let n = 13;
-    let coefficients: Vec<f64> = (0..3 * n)
-        .map(|i| ((i * 7 + 3) % 11) as f64 - 5.0 + 0.25 * i as f64)
-        .collect();
-    for a in [0.05_f64, 0.7, 1.9, 3.0] {
-        let (values, derivatives) = segment::clenshaw_three(&coefficients, n, a.cos());
-        for axis in 0..3 {
-            let series = &coefficients[axis * n..(axis + 1) * n];
-            let value: f64 = (0..n).map(|k| series[k] * (k as f64 * a).cos()).sum();
-            let derivative: f64 = (0..n)
-                .map(|k| series[k] * k as f64 * (k as f64 * a).sin() / a.sin())
-                .sum();
-            assert!((values[axis] - value).abs() < 1e-12, "{a} {axis}");
-            assert!(
-                (derivatives[axis] - derivative).abs() < 1e-12 * (1.0 + derivative.abs()) / a.sin(),
-                "{a} {axis}"
-            );
-        }
-    }
-}
-
-#[test]
 fn states_at_one_instant_equal_separate_calls() {
     // Sharing the Moon's and the Earth-Moon barycentre's segments between pairs changes nothing.
     let ephemeris = Ephemeris::embedded().expect("embedded");
