@@ -87,6 +87,11 @@ impl KernelBytes {
     }
 }
 
+/// Segment states already evaluated at one instant: one entry per [`NEEDED_SEGMENTS`] slot and
+/// one for the Earth's own segments.
+#[derive(Default)]
+struct SegmentMemo([Option<StateKm>; NEEDED_SEGMENTS.len() + 1]);
+
 /// A planetary ephemeris: SPK type 2/3 segments with the bytes that hold them.
 pub struct Ephemeris {
     name: String,
@@ -217,41 +222,56 @@ impl Ephemeris {
         }
     }
 
-    fn evaluate(
-        list: &[ChebyshevSegment],
-        bytes: &[u8],
+    /// The state of one segment list (`slot` into [`NEEDED_SEGMENTS`], or one past its end for
+    /// the Earth's own segments), km and km/s, evaluated once per instant through `memo`.
+    fn segment_km(
+        &self,
+        memo: &mut SegmentMemo,
+        slot: usize,
         attos: i128,
         tdb_s: f64,
     ) -> Option<StateKm> {
-        list.iter()
+        if let Some(state) = memo.0.get(slot).copied().flatten() {
+            return Some(state);
+        }
+        let list = self.segments.get(slot).unwrap_or(&self.earth);
+        let state = list
+            .iter()
             .rev()
             .find(|s| s.covers(tdb_s))
-            .and_then(|s| s.state_km(bytes, attos))
+            .and_then(|s| s.state_km(self.bytes.as_slice(), attos))?;
+        if let Some(entry) = memo.0.get_mut(slot) {
+            *entry = Some(state);
+        }
+        Some(state)
     }
 
     /// The state of `body`, km and km/s, about the Earth-Moon barycentre for the Earth, the Moon
     /// and the barycentre itself (`true`) or about the solar-system barycentre (`false`).
-    fn local_km(&self, body: Body, attos: i128, tdb_s: f64) -> Option<(bool, StateKm)> {
-        let bytes = self.bytes.as_slice();
+    fn local_km(
+        &self,
+        memo: &mut SegmentMemo,
+        body: Body,
+        attos: i128,
+        tdb_s: f64,
+    ) -> Option<(bool, StateKm)> {
         let slot = |id: i32| NEEDED_SEGMENTS.iter().position(|&(t, _)| t == id);
         match body {
             Body::Ssb => Some((false, ([0.0; 3], [0.0; 3]))),
             Body::Emb => Some((true, ([0.0; 3], [0.0; 3]))),
-            Body::Moon => Some((
+            Body::Moon => Some((true, self.segment_km(memo, slot(301)?, attos, tdb_s)?)),
+            Body::Earth if !self.earth.is_empty() => Some((
                 true,
-                Self::evaluate(&self.segments[slot(301)?], bytes, attos, tdb_s)?,
+                self.segment_km(memo, NEEDED_SEGMENTS.len(), attos, tdb_s)?,
             )),
-            Body::Earth if !self.earth.is_empty() => {
-                Some((true, Self::evaluate(&self.earth, bytes, attos, tdb_s)?))
-            }
             Body::Earth => {
-                let (p, v) = Self::evaluate(&self.segments[slot(301)?], bytes, attos, tdb_s)?;
+                let (p, v) = self.segment_km(memo, slot(301)?, attos, tdb_s)?;
                 let k = -1.0 / EARTH_MOON_MASS_RATIO;
                 Some((true, (p.map(|x| x * k), v.map(|x| x * k))))
             }
             other => Some((
                 false,
-                Self::evaluate(&self.segments[slot(other.naif_id())?], bytes, attos, tdb_s)?,
+                self.segment_km(memo, slot(other.naif_id())?, attos, tdb_s)?,
             )),
         }
     }
@@ -264,24 +284,51 @@ impl Ephemeris {
         center: Body,
         tdb_attos: i128,
     ) -> Result<BodyState, EphemerisError> {
+        let [state] = self.states_m([(body, center)], tdb_attos)?;
+        Ok(state)
+    }
+
+    /// [`Self::state_m`] for several (body, centre) pairs at one instant; each segment is
+    /// evaluated once (the Moon's serves both the Moon and the Earth, the Earth-Moon
+    /// barycentre's every pair that needs it), so the results equal separate calls exactly.
+    pub fn states_m<const N: usize>(
+        &self,
+        pairs: [(Body, Body); N],
+        tdb_attos: i128,
+    ) -> Result<[BodyState; N], EphemerisError> {
         let tdb_s = tdb_attos as f64 / ATTOS_PER_SECOND as f64;
         if !(tdb_s >= self.span.first_tdb_s && tdb_s <= self.span.last_tdb_s) {
             return Err(self.outside(tdb_s));
         }
-        let (body_emb, (bp, bv)) = self
-            .local_km(body, tdb_attos, tdb_s)
-            .ok_or_else(|| self.outside(tdb_s))?;
-        let (center_emb, (cp, cv)) = self
-            .local_km(center, tdb_attos, tdb_s)
-            .ok_or_else(|| self.outside(tdb_s))?;
+        let mut memo = SegmentMemo::default();
+        let mut states = [BodyState {
+            position_m: [0.0; 3],
+            velocity_m_s: [0.0; 3],
+        }; N];
+        for (state, (body, center)) in states.iter_mut().zip(pairs) {
+            *state = self
+                .pair_m(&mut memo, body, center, tdb_attos, tdb_s)
+                .ok_or_else(|| self.outside(tdb_s))?;
+        }
+        Ok(states)
+    }
+
+    /// One (body, centre) pair for [`Self::states_m`]; `None` where a segment does not cover.
+    fn pair_m(
+        &self,
+        memo: &mut SegmentMemo,
+        body: Body,
+        center: Body,
+        tdb_attos: i128,
+        tdb_s: f64,
+    ) -> Option<BodyState> {
+        let (body_emb, (bp, bv)) = self.local_km(memo, body, tdb_attos, tdb_s)?;
+        let (center_emb, (cp, cv)) = self.local_km(memo, center, tdb_attos, tdb_s)?;
         // Both about the Earth-Moon barycentre: subtract there; otherwise move the ones about
         // it to the solar-system barycentre first.
         let emb = if body_emb != center_emb {
-            let slot = NEEDED_SEGMENTS.iter().position(|&(t, _)| t == 3);
-            slot.and_then(|i| {
-                Self::evaluate(&self.segments[i], self.bytes.as_slice(), tdb_attos, tdb_s)
-            })
-            .ok_or_else(|| self.outside(tdb_s))?
+            let slot = NEEDED_SEGMENTS.iter().position(|&(t, _)| t == 3)?;
+            self.segment_km(memo, slot, tdb_attos, tdb_s)?
         } else {
             ([0.0; 3], [0.0; 3])
         };
@@ -297,7 +344,7 @@ impl Ephemeris {
             state.position_m[i] = (bp[i] - cp[i] + (bk - ck) * emb.0[i]) * M_PER_KM;
             state.velocity_m_s[i] = (bv[i] - cv[i] + (bk - ck) * emb.1[i]) * M_PER_KM;
         }
-        Ok(state)
+        Some(state)
     }
 
     /// [`Self::state_m`] at TDB seconds since J2000.0 given as a float.

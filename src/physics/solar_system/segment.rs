@@ -118,14 +118,19 @@ impl ChebyshevSegment {
     /// Position (km) and velocity (km/s) at the TDB instant `tdb_attos` (attoseconds since
     /// J2000), from the record whose interval holds it (the last record at the segment's end);
     /// `None` when the bytes do not hold the record (prevented by [`Self::new`]'s checks).
+    ///
+    /// Only the coefficients summed are decoded, straight from the record's bytes (no copy of
+    /// the kernel), with the byte order chosen once per sum.
     pub fn state_km(&self, bytes: &[u8], tdb_attos: i128) -> Option<StateKm> {
         let tdb_s = tdb_attos as f64 / ATTOS_PER_S_F64;
         let index = ((tdb_s - self.init_s) / self.interval_s).floor();
         let index = (index.max(0.0) as usize).min(self.records - 1);
         let start = self.data_offset + index * self.record_words * 8;
         let record = bytes.get(start..start + self.record_words * 8)?;
-        let word = |i: usize| self.order.f64_at(record, i * 8).unwrap_or(f64::NAN);
-        let (mid_s, radius_s) = (word(0), word(1));
+        let (words, _) = record.as_chunks::<8>();
+        let mut head = [0.0_f64; 2];
+        self.order.decode(words.get(..2)?, &mut head);
+        let [mid_s, radius_s] = head;
         // t - MID without losing the attoseconds: MID's whole seconds are subtracted as
         // integers, its fraction (exact in f64) afterwards.
         let mid_whole = mid_s.floor();
@@ -136,9 +141,10 @@ impl ChebyshevSegment {
         let mut t = [0.0_f64; MAX_COEFFICIENTS];
         let mut dt = [0.0_f64; MAX_COEFFICIENTS];
         chebyshev_values(x, &mut t[..n], &mut dt[..n]);
+        let coefficients = words.get(2..2 + self.components() * n)?;
         let series = |component: usize, basis: &[f64]| {
-            let base = 2 + component * n;
-            (0..n).map(|k| word(base + k) * basis[k]).sum::<f64>()
+            self.order
+                .dot(&coefficients[component * n..(component + 1) * n], basis)
         };
         let mut position = [0.0; 3];
         let mut velocity = [0.0; 3];
@@ -151,6 +157,40 @@ impl ChebyshevSegment {
             };
         }
         Some((position, velocity))
+    }
+}
+
+impl ChebyshevSegment {
+    /// Components per record: 3 (type 2) or 6 (type 3).
+    fn components(&self) -> usize {
+        if self.data_type == 3 {
+            6
+        } else {
+            3
+        }
+    }
+}
+
+impl ByteOrder {
+    /// Decodes the 8-byte IEEE doubles `words` into `out` (as many as both hold).
+    #[inline]
+    fn decode(self, words: &[[u8; 8]], out: &mut [f64]) {
+        let pairs = out.iter_mut().zip(words);
+        match self {
+            Self::Little => pairs.for_each(|(o, w)| *o = f64::from_le_bytes(*w)),
+            Self::Big => pairs.for_each(|(o, w)| *o = f64::from_be_bytes(*w)),
+        }
+    }
+
+    /// sum_k c_k basis_k with the coefficients c_k decoded from the 8-byte IEEE doubles
+    /// `words` as they are summed (as many terms as both hold).
+    #[inline]
+    fn dot(self, words: &[[u8; 8]], basis: &[f64]) -> f64 {
+        let pairs = words.iter().zip(basis);
+        match self {
+            Self::Little => pairs.map(|(w, b)| f64::from_le_bytes(*w) * b).sum(),
+            Self::Big => pairs.map(|(w, b)| f64::from_be_bytes(*w) * b).sum(),
+        }
     }
 }
 

@@ -292,3 +292,21 @@ fn chebyshev_values_match_closed_forms() {
         assert!((d[k] - kf * (kf * a).sin() / a.sin()).abs() < 1e-11);
     }
 }
+
+#[test]
+fn states_at_one_instant_equal_separate_calls() {
+    // Sharing the Moon's and the Earth-Moon barycentre's segments between pairs changes nothing.
+    let ephemeris = Ephemeris::embedded().expect("embedded");
+    let attos = 812_345_678_i128 * 1_000_000_000_000_000_000 + 987_654_321;
+    let pairs = [
+        (Body::Sun, Body::Earth),
+        (Body::Moon, Body::Earth),
+        (Body::Earth, Body::Ssb),
+        (Body::Moon, Body::Ssb),
+        (Body::Earth, Body::Moon),
+    ];
+    let together = ephemeris.states_m(pairs, attos).expect("together");
+    for ((body, center), state) in pairs.into_iter().zip(together) {
+        assert_eq!(state, ephemeris.state_m(body, center, attos).expect("one"));
+    }
+}

@@ -32,13 +32,14 @@ impl TidalBodies {
     /// The Sun and the Moon relative to the Earth at the TDB instant `tdb_attos` (attoseconds
     /// since J2000.0 TDB); an error naming the ephemeris span outside it.
     pub fn at(ephemeris: &Ephemeris, tdb_attos: i128) -> Result<Self, EphemerisError> {
+        // One pass: the Moon's segment serves both the Moon and the Earth.
+        let [sun, moon] = ephemeris.states_m(
+            [(Body::Sun, Body::Earth), (Body::Moon, Body::Earth)],
+            tdb_attos,
+        )?;
         Ok(Self {
-            sun_m: ephemeris
-                .state_m(Body::Sun, Body::Earth, tdb_attos)?
-                .position_m,
-            moon_m: ephemeris
-                .state_m(Body::Moon, Body::Earth, tdb_attos)?
-                .position_m,
+            sun_m: sun.position_m,
+            moon_m: moon.position_m,
         })
     }
 }
@@ -102,8 +103,8 @@ impl TidalTrack {
         for i in 0..count {
             let tdb_s = first_tdb_s + i as f64 * Self::NODE_STEP_S;
             let attos = seconds_f64_to_attos(tdb_s);
-            let sun = ephemeris.state_m(Body::Sun, Body::Earth, attos)?;
-            let moon = ephemeris.state_m(Body::Moon, Body::Earth, attos)?;
+            let [sun, moon] =
+                ephemeris.states_m([(Body::Sun, Body::Earth), (Body::Moon, Body::Earth)], attos)?;
             nodes.push(Node {
                 sun: (sun.position_m, sun.velocity_m_s),
                 moon: (moon.position_m, moon.velocity_m_s),
