@@ -8,23 +8,14 @@
 
 use criterion::{black_box, criterion_group, criterion_main, Criterion};
 use eigenzeit::physics::time::convert::{convert, ConversionContext};
-use eigenzeit::physics::time::formats::{parse_instant, InstantFormat};
-use eigenzeit::physics::time::instant::Instant;
 use eigenzeit::physics::time::leap_seconds::LeapTable;
 use eigenzeit::physics::time::scale::Scale;
 use eigenzeit::physics::time::tdb_ephemeris::tdb_minus_tt_ephemeris_s;
 use eigenzeit::physics::time::tdb_model::TdbModel;
 use eigenzeit::physics::time::tdb_series::tdb_minus_tt_fast_s;
 
-fn utc_epochs() -> Vec<Instant> {
-    let table = LeapTable::builtin();
-    (0..1024)
-        .filter_map(|i| {
-            let text = format!("{}", 826_000_000 + i * 86_413);
-            parse_instant(&text, InstantFormat::J2000S, Scale::Utc, table).ok()
-        })
-        .collect()
-}
+mod support;
+use support::utc_epochs;
 
 fn bench(c: &mut Criterion) {
     let table = LeapTable::builtin();

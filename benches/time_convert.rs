@@ -12,15 +12,8 @@ use eigenzeit::physics::time::instant::Instant;
 use eigenzeit::physics::time::leap_seconds::LeapTable;
 use eigenzeit::physics::time::scale::Scale;
 
-fn utc_epochs() -> Vec<Instant> {
-    let table = LeapTable::builtin();
-    (0..1024)
-        .filter_map(|i| {
-            let text = format!("{}", 826_000_000 + i * 86_413);
-            parse_instant(&text, InstantFormat::J2000S, Scale::Utc, table).ok()
-        })
-        .collect()
-}
+mod support;
+use support::utc_epochs;
 
 fn bench(c: &mut Criterion) {
     let table = LeapTable::builtin();
