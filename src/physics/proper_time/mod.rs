@@ -27,6 +27,7 @@
 pub mod kepler;
 mod quadrature;
 mod series;
+pub mod tides;
 
 pub use quadrature::{CompensatedSum, GaussLegendre, MAX_NODES};
 pub use series::{
@@ -156,8 +157,9 @@ pub const INTEGRATION_NOTE: &str = "d(tau)/dt - 1 = -(v^2/2 + U)/c^2 + L_G again
 ///
 /// Inputs: `epochs_s`, output epochs in coordinate seconds (strictly increasing, at least two;
 /// tau - t is zero at the first); `rate(position_m, velocity_m_s)` returns the fractional rate
-/// offset as (velocity part, gravity part), dimensionless. Result: per epoch tau - t, its two
-/// parts, the periodic term and the residual, plus a summary.
+/// offset as (velocity part, gravity part), dimensionless. Result: per epoch tau - t, its
+/// parts (the tidal part zero), the periodic term and the residual, plus a summary. For a rate
+/// that depends on the time as well, see [`integrate_proper_time_at`].
 pub fn integrate_proper_time<T, R>(
     trajectory: &T,
     epochs_s: &[f64],
@@ -167,6 +169,32 @@ pub fn integrate_proper_time<T, R>(
 where
     T: Trajectory + ?Sized,
     R: Fn(&[f64; 3], &[f64; 3]) -> (f64, f64),
+{
+    integrate_proper_time_at(
+        trajectory,
+        epochs_s,
+        |_t_s: f64, position_m: &[f64; 3], velocity_m_s: &[f64; 3]| {
+            let (velocity, gravity) = rate(position_m, velocity_m_s);
+            [velocity, gravity, 0.0]
+        },
+        options,
+    )
+}
+
+/// [`integrate_proper_time`] with a rate that also depends on the coordinate time:
+/// `rate(t_s, position_m, velocity_m_s)` (t_s in the epochs' seconds, at each quadrature node)
+/// returns the fractional rate offset as [velocity part, gravity part, tidal part]; the three
+/// are accumulated separately (the tidal part: the potentials of external bodies, whose
+/// positions depend on the epoch; [`tides::TidalIntegrand`]).
+pub fn integrate_proper_time_at<T, R>(
+    trajectory: &T,
+    epochs_s: &[f64],
+    rate: R,
+    options: &ProperTimeOptions,
+) -> Result<ProperTimeSeries, ProperTimeError>
+where
+    T: Trajectory + ?Sized,
+    R: Fn(f64, &[f64; 3], &[f64; 3]) -> [f64; 3],
 {
     if options.relative_tolerance.is_nan() || options.relative_tolerance <= 0.0 {
         return Err(error(
@@ -199,11 +227,12 @@ where
     let rules = GaussLegendre::new();
     let mut velocity_sum = CompensatedSum::default();
     let mut gravity_sum = CompensatedSum::default();
+    let mut tidal_sum = CompensatedSum::default();
     let mut periodic_s = Vec::with_capacity(epochs_s.len());
     let mut parts = Vec::with_capacity(epochs_s.len());
     let first = trajectory.state_at(epochs_s.first().copied().unwrap_or(0.0));
     periodic_s.push(kepler_periodic_term_s(&first.0, &first.1));
-    parts.push((0.0, 0.0));
+    parts.push([0.0; 3]);
     let mut start_state = first;
     for (index, pair) in epochs_s.windows(2).enumerate() {
         let (start_s, end_s) = (pair[0], pair[1]);
@@ -236,19 +265,22 @@ where
             ));
         };
         let piece_s = length_s / pieces as f64;
-        let (mut velocity_part, mut gravity_part) = (0.0, 0.0);
+        let (mut velocity_part, mut gravity_part, mut tidal_part) = (0.0, 0.0, 0.0);
         for piece in 0..pieces {
             let middle_s = start_s + (piece as f64 + 0.5) * piece_s;
             for (node, weight) in rules.rule(nodes) {
-                let (p, v) = trajectory.state_at(middle_s + 0.5 * piece_s * node);
-                let (sr, gr) = rate(&p, &v);
+                let t_s = middle_s + 0.5 * piece_s * node;
+                let (p, v) = trajectory.state_at(t_s);
+                let [sr, gr, tidal] = rate(t_s, &p, &v);
                 velocity_part += weight * sr;
                 gravity_part += weight * gr;
+                tidal_part += weight * tidal;
             }
         }
         velocity_part *= 0.5 * piece_s;
         gravity_part *= 0.5 * piece_s;
-        if !(velocity_part.is_finite() && gravity_part.is_finite()) {
+        tidal_part *= 0.5 * piece_s;
+        if !(velocity_part.is_finite() && gravity_part.is_finite() && tidal_part.is_finite()) {
             return Err(error(
                 ProperTimeErrorKind::NotFinite,
                 Some(index),
@@ -257,9 +289,10 @@ where
         }
         velocity_sum.add(velocity_part);
         gravity_sum.add(gravity_part);
+        tidal_sum.add(tidal_part);
         start_state = trajectory.state_at(end_s);
         periodic_s.push(kepler_periodic_term_s(&start_state.0, &start_state.1));
-        parts.push((velocity_sum.value(), gravity_sum.value()));
+        parts.push([velocity_sum.value(), gravity_sum.value(), tidal_sum.value()]);
     }
     Ok(series::build(epochs_s, periodic_s, &parts))
 }

@@ -11,8 +11,12 @@ pub struct ProperTimeSample {
     pub tau_minus_t_s: f64,
     /// The part accumulated from the velocity term of the rate, s.
     pub velocity_part_s: f64,
-    /// The part accumulated from the gravity term of the rate, s.
+    /// The part accumulated from the gravity term of the rate (the Earth's potential, and L_G
+    /// against TT), s.
     pub gravity_part_s: f64,
+    /// The part accumulated from the tidal potentials of external bodies (the Sun and the
+    /// Moon), s; zero for a rate without them. tau - t = velocity + gravity + tidal parts.
+    pub tidal_part_s: f64,
     /// The Keplerian periodic term -2 r.v / c^2 at this epoch, s.
     pub periodic_s: f64,
     /// tau - t minus the periodic term and the least-squares line, s.
@@ -80,18 +84,15 @@ fn fit_line(times_s: &[f64], values: &[f64]) -> (f64, f64, f64) {
     (mean_y, slope, mean_t)
 }
 
-/// Assembles the series from epochs, periodic terms and accumulated (velocity, gravity) parts.
-pub(super) fn build(
-    epochs_s: &[f64],
-    periodic: Vec<f64>,
-    parts: &[(f64, f64)],
-) -> ProperTimeSeries {
-    let total: Vec<f64> = parts.iter().map(|(v, g)| v + g).collect();
+/// Assembles the series from epochs, periodic terms and accumulated (velocity, gravity, tidal)
+/// parts.
+pub(super) fn build(epochs_s: &[f64], periodic: Vec<f64>, parts: &[[f64; 3]]) -> ProperTimeSeries {
+    let total: Vec<f64> = parts.iter().map(|[v, g, w]| v + g + w).collect();
     let detrended: Vec<f64> = total.iter().zip(&periodic).map(|(y, p)| y - p).collect();
     let (intercept, slope, mean_t) = fit_line(epochs_s, &detrended);
     let mut samples = Vec::with_capacity(epochs_s.len());
     let mut square_sum = 0.0;
-    for (((t_s, tau), (velocity, gravity)), (periodic_s, y)) in epochs_s
+    for (((t_s, tau), [velocity, gravity, tidal]), (periodic_s, y)) in epochs_s
         .iter()
         .zip(&total)
         .zip(parts)
@@ -104,6 +105,7 @@ pub(super) fn build(
             tau_minus_t_s: *tau,
             velocity_part_s: *velocity,
             gravity_part_s: *gravity,
+            tidal_part_s: *tidal,
             periodic_s: *periodic_s,
             residual_s,
         });
@@ -142,7 +144,7 @@ pub(super) fn build(
 /// tau - TCG = (tau - TT) - (TCG - TT), and since the first epoch TCG - TT grows by
 /// L_G / (1 - L_G) per second of TT (IAU 2000 Resolution B1.9; IERS Conventions (2010)
 /// eq. 10.1). The gravity part carries the change (it is the part that depends on the
-/// reference); elapsed times become TCG seconds.
+/// reference; the tidal part does not); elapsed times become TCG seconds.
 pub fn relative_to_tcg(series: &ProperTimeSeries) -> ProperTimeSeries {
     let rate = L_G / (1.0 - L_G);
     let epochs_s: Vec<f64> = series
@@ -155,14 +157,15 @@ pub fn relative_to_tcg(series: &ProperTimeSeries) -> ProperTimeSeries {
         .iter()
         .map(|sample| sample.periodic_s)
         .collect();
-    let parts: Vec<(f64, f64)> = series
+    let parts: Vec<[f64; 3]> = series
         .samples
         .iter()
         .map(|sample| {
-            (
+            [
                 sample.velocity_part_s,
                 sample.gravity_part_s - rate * sample.t_s,
-            )
+                sample.tidal_part_s,
+            ]
         })
         .collect();
     build(&epochs_s, periodic, &parts)
@@ -177,7 +180,7 @@ mod tcg_tests {
         // A clock that keeps TT exactly (zero rate against TT) runs slow against TCG by
         // L_G / (1 - L_G) (IAU 2000 Resolution B1.9).
         let epochs_s: Vec<f64> = (0..=10).map(|k| f64::from(k) * 8_640.0).collect();
-        let parts = vec![(0.0, 0.0); epochs_s.len()];
+        let parts = vec![[0.0; 3]; epochs_s.len()];
         let series = build(&epochs_s, vec![0.0; epochs_s.len()], &parts);
         let tcg = relative_to_tcg(&series);
         let expected = -L_G / (1.0 - L_G) / (1.0 + L_G / (1.0 - L_G));

@@ -72,15 +72,22 @@ struct Node {
 /// The Sun and the Moon over a time span, from ephemeris states at nodes [`Self::NODE_STEP_S`]
 /// apart, interpolated by cubic Hermite polynomials on position and velocity.
 ///
+/// The time argument of the nodes is TDB seconds since J2000.0 ([`Self::new`]) or any other
+/// time in seconds whose TDB the caller gives at each node ([`Self::over_argument`], e.g. TT
+/// seconds since a track's first epoch); [`Self::bodies_at`] takes that same argument.
+///
 /// Interpolation error: for a cubic Hermite the position error is at most h^4/384 max|x''''|;
 /// for the Moon x'''' is about n^4 |x| with the angular rate n near perigee (2.66e-6 /s mean,
 /// up to 1.12 times that): (3.3e-6 /s)^4 3.6e8 m = 4e-14 m/s^4, so with h = 3600 s below
 /// 0.02 m (measured: 0.014 m over two days); for the Sun 1e-4 m. A 0.02 m error in the Moon's
 /// position changes the tidal potential at GEO by below 3 GM_Moon r/d^3 * 0.02 m = 2e-7
-/// m^2/s^2, 2e-24 of rate (measured: 5e-24 at most, the unit tests check below 1e-23).
+/// m^2/s^2, 2e-24 of rate (measured: 5e-24 at most, the unit tests check below 1e-23). With a
+/// TT argument the node velocities (per second of TDB) stand for rates per second of TT: they
+/// differ by d(TDB - TT)/dTT, below 3.5e-10 (the 1.66 ms annual term), which moves the
+/// interpolated Moon by below 1 km/s * 3.5e-10 * 3600 s = 1.3e-3 m.
 #[derive(Debug, Clone)]
 pub struct TidalTrack {
-    first_tdb_s: f64,
+    first_s: f64,
     nodes: Vec<Node>,
 }
 
@@ -95,14 +102,32 @@ impl TidalTrack {
         first_tdb_s: f64,
         last_tdb_s: f64,
     ) -> Result<Self, EphemerisError> {
-        if !first_tdb_s.is_finite() || !last_tdb_s.is_finite() || last_tdb_s < first_tdb_s {
-            return Err(EphemerisError::NotFinite);
+        Self::over_argument(ephemeris, first_tdb_s, last_tdb_s, |tdb_s| {
+            Ok(seconds_f64_to_attos(tdb_s))
+        })
+    }
+
+    /// Nodes at the time arguments `first_s + k NODE_STEP_S` covering `first_s ..= last_s`,
+    /// node k read from the ephemeris at the TDB instant `tdb_attos_at(argument)` (attoseconds
+    /// since J2000.0 TDB); the first error of `tdb_attos_at` or of the ephemeris (naming its
+    /// span) is returned.
+    pub fn over_argument<E, F>(
+        ephemeris: &Ephemeris,
+        first_s: f64,
+        last_s: f64,
+        mut tdb_attos_at: F,
+    ) -> Result<Self, E>
+    where
+        E: From<EphemerisError>,
+        F: FnMut(f64) -> Result<i128, E>,
+    {
+        if !first_s.is_finite() || !last_s.is_finite() || last_s < first_s {
+            return Err(EphemerisError::NotFinite.into());
         }
-        let count = ((last_tdb_s - first_tdb_s) / Self::NODE_STEP_S).ceil() as usize + 1;
+        let count = ((last_s - first_s) / Self::NODE_STEP_S).ceil() as usize + 1;
         let mut nodes = Vec::with_capacity(count);
         for i in 0..count {
-            let tdb_s = first_tdb_s + i as f64 * Self::NODE_STEP_S;
-            let attos = seconds_f64_to_attos(tdb_s);
+            let attos = tdb_attos_at(first_s + i as f64 * Self::NODE_STEP_S)?;
             let [sun, moon] =
                 ephemeris.states_m([(Body::Sun, Body::Earth), (Body::Moon, Body::Earth)], attos)?;
             nodes.push(Node {
@@ -110,12 +135,14 @@ impl TidalTrack {
                 moon: (moon.position_m, moon.velocity_m_s),
             });
         }
-        Ok(Self { first_tdb_s, nodes })
+        Ok(Self { first_s, nodes })
     }
 
-    /// The Sun and the Moon at `tdb_s` (TDB seconds since J2000.0); `None` outside the nodes.
+    /// The Sun and the Moon at the time argument `tdb_s` (TDB seconds since J2000.0 for
+    /// [`Self::new`], the caller's argument for [`Self::over_argument`]); `None` outside the
+    /// nodes.
     pub fn bodies_at(&self, tdb_s: f64) -> Option<TidalBodies> {
-        let x = (tdb_s - self.first_tdb_s) / Self::NODE_STEP_S;
+        let x = (tdb_s - self.first_s) / Self::NODE_STEP_S;
         if x.is_nan() || x < 0.0 || x > (self.nodes.len() - 1) as f64 {
             return None;
         }
