@@ -291,12 +291,12 @@ async fn an_option_out_of_range_is_refused_even_when_the_other_source_wins() {
             "unknown_reference",
             "options.reference",
         ),
-        // The Sun and Moon tides are not yet in the proper-time integrators: refused, not
-        // silently left out.
+        // Model names are exact: the body's misspelt model is named even where the query's
+        // is fine.
         (
             "?gravity_model=j2",
-            json!({"gravity_model": "j2_sun_moon"}),
-            "unsupported_gravity_model",
+            json!({"gravity_model": "J2_sun_moon"}),
+            "unknown_gravity_model",
             "options.gravity_model",
         ),
     ];

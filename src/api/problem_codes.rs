@@ -685,7 +685,8 @@ mod tests {
             ],
         );
         // `too_few_epochs` cannot reach the endpoint: the readers require two states.
-        // Earth-fixed tracks outside the EOP table: eop_before_table, eop_after_table.
+        // Earth-fixed tracks outside the EOP table: eop_before_table, eop_after_table; the Sun
+        // and Moon tides asked for beyond the planetary ephemeris: outside_ephemeris_span.
         let proper_time: Vec<&str> = ProperTimeErrorKind::ALL
             .iter()
             .filter(|kind| **kind != ProperTimeErrorKind::TooFewEpochs)
@@ -693,6 +694,7 @@ mod tests {
             .chain([
                 EopLookupErrorKind::BeforeTable.as_str(),
                 EopLookupErrorKind::AfterTable.as_str(),
+                EphemerisErrorKind::OutsideSpan.as_str(),
             ])
             .collect();
         expect("post", "/v1/clock/proper-time", &proper_time);

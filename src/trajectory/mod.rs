@@ -30,7 +30,10 @@ pub use interpolate::{validate_track, InterpolationOptions, Interpolator, MAX_PO
 pub use json::read_json;
 pub use oem::read_oem;
 pub use sp3::read_sp3;
-pub use track_proper_time::{proper_time_of_ephemeris, proper_time_of_track, TrackProperTime};
+pub use track_proper_time::{
+    proper_time_of_ephemeris, proper_time_of_ephemeris_at, proper_time_of_track,
+    proper_time_of_track_at, track_tt_extent, TrackProperTime,
+};
 
 use crate::physics::time::instant::Instant;
 use crate::physics::time::scale::Scale;

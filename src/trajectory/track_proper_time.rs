@@ -9,14 +9,14 @@
 //! (`eop_before_table`, `eop_after_table`) naming its first or last state.
 
 use super::error::TrajectoryError;
-use super::interpolate::{InterpolationOptions, Interpolator};
+use super::interpolate::{attos_difference_s, InterpolationOptions, Interpolator};
 use super::{Frame, ObjectTrack, TrajectorySet};
 use crate::physics::constants::TT_MINUS_TAI_ATTOS;
 use crate::physics::earth::eop::{EopLookupError, EopTable};
 use crate::physics::earth::orientation::span::{EopAtEpoch, OrientationSpan};
 use crate::physics::earth::orientation::ARCSEC_TO_RAD;
 use crate::physics::proper_time::{
-    integrate_proper_time, EarthFixed, ProperTimeError, ProperTimeOptions, ProperTimeSeries,
+    integrate_proper_time_at, EarthFixed, ProperTimeError, ProperTimeOptions, ProperTimeSeries,
     Trajectory,
 };
 use crate::physics::readable::readable;
@@ -64,7 +64,8 @@ pub const COORDINATE_TIME_NOTE: &str = "coordinate time is TT from the ephemeris
 ///
 /// `rate(position_m, velocity_m_s)` returns the (velocity, gravity) parts of the fractional
 /// rate offset relative to TT, from a GCRS state; `eop` is the Earth orientation table that
-/// takes Earth-fixed tracks into the GCRS.
+/// takes Earth-fixed tracks into the GCRS. For a rate that depends on the epoch too (the Sun
+/// and Moon tides), see [`proper_time_of_track_at`].
 pub fn proper_time_of_track<R>(
     track: &ObjectTrack,
     interpolation: &InterpolationOptions,
@@ -75,6 +76,34 @@ pub fn proper_time_of_track<R>(
 ) -> Result<TrackProperTime, TrajectoryError>
 where
     R: Fn(&[f64; 3], &[f64; 3]) -> (f64, f64),
+{
+    proper_time_of_track_at(
+        track,
+        interpolation,
+        options,
+        context,
+        eop,
+        |_t_s: f64, position_m: &[f64; 3], velocity_m_s: &[f64; 3]| {
+            let (velocity, gravity) = rate(position_m, velocity_m_s);
+            [velocity, gravity, 0.0]
+        },
+    )
+}
+
+/// [`proper_time_of_track`] with a rate of the time as well: `rate(t_s, position_m,
+/// velocity_m_s)` with `t_s` in TT seconds since the track's first epoch (see
+/// [`track_tt_extent`]) returns the [velocity, gravity, tidal] parts
+/// ([`crate::physics::proper_time::integrate_proper_time_at`]).
+pub fn proper_time_of_track_at<R>(
+    track: &ObjectTrack,
+    interpolation: &InterpolationOptions,
+    options: &ProperTimeOptions,
+    context: &ConversionContext<'_>,
+    eop: &EopTable,
+    rate: R,
+) -> Result<TrackProperTime, TrajectoryError>
+where
+    R: Fn(f64, &[f64; 3], &[f64; 3]) -> [f64; 3],
 {
     let interpolator = Interpolator::from_track(track, interpolation, context)?;
     let (Some(first), Some(last)) = (track.states.first(), track.states.last()) else {
@@ -90,7 +119,7 @@ where
         Some(step_s) => output_grid(interpolator.times_s(), step_s, first.epoch, track, context)?,
     };
     let series = match track.frame {
-        Frame::Inertial => integrate_proper_time(&interpolator, &epochs_s, rate, options),
+        Frame::Inertial => integrate_proper_time_at(&interpolator, &epochs_s, rate, options),
         Frame::EarthFixed => {
             let span_s = interpolator.times_s().last().copied().unwrap_or(0.0);
             let orientation = orientation_over_track(track, span_s, context, eop)?;
@@ -98,7 +127,7 @@ where
                 track: |t_s: f64| interpolator.state_at(t_s),
                 orientation: &orientation,
             };
-            integrate_proper_time(&rotating, &epochs_s, rate, options)
+            integrate_proper_time_at(&rotating, &epochs_s, rate, options)
         }
     }
     .map_err(|e| from_physics(e, &track.id))?;
@@ -109,6 +138,27 @@ where
         epochs,
         series,
     })
+}
+
+/// A track's first epoch in TT (attoseconds since J2000.0 TT) and its span in TT seconds: the
+/// time axis of [`proper_time_of_track_at`]'s `t_s`. Errors: a track without states, an epoch
+/// without TT (only UT1 outside the EOP table, which the readers refuse), naming the object.
+pub fn track_tt_extent(
+    track: &ObjectTrack,
+    context: &ConversionContext<'_>,
+) -> Result<(i128, f64), TrajectoryError> {
+    let (Some(first), Some(last)) = (track.states.first(), track.states.last()) else {
+        return Err(
+            TrajectoryError::new("too_few_states", "the track has no states").for_object(&track.id),
+        );
+    };
+    let tt = |epoch: &Instant| {
+        to_tt_attos(epoch, context)
+            .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(&track.id))
+    };
+    let first_tt = tt(&first.epoch)?;
+    let last_tt = tt(&last.epoch)?;
+    Ok((first_tt, attos_difference_s(last_tt - first_tt)))
 }
 
 /// The Earth orientation parameters at TT `tt_attos` from `eop` (4-point Lagrange, as the
@@ -241,6 +291,39 @@ where
     F: Fn(&ObjectTrack) -> R,
     R: Fn(&[f64; 3], &[f64; 3]) -> (f64, f64),
 {
+    proper_time_of_ephemeris_at(
+        ephemeris,
+        interpolation,
+        options,
+        context,
+        eop,
+        |track: &ObjectTrack| {
+            let rate = rate_for_track(track);
+            Ok(
+                move |_t_s: f64, position_m: &[f64; 3], velocity_m_s: &[f64; 3]| {
+                    let (velocity, gravity) = rate(position_m, velocity_m_s);
+                    [velocity, gravity, 0.0]
+                },
+            )
+        },
+    )
+}
+
+/// Integrates every track of an ephemeris with a rate of the time as well (see
+/// [`proper_time_of_track_at`]); `rate_for_track` may refuse a track (e.g. one outside the
+/// planetary ephemeris). Stops at the first error, which names the object.
+pub fn proper_time_of_ephemeris_at<F, R>(
+    ephemeris: &TrajectorySet,
+    interpolation: &InterpolationOptions,
+    options: &ProperTimeOptions,
+    context: &ConversionContext<'_>,
+    eop: &EopTable,
+    rate_for_track: F,
+) -> Result<Vec<TrackProperTime>, TrajectoryError>
+where
+    F: Fn(&ObjectTrack) -> Result<R, TrajectoryError>,
+    R: Fn(f64, &[f64; 3], &[f64; 3]) -> [f64; 3],
+{
     if ephemeris.objects.is_empty() {
         return Err(TrajectoryError::new(
             "no_objects",
@@ -251,8 +334,8 @@ where
         .objects
         .iter()
         .map(|track| {
-            let rate = rate_for_track(track);
-            proper_time_of_track(track, interpolation, options, context, eop, &rate)
+            let rate = rate_for_track(track)?;
+            proper_time_of_track_at(track, interpolation, options, context, eop, &rate)
         })
         .collect()
 }

@@ -394,6 +394,14 @@ def proper_time(api, m, document):
         1e-11,
         "proper time over 180 s",
     )
+    # Without a model: the default j2_sun_moon, named in the answer, with the Sun and Moon tides
+    # as their own part (a few 1e-16 of rate for this orbit: well below 1e-12 s in 180 s; IERS
+    # Conventions (2010) eq. 10.6 with IAU 2000 Resolution B1.3).
+    default = expect(api.call("proper_time", body=body), 200)
+    assert default.gravity_model == "j2_sun_moon", default.gravity_model
+    (wren,) = default.objects
+    tidal = wren.summary.tidal_part_s
+    assert tidal != 0.0 and abs(tidal) < 1e-12, tidal
 
 
     # The same request drawn (Accept: image/svg+xml): a self-contained SVG with the series.

@@ -31,8 +31,9 @@ pub struct ProperTimeRequest {
     pub ephemeris: TrajectorySet,
     /// TT or TCG.
     pub reference: RateReference,
-    /// The Earth's potential model.
-    pub gravity_model: GravityModel,
+    /// The potential model asked for; `None`: the default, the Sun and Moon tides with J2
+    /// (`j2_sun_moon`) where the planetary ephemeris covers the tracks, J2 elsewhere.
+    pub gravity_model: Option<GravityModel>,
     /// Interpolation window, gap limit and output grid.
     pub interpolation: InterpolationOptions,
     /// tau - t at the first epoch, s.
@@ -222,10 +223,11 @@ pub fn read_request(
         Some(text) => parse_reference(text, "reference")?,
         None => RateReference::Tt,
     };
-    let gravity_model = match options.gravity_model.as_deref() {
-        Some(text) => parse_gravity_model(text, "gravity_model")?,
-        None => GravityModel::PointMass,
-    };
+    let gravity_model = options
+        .gravity_model
+        .as_deref()
+        .map(|text| parse_gravity_model(text, "gravity_model"))
+        .transpose()?;
     let interpolation = InterpolationOptions {
         points: options.interpolation_points.unwrap_or(8),
         max_gap_s: options.max_gap_s.unwrap_or(settings.max_ephemeris_gap_s),

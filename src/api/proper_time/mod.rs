@@ -35,13 +35,13 @@ pub fn router() -> Router<AppState> {
             (String = "application/sp3"),
             (String = "text/plain"))),
     responses(
-        (status = 200, description = "Per object: summary and series. CSV when `Accept` prefers `text/csv` to JSON and SVG: the series (object_id, epoch, elapsed_s, tau_minus_t_s, velocity_part_s, gravity_part_s, periodic_s, residual_s). SVG when `Accept` prefers `image/svg+xml`: a plot per object of tau - t with its velocity and gravity parts and, on its own panel, the periodic part, against the time since the object's first epoch (the series are drawn even with `include_series=false`; above 2 000 samples one in k is drawn, the CSV has all).",
+        (status = 200, description = "Per object: summary and series. CSV when `Accept` prefers `text/csv` to JSON and SVG: the series (object_id, epoch, elapsed_s, tau_minus_t_s, velocity_part_s, gravity_part_s, tidal_part_s, periodic_s, residual_s). SVG when `Accept` prefers `image/svg+xml`: a plot per object of tau - t with its velocity and gravity parts and, on its own panel, the periodic part, against the time since the object's first epoch (the series are drawn even with `include_series=false`; above 2 000 samples one in k is drawn, the CSV has all).",
             content((types::ProperTimeAnswer = "application/json"), (String = "text/csv"), (String = "image/svg+xml", example = "<svg xmlns=\"http://www.w3.org/2000/svg\" ...>...</svg>")),
             headers(("Vary" = String, description = "`accept`"))),
         (status = 400, description = "The query string cannot be read (`invalid_query`: an unknown parameter or `format`, a wrong type), the body is not UTF-8 (`unreadable_body`), or a body sent as application/json is not the JSON ephemeris (`invalid_json`, `invalid_body`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 413, description = "Body above the configured limit (`body_too_large`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 415, description = "A Content-Type the endpoint does not read (`unsupported_media_type`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 422, description = "The ephemeris or an option cannot be used: `code` says why (a file that does not follow its format: unknown_ephemeris_format, json_invalid, the OEM and SP3 reader codes; unsupported_frame, unknown_scale, unsupported_time_scale (UT1), unknown_format, bad_epoch, mixed_velocity, not_finite, below_surface, beyond_model_range, speed_not_below_c, epochs_not_increasing, gap_too_long, too_few_states, sampling_too_coarse, bad_option, empty_batch, batch_too_large, unknown_reference, unknown_gravity_model, unsupported_gravity_model (the Sun and Moon tide model, not yet for proper time), integration_failed; for Earth-fixed tracks eop_before_table, eop_after_table: their epochs must lie inside the Earth orientation table in force); `line` (files), `object`, `index` and `field` say where", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 422, description = "The ephemeris or an option cannot be used: `code` says why (a file that does not follow its format: unknown_ephemeris_format, json_invalid, the OEM and SP3 reader codes; unsupported_frame, unknown_scale, unsupported_time_scale (UT1), unknown_format, bad_epoch, mixed_velocity, not_finite, below_surface, beyond_model_range, speed_not_below_c, epochs_not_increasing, gap_too_long, too_few_states, sampling_too_coarse, bad_option, empty_batch, batch_too_large, unknown_reference, unknown_gravity_model, integration_failed; outside_ephemeris_span (a track beyond the planetary ephemeris in force when the Sun and Moon tide model is asked for by name; without a model the default falls back to J2 alone, with a note); for Earth-fixed tracks eop_before_table, eop_after_table: their epochs must lie inside the Earth orientation table in force); `line` (files), `object`, `index` and `field` say where", body = crate::api::error::Problem, content_type = "application/problem+json"),
         crate::api::error::TimeoutProblem))]
 pub async fn proper_time(
     State(state): State<AppState>,
@@ -62,12 +62,13 @@ pub async fn proper_time(
     );
     let table = state.leap_table();
     let eop = state.eop_table();
+    let ephemeris = state.ephemeris();
     let settings = state.limits().clone();
     let work = move || -> Result<Response, ApiError> {
         let mut request = body::read_request(&headers, query, &body, &table, &settings)?;
         // A plot draws the series, whatever `include_series` says.
         request.include_series |= kind == AnswerType::Svg;
-        let answer = answer::compute(&request, &table, &eop)?;
+        let answer = answer::compute(&request, &table, &eop, &ephemeris)?;
         let text = match kind {
             AnswerType::Json => {
                 return Ok(([(header::VARY, "accept")], Json(answer)).into_response())

@@ -7,8 +7,6 @@
 use super::types::{ProperTimeOptionsInput, MAX_OPTION_SECONDS};
 use crate::api::clock::evaluate::{parse_gravity_model, parse_reference};
 use crate::api::error::ApiError;
-use crate::physics::gravity::GravityModel;
-use crate::physics::rate::RateErrorKind;
 use crate::physics::readable::readable;
 use crate::trajectory::MAX_POINTS;
 
@@ -23,15 +21,7 @@ pub fn check_options(options: &ProperTimeOptionsInput, prefix: &str) -> Result<(
         parse_reference(text, &field("reference"))?;
     }
     if let Some(text) = options.gravity_model.as_deref() {
-        let model = parse_gravity_model(text, &field("gravity_model"))?;
-        if model == GravityModel::J2SunMoon {
-            // Not yet: the integrators take a rate of position and velocity only.
-            return Err(ApiError::unprocessable(
-                RateErrorKind::UnsupportedGravityModel.as_str(),
-                "j2_sun_moon (the Sun and Moon tides) is not yet available for proper time along an ephemeris; use j2, grs80 or point_mass (the tides add up to about 1.2e-15 at navigation MEO, 3.2e-15 at GEO)",
-            )
-            .with_field(field("gravity_model")));
-        }
+        parse_gravity_model(text, &field("gravity_model"))?;
     }
     if let Some(points) = options.interpolation_points {
         if !(2..=MAX_POINTS).contains(&points) {

@@ -39,9 +39,11 @@ pub struct ProperTimeOptionsInput {
     /// Coordinate time the clock is compared with: `TT` (default) or `TCG`.
     #[param(value_type = Option<ReferenceName>, example = "TT")]
     pub reference: Option<String>,
-    /// Earth potential: `point_mass` (default), `j2` (IERS Conventions (2010) GM, J2, a_E) or
-    /// `grs80` (the GRS80 normal field in closed form).
-    #[param(value_type = Option<GravityModelName>, example = "point_mass")]
+    /// Potential model: `j2_sun_moon` (default: J2 about the CIP with the IERS Conventions
+    /// (2010) GM, J2, a_E, plus the Sun's and the Moon's tidal potentials from the planetary
+    /// ephemeris at each epoch; J2 alone, with a note, when a track lies outside the
+    /// ephemeris), `j2`, `grs80` (the GRS80 normal field in closed form) or `point_mass`.
+    #[param(value_type = Option<GravityModelName>, example = "j2_sun_moon")]
     pub gravity_model: Option<String>,
     /// Answer every `step_s` seconds (of TT) from the first epoch instead of at the input
     /// epochs; from 0.001 s to 315 537 897 600 s (the supported range of instants).
@@ -75,7 +77,8 @@ pub struct ProperTimeBodyOptions {
     /// Coordinate time the clock is compared with: `TT` (default) or `TCG`.
     #[schema(value_type = Option<ReferenceName>)]
     pub reference: Option<String>,
-    /// Earth potential: `point_mass` (default), `j2` or `grs80` (not yet `j2_sun_moon`).
+    /// Potential model: `j2_sun_moon` (default; J2 alone, with a note, when a track lies
+    /// outside the planetary ephemeris), `j2`, `grs80` or `point_mass`.
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
     /// Output step, seconds of TT, from 0.001 to 315 537 897 600.
@@ -162,7 +165,7 @@ pub struct ObjectInput {
         {"epoch": "2026-05-20T00:00:00", "position_m": [6828137.0, 0.0, 0.0], "velocity_m_s": [0.0, 4747.3, 5887.4]},
         {"epoch": "2026-05-20T00:01:00", "position_m": [6816514.4, 284532.4, 352852.0], "velocity_m_s": [-387.4, 4739.2, 5877.4]}
     ]}],
-    "options": {"reference": "TT", "interpolation_points": 2}
+    "options": {"reference": "TT", "gravity_model": "j2_sun_moon", "interpolation_points": 2}
 }))]
 pub struct EphemerisInput {
     /// Frame: `GCRS`, `GCRF`, `EME2000`, `J2000`, `ICRF` (inertial) or `ITRF`, `ITRF2014`..., `IGS20`...,
@@ -195,8 +198,13 @@ pub struct SampleOutput {
     pub tau_minus_t_s: f64,
     /// The part of the accumulated offset due to the velocity term -v^2/(2c^2), seconds.
     pub velocity_part_s: f64,
-    /// The part due to the gravity term (W0 - U)/c^2 against TT, -U/c^2 against TCG, seconds.
+    /// The part due to the Earth's gravity term (W0 - U)/c^2 against TT, -U/c^2 against TCG,
+    /// seconds.
     pub gravity_part_s: f64,
+    /// The part due to the tidal potentials of the Sun and the Moon, -w_tidal/c^2 (IERS
+    /// Conventions (2010) eq. 10.6), seconds; zero for models without them. tau - t =
+    /// initial_offset_s + velocity_part_s + gravity_part_s + tidal_part_s.
+    pub tidal_part_s: f64,
     /// The Keplerian periodic term -2 r.v / c^2 at this epoch, seconds (IS-GPS-200 20.3.3.3.3.1).
     pub periodic_s: f64,
     /// tau - t minus the periodic term and the least-squares line, seconds: what the broadcast
@@ -215,6 +223,9 @@ pub struct SummaryOutput {
     pub span_s: f64,
     /// tau - t accumulated from the first to the last epoch, seconds (without the initial offset).
     pub accumulated_s: f64,
+    /// The part of `accumulated_s` due to the tidal potentials of the Sun and the Moon,
+    /// seconds (zero for models without them).
+    pub tidal_part_s: f64,
     /// accumulated / span: the mean fractional rate offset (positive: runs fast).
     pub mean_rate: f64,
     /// The mean rate in microseconds per day.
@@ -248,7 +259,8 @@ pub struct ObjectOutput {
 pub struct ProperTimeAnswer {
     /// `TT` or `TCG`.
     pub reference: String,
-    /// `point_mass`, `j2` or `grs80`.
+    /// The model used: `j2_sun_moon`, `j2`, `grs80` or `point_mass` (the default `j2_sun_moon`
+    /// becomes `j2` when a track lies outside the planetary ephemeris; a note says so).
     pub gravity_model: String,
     /// The objects, in the order of the ephemeris.
     pub objects: Vec<ObjectOutput>,

@@ -8,6 +8,7 @@
 mod basis;
 mod validate;
 
+pub(crate) use validate::attos_difference_s;
 pub use validate::validate_track;
 
 use super::error::TrajectoryError;

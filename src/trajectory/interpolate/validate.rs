@@ -14,7 +14,7 @@ use crate::physics::time::instant::Instant;
 /// 5^18 < 2^53). A whole number of seconds therefore comes out exact (60 s reads 60, not
 /// 60.000000000000014 as a product with the inexact 1e-18 did), and no i128 division, which
 /// is slow, is needed.
-fn attos_difference_s(attos: i128) -> f64 {
+pub(crate) fn attos_difference_s(attos: i128) -> f64 {
     attos as f64 / 1e18
 }
 
