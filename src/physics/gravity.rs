@@ -182,17 +182,41 @@ pub fn tidal_potential_m2_s2(
 ) -> Result<f64, RateError> {
     require_finite("gm_m3_s2", gm_m3_s2)?;
     require_finite_vector("position_m", position_m)?;
-    let body_distance_m = distance_m("body_position_m", body_position_m)?;
+    distance_m("body_position_m", body_position_m)?;
     let from_body_m = [
         position_m[0] - body_position_m[0],
         position_m[1] - body_position_m[1],
         position_m[2] - body_position_m[2],
     ];
-    let at_clock = point_mass_potential_m2_s2(gm_m3_s2, from_body_m)?;
-    let at_geocentre = gm_m3_s2 / body_distance_m;
-    let gradient_term = gm_m3_s2 * dot(position_m, body_position_m)
-        / (body_distance_m * body_distance_m * body_distance_m);
-    Ok(at_clock - at_geocentre - gradient_term)
+    distance_m("position_m", from_body_m)?;
+    Ok(tidal_potential_unchecked_m2_s2(
+        gm_m3_s2,
+        body_position_m,
+        position_m,
+    ))
+}
+
+/// [`tidal_potential_m2_s2`] without its checks, for integrands evaluated many times along a
+/// track whose bodies come from the ephemeris: the same formula, GM [1/|x - x_A| - 1/|x_A| -
+/// x . x_A/|x_A|^3] (IERS Conventions (2010) ch. 10, eq. 10.6; IAU 2000 Resolution B1.3), in
+/// m^2/s^2. A non-finite input or a clock at the body's centre gives a non-finite or infinite
+/// result, which the caller must refuse (the proper-time integrator does).
+#[inline]
+pub fn tidal_potential_unchecked_m2_s2(
+    gm_m3_s2: f64,
+    body_position_m: [f64; 3],
+    position_m: [f64; 3],
+) -> f64 {
+    let from_body_m = [
+        position_m[0] - body_position_m[0],
+        position_m[1] - body_position_m[1],
+        position_m[2] - body_position_m[2],
+    ];
+    let inverse_body_distance = 1.0 / dot(body_position_m, body_position_m).sqrt();
+    let inverse_distance = 1.0 / dot(from_body_m, from_body_m).sqrt();
+    let gradient_term = dot(position_m, body_position_m)
+        * (inverse_body_distance * inverse_body_distance * inverse_body_distance);
+    gm_m3_s2 * (inverse_distance - inverse_body_distance - gradient_term)
 }
 
 #[cfg(test)]

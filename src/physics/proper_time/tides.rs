@@ -4,7 +4,7 @@
 //! In the geocentric metric (IAU 2000 Resolution B1.3; IERS Conventions (2010) eq. 10.6) the
 //! rate of a clock against TCG (or TT) has, beside -(v^2/2 + U_E)/c^2, the term -w_tidal/c^2
 //! with w_tidal the external potential less its value and gradient at the geocentre
-//! ([`sun_moon_tidal_potential_m2_s2`]). Unlike the Earth's part it depends on the epoch: the
+//! ([`crate::physics::solar_system::sun_moon_tidal_potential_m2_s2`]). Unlike the Earth's part it depends on the epoch: the
 //! integrand reads the Sun and the Moon at the TDB of each node, from a [`TidalTrack`] with
 //! nodes every hour of TT along the track, each node read from the ephemeris at
 //! TDB = TT + (TDB - TT) with the conversion context's model of TDB - TT.
@@ -15,9 +15,9 @@
 use std::fmt;
 
 use crate::physics::constants::SPEED_OF_LIGHT_SQUARED_M2_S2;
-use crate::physics::solar_system::{
-    sun_moon_tidal_potential_m2_s2, Ephemeris, EphemerisError, TidalTrack,
-};
+use crate::physics::gravity::tidal_potential_unchecked_m2_s2;
+use crate::physics::solar_system::gm::{GM_MOON_M3_S2, GM_SUN_M3_S2};
+use crate::physics::solar_system::{Ephemeris, EphemerisError, TidalTrack};
 use crate::physics::time::convert::{tdb_minus_tt_s, ConversionContext};
 use crate::physics::time::error::TimeError;
 use crate::physics::time::instant::seconds_f64_to_attos;
@@ -90,14 +90,18 @@ impl TidalIntegrand {
 
     /// The tidal part of d(tau)/dt - 1 at TT seconds `t_s` after the first epoch for a clock at
     /// the geocentric (GCRS) position `position_m`: -w_tidal/c^2 (IERS Conventions (2010)
-    /// eq. 10.6; [`sun_moon_tidal_potential_m2_s2`]), dimensionless. NaN outside the span or
+    /// eq. 10.6; [`crate::physics::solar_system::sun_moon_tidal_potential_m2_s2`]), dimensionless. NaN outside the span or
     /// for a position where the potential is undefined (the integrator refuses non-finite
     /// parts).
     pub fn rate_part(&self, t_s: f64, position_m: &[f64; 3]) -> f64 {
-        self.bodies
-            .bodies_at(t_s)
-            .and_then(|bodies| sun_moon_tidal_potential_m2_s2(&bodies, *position_m).ok())
-            .map_or(f64::NAN, |w_m2_s2| -w_m2_s2 / SPEED_OF_LIGHT_SQUARED_M2_S2)
+        let Some(bodies) = self.bodies.bodies_at(t_s) else {
+            return f64::NAN;
+        };
+        // The formula of `sun_moon_tidal_potential_m2_s2` without its input checks: the bodies
+        // come from the ephemeris, and a non-finite result is refused by the integrator.
+        let w_m2_s2 = tidal_potential_unchecked_m2_s2(GM_SUN_M3_S2, bodies.sun_m, *position_m)
+            + tidal_potential_unchecked_m2_s2(GM_MOON_M3_S2, bodies.moon_m, *position_m);
+        -w_m2_s2 / SPEED_OF_LIGHT_SQUARED_M2_S2
     }
 }
 

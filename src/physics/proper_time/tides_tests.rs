@@ -4,7 +4,7 @@
 use super::*;
 use crate::physics::proper_time::tests::navigation_orbit;
 use crate::physics::proper_time::{integrate_proper_time_at, ProperTimeOptions, Trajectory};
-use crate::physics::solar_system::TidalBodies;
+use crate::physics::solar_system::{sun_moon_tidal_potential_m2_s2, TidalBodies};
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::tdb_series::tdb_minus_tt_fast_s;
 
