@@ -181,3 +181,74 @@ async fn earth_fixed_tracks_take_the_tides_too() {
         );
     }
 }
+
+#[tokio::test]
+async fn tdb_epochs_follow_tdb_model_and_the_answer_names_it() {
+    // A TDB track: its epochs go to TT through the TDB - TT model asked for (and the Sun and
+    // the Moon are read at TT + TDB - TT of that model). `ephemeris` covers 1959-12-30 to
+    // 2101-01-02 TT only (README, "Two models of TDB - TT").
+    let server = TestServer::start().await;
+    let orbit = Kepler {
+        a_m: 26_561_750.0,
+        e: 0.01,
+        inclination_rad: 0.96,
+    };
+    let tdb_track = |start_s: f64| {
+        let mut document = json_ephemeris(&orbit, 300.0, 13);
+        document["time_scale"] = Value::from("TDB");
+        if let Some(states) = document["objects"][0]["states"].as_array_mut() {
+            for (k, state) in states.iter_mut().enumerate() {
+                state["epoch"] = Value::from(format!("{}", start_s + k as f64 * 300.0));
+            }
+        }
+        serde_json::to_vec(&document).unwrap_or_default()
+    };
+    // 2026 (j2000_s 8.3e8 s): both models; the answer names the one used.
+    let body = tdb_track(8.3e8);
+    let (status, _, series) = post_body(&server, "", "application/json", body.clone()).await;
+    assert_eq!(status, 200, "{series}");
+    assert_eq!(series["tdb_model"], "series");
+    let (status, _, ephemeris) = post_body(
+        &server,
+        "?tdb_model=ephemeris",
+        "application/json",
+        body.clone(),
+    )
+    .await;
+    assert_eq!(status, 200, "{ephemeris}");
+    assert_eq!(ephemeris["tdb_model"], "ephemeris");
+    // The two models differ by a few ns in TDB - TT (README): the same clock, the same
+    // picoseconds.
+    let accumulated = |answer: &Value| {
+        answer["objects"][0]["summary"]["accumulated_s"]
+            .as_f64()
+            .unwrap_or(f64::NAN)
+    };
+    assert!((accumulated(&series) - accumulated(&ephemeris)).abs() < 1e-15);
+    // 2150: outside the ephemeris model's span, a 422 naming it; the series covers any epoch.
+    let body = tdb_track(4.7e9);
+    let answer = post_body(
+        &server,
+        "?tdb_model=ephemeris&gravity_model=j2",
+        "application/json",
+        body.clone(),
+    )
+    .await;
+    let problem = assert_problem(&answer, 422, "outside_tdb_model_span");
+    assert!(problem["detail"].to_string().contains("2101"), "{problem}");
+    let (status, _, answer) =
+        post_body(&server, "?gravity_model=j2", "application/json", body).await;
+    assert_eq!(status, 200, "{answer}");
+    // An unknown model is named where it was given.
+    let mut document: Value = serde_json::from_slice(&tdb_track(8.3e8)).unwrap_or_default();
+    document["options"] = serde_json::json!({"tdb_model": "DE440"});
+    let answer = post_body(
+        &server,
+        "",
+        "application/json",
+        serde_json::to_vec(&document).unwrap_or_default(),
+    )
+    .await;
+    let problem = assert_problem(&answer, 422, "unknown_tdb_model");
+    assert_eq!(problem["field"], "options.tdb_model");
+}

@@ -695,6 +695,8 @@ mod tests {
                 EopLookupErrorKind::BeforeTable.as_str(),
                 EopLookupErrorKind::AfterTable.as_str(),
                 EphemerisErrorKind::OutsideSpan.as_str(),
+                TimeErrorKind::OutsideTdbModelSpan.as_str(),
+                crate::api::names::UNKNOWN_TDB_MODEL,
             ])
             .collect();
         expect("post", "/v1/clock/proper-time", &proper_time);

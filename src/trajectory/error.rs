@@ -86,3 +86,15 @@ impl fmt::Display for TrajectoryError {
 }
 
 impl std::error::Error for TrajectoryError {}
+
+/// The problem code of an epoch that cannot go to TT: the time engine's own code where it names
+/// a span the caller can act on (`outside_tdb_model_span`: TDB or TCB epochs with
+/// `tdb_model=ephemeris` outside its span), `bad_epoch` otherwise.
+pub fn epoch_error_code(error: &crate::physics::time::error::TimeError) -> &'static str {
+    use crate::physics::time::error::TimeErrorKind;
+    if error.code() == TimeErrorKind::OutsideTdbModelSpan.as_str() {
+        error.code()
+    } else {
+        "bad_epoch"
+    }
+}

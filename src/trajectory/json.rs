@@ -159,7 +159,12 @@ pub fn from_document<O>(
             })?;
             states.push(TrajectoryState {
                 epoch: to_storage(epoch, context).map_err(|e| {
-                    TrajectoryError::at_state("bad_epoch", &object.id, index, e.to_string())
+                    TrajectoryError::at_state(
+                        super::error::epoch_error_code(&e),
+                        &object.id,
+                        index,
+                        e.to_string(),
+                    )
                 })?,
                 position_m: state.position_m,
                 velocity_m_s: state.velocity_m_s,

@@ -8,7 +8,7 @@
 //! [`crate::physics::proper_time::EarthFixed`]); a track outside the table is refused
 //! (`eop_before_table`, `eop_after_table`) naming its first or last state.
 
-use super::error::TrajectoryError;
+use super::error::{epoch_error_code, TrajectoryError};
 use super::interpolate::{attos_difference_s, InterpolationOptions, Interpolator};
 use super::{Frame, ObjectTrack, TrajectorySet};
 use crate::physics::constants::TT_MINUS_TAI_ATTOS;
@@ -153,8 +153,9 @@ pub fn track_tt_extent(
         );
     };
     let tt = |epoch: &Instant| {
-        to_tt_attos(epoch, context)
-            .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(&track.id))
+        to_tt_attos(epoch, context).map_err(|e| {
+            TrajectoryError::new(epoch_error_code(&e), e.to_string()).for_object(&track.id)
+        })
     };
     let first_tt = tt(&first.epoch)?;
     let last_tt = tt(&last.epoch)?;
@@ -217,7 +218,9 @@ fn orientation_over_track(
     let start_tt = start
         .map(|epoch| to_tt_attos(&epoch, context))
         .transpose()
-        .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(&track.id))?
+        .map_err(|e| {
+            TrajectoryError::new(epoch_error_code(&e), e.to_string()).for_object(&track.id)
+        })?
         .unwrap_or(0);
     let last_index = track.states.len().saturating_sub(1);
     OrientationSpan::new(start_tt, span_s, |tt_attos| {
@@ -256,13 +259,15 @@ fn output_grid(
     if epochs_s.last().is_some_and(|t| *t < end_s) {
         epochs_s.push(end_s);
     }
-    let start_tt = to_tt_attos(&start, context)
-        .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(&track.id))?;
+    let start_tt = to_tt_attos(&start, context).map_err(|e| {
+        TrajectoryError::new(epoch_error_code(&e), e.to_string()).for_object(&track.id)
+    })?;
     let epochs = epochs_s
         .iter()
         .map(|t_s| {
-            from_tt_attos(start_tt + seconds_f64_to_attos(*t_s), track.scale, context)
-                .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(&track.id))
+            from_tt_attos(start_tt + seconds_f64_to_attos(*t_s), track.scale, context).map_err(
+                |e| TrajectoryError::new(epoch_error_code(&e), e.to_string()).for_object(&track.id),
+            )
         })
         .collect::<Result<Vec<_>, _>>()?;
     Ok((epochs_s, epochs))

@@ -19,6 +19,7 @@ use crate::physics::rate::{
 };
 use crate::physics::solar_system::{Ephemeris, EphemerisErrorKind};
 use crate::physics::time::convert::ConversionContext;
+use crate::physics::time::error::TimeErrorKind;
 use crate::physics::time::formats::{day_reading, write_instant, write_iso, ISO_DECIMALS};
 use crate::physics::time::instant::Instant;
 use crate::physics::time::leap_seconds::LeapTable;
@@ -166,7 +167,13 @@ fn integrate(
                             format!("{e} (the Sun and Moon tides need the bodies over the whole track; give another gravity_model to go without them)"),
                         )
                         .for_object(&track.id);
-                        problem.field = Some("gravity_model");
+                        // TDB - TT with `tdb_model=ephemeris` outside its span, or the
+                        // planetary ephemeris outside its own.
+                        problem.field = Some(if e.code() == TimeErrorKind::OutsideTdbModelSpan.as_str() {
+                            "tdb_model"
+                        } else {
+                            "gravity_model"
+                        });
                         problem
                     })?;
                 Some(tides)
@@ -195,7 +202,7 @@ pub fn compute(
     eop: &EopTable,
     ephemeris: &Ephemeris,
 ) -> Result<ProperTimeAnswer, ApiError> {
-    let context = ConversionContext::geocentric(table);
+    let context = ConversionContext::geocentric(table).with_tdb_model(request.tdb_model);
     let model = request.gravity_model.unwrap_or(GravityModel::J2SunMoon);
     let (model, fell_back, tracks) = match integrate(request, model, &context, eop, ephemeris) {
         Err(error)
@@ -216,6 +223,7 @@ pub fn compute(
     Ok(ProperTimeAnswer {
         reference: request.reference.as_str().to_string(),
         gravity_model: model.as_str().to_string(),
+        tdb_model: request.tdb_model.as_str().to_string(),
         objects,
         model_notes: model_notes(model, fell_back),
     })

@@ -7,13 +7,14 @@ use super::types::{ProperTimeBodyOptions, ProperTimeOptionsInput};
 use crate::api::clock::evaluate::{parse_gravity_model, parse_reference};
 use crate::api::error::ApiError;
 use crate::api::extract::{check_batch_size, parse_json};
-use crate::api::names::one_of;
+use crate::api::names::{one_of, parse_tdb_model};
 use crate::api::state::Limits;
 use crate::physics::constants::MAX_GEOCENTRIC_DISTANCE_M;
 use crate::physics::gravity::GravityModel;
 use crate::physics::rate::RateReference;
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::leap_seconds::LeapTable;
+use crate::physics::time::tdb_model::TdbModel;
 use crate::trajectory::json::{from_document, JsonEphemeris};
 use crate::trajectory::{read_oem, read_sp3, InterpolationOptions, TrajectoryError, TrajectorySet};
 
@@ -40,6 +41,8 @@ pub struct ProperTimeRequest {
     pub initial_offset_s: f64,
     /// Whether to answer the series.
     pub include_series: bool,
+    /// The model of TDB - TT (TDB and TCB epochs, the TDB of the Sun and the Moon).
+    pub tdb_model: TdbModel,
 }
 
 /// An ephemeris error as a 422 problem naming the line, object and index.
@@ -168,6 +171,7 @@ fn merge(
         interpolation_points: body.interpolation_points.or(query.interpolation_points),
         max_gap_s: body.max_gap_s.or(query.max_gap_s),
         include_series: body.include_series.or(query.include_series),
+        tdb_model: body.tdb_model.or(query.tdb_model),
     }
 }
 
@@ -186,7 +190,8 @@ pub fn read_request(
         )
     })?;
     check_options(&query, "")?;
-    let context = ConversionContext::geocentric(table);
+    let query_model = parse_tdb_model(query.tdb_model.as_deref(), "tdb_model")?;
+    let context = ConversionContext::geocentric(table).with_tdb_model(query_model);
     let (ephemeris, options) = match body_format(headers, query.format.as_deref(), text)? {
         BodyFormat::Json => {
             let input: JsonEphemeris<ProperTimeBodyOptions> = if declared_json(headers) {
@@ -210,7 +215,14 @@ pub fn read_request(
             if let Some(body_options) = &body_options {
                 check_options(body_options, "options.")?;
             }
-            let ephemeris = from_document(&input, &context).map_err(ephemeris_problem)?;
+            let model = body_options
+                .as_ref()
+                .and_then(|options| options.tdb_model.as_deref())
+                .map(|text| parse_tdb_model(Some(text), "options.tdb_model"))
+                .transpose()?
+                .unwrap_or(query_model);
+            let ephemeris =
+                from_document(&input, &context.with_tdb_model(model)).map_err(ephemeris_problem)?;
             (ephemeris, merge(query, body_options))
         }
         BodyFormat::Oem => (read_oem(text, &context).map_err(ephemeris_problem)?, query),
@@ -234,7 +246,9 @@ pub fn read_request(
         output_step_s: options.step_s,
     };
     interpolation.check().map_err(ephemeris_problem)?;
+    let tdb_model = parse_tdb_model(options.tdb_model.as_deref(), "tdb_model")?;
     Ok(ProperTimeRequest {
+        tdb_model,
         ephemeris,
         reference,
         gravity_model,

@@ -7,6 +7,7 @@
 use super::types::{ProperTimeOptionsInput, MAX_OPTION_SECONDS};
 use crate::api::clock::evaluate::{parse_gravity_model, parse_reference};
 use crate::api::error::ApiError;
+use crate::api::names::parse_tdb_model;
 use crate::physics::readable::readable;
 use crate::trajectory::MAX_POINTS;
 
@@ -22,6 +23,9 @@ pub fn check_options(options: &ProperTimeOptionsInput, prefix: &str) -> Result<(
     }
     if let Some(text) = options.gravity_model.as_deref() {
         parse_gravity_model(text, &field("gravity_model"))?;
+    }
+    if let Some(text) = options.tdb_model.as_deref() {
+        parse_tdb_model(Some(text), &field("tdb_model"))?;
     }
     if let Some(points) = options.interpolation_points {
         if !(2..=MAX_POINTS).contains(&points) {

@@ -5,7 +5,8 @@ use utoipa::{IntoParams, ToSchema};
 
 use crate::api::clock::types::{GravityModelName, ReferenceName};
 use crate::api::names::{
-    EphemerisFrameName, EphemerisVelocityMS, InstantFormatName, InstantString, PositionM, ScaleName,
+    EphemerisFrameName, EphemerisVelocityMS, InstantFormatName, InstantString, PositionM,
+    ScaleName, TdbModelName,
 };
 use crate::api::time::types::InstantForms;
 
@@ -64,6 +65,11 @@ pub struct ProperTimeOptionsInput {
     /// Include the series (default true); `false` answers the summaries only.
     #[param(example = true)]
     pub include_series: Option<bool>,
+    /// The model of TDB - TT for epochs given in TDB or TCB and for the TDB at which the Sun
+    /// and the Moon are read: `series` (default) or `ephemeris` (1959-12-30 to 2101-01-02 TT;
+    /// 422 `outside_tdb_model_span` elsewhere).
+    #[param(value_type = Option<TdbModelName>, example = "series")]
+    pub tdb_model: Option<String>,
 }
 
 /// The options of a JSON body: the query parameters of the same names, which they override.
@@ -97,6 +103,9 @@ pub struct ProperTimeBodyOptions {
     pub max_gap_s: Option<f64>,
     /// Include the series (default true).
     pub include_series: Option<bool>,
+    /// The model of TDB - TT: `series` (default) or `ephemeris`.
+    #[schema(value_type = Option<TdbModelName>)]
+    pub tdb_model: Option<String>,
 }
 
 impl From<ProperTimeBodyOptions> for ProperTimeOptionsInput {
@@ -110,6 +119,7 @@ impl From<ProperTimeBodyOptions> for ProperTimeOptionsInput {
             interpolation_points: options.interpolation_points,
             max_gap_s: options.max_gap_s,
             include_series: options.include_series,
+            tdb_model: options.tdb_model,
         }
     }
 }
@@ -262,6 +272,10 @@ pub struct ProperTimeAnswer {
     /// The model used: `j2_sun_moon`, `j2`, `grs80` or `point_mass` (the default `j2_sun_moon`
     /// becomes `j2` when a track lies outside the planetary ephemeris; a note says so).
     pub gravity_model: String,
+    /// The model of TDB - TT used (`series` or `ephemeris`): for epochs given in TDB or TCB
+    /// and for the TDB at which the Sun and the Moon of the tides are read.
+    #[schema(value_type = TdbModelName)]
+    pub tdb_model: String,
     /// The objects, in the order of the ephemeris.
     pub objects: Vec<ObjectOutput>,
     /// The model and its approximations.

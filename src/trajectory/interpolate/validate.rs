@@ -8,6 +8,7 @@ use crate::physics::constants::{GRS80_SEMI_MINOR_AXIS_M, SPEED_OF_LIGHT_M_S};
 use crate::physics::readable::readable;
 use crate::physics::time::convert::{to_tt_attos, ConversionContext};
 use crate::physics::time::instant::Instant;
+use crate::trajectory::error::epoch_error_code;
 
 /// An exact attosecond difference in seconds, converted once: one rounding of the i128 to f64
 /// and one correctly rounded division by 1e18, which is exact in binary64 (2^18 5^18, with
@@ -48,7 +49,7 @@ pub fn validate_track(
     }
     let tt_of = |index: usize, epoch: &Instant| {
         to_tt_attos(epoch, context)
-            .map_err(|e| TrajectoryError::at_state("bad_epoch", id, index, e.to_string()))
+            .map_err(|e| TrajectoryError::at_state(epoch_error_code(&e), id, index, e.to_string()))
     };
     let first_tt = match track.states.first() {
         Some(state) => tt_of(0, &state.epoch)?,
