@@ -147,6 +147,12 @@ async fn csv_and_json_carry_the_same_values() {
                 assert_eq!(cell, "");
                 continue;
             }
+            // TDB is a target: the model of TDB - TT is named in both forms.
+            if column == "tdb_model" {
+                assert_eq!(conversion["tdb_model"].as_str(), Some(cell.as_str()));
+                assert_eq!(cell, "series");
+                continue;
+            }
             let (scale, form) = column.split_once('_').unwrap_or_default();
             let result = conversion["results"]
                 .as_array()
@@ -228,4 +234,35 @@ async fn the_documented_csv_example_is_what_the_server_writes() {
         example.as_str(),
         Some(response.text().await.unwrap_or_default().as_str())
     );
+}
+
+#[tokio::test]
+async fn csv_names_the_tdb_model_like_json() {
+    // A conversion to TCB with the ephemeris model: the CSV carries `tdb_model` before
+    // `warnings`, as the JSON answer does; without TDB, TCB, TCL or TL there is no such column
+    // (the TAI case above).
+    let server = TestServer::start().await;
+    let response = client()
+        .get(server.url(&format!(
+            "/v1/time/convert?at={AT}&to=TCB&forms=j2000_s&tdb_model=ephemeris"
+        )))
+        .header("accept", "text/csv")
+        .send()
+        .await
+        .unwrap_or_else(|e| panic!("request failed: {e}"));
+    assert_eq!(response.status().as_u16(), 200);
+    let text = response.text().await.unwrap_or_default();
+    let mut lines = text.split("\r\n");
+    assert_eq!(lines.next(), Some("epoch,TCB_j2000_s,tdb_model,warnings"));
+    let row = lines.next().unwrap_or_default();
+    assert!(row.ends_with(",ephemeris,"), "{row}");
+    let (status, _, json) = get_json(
+        &server,
+        &format!("/v1/time/convert?at={AT}&to=TCB&forms=j2000_s&tdb_model=ephemeris"),
+    )
+    .await;
+    assert_eq!(status, 200, "{json}");
+    assert_eq!(json["tdb_model"], "ephemeris");
+    let cell = row.split(',').nth(1).unwrap_or_default();
+    assert_eq!(json["results"][0]["j2000_s"].as_str(), Some(cell));
 }

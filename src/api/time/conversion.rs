@@ -15,7 +15,7 @@ use crate::physics::time::scale::Scale;
 use crate::physics::time::tdb_model::TdbModel;
 
 /// Whether a conversion from `from` into `targets` goes through TDB - TT.
-fn uses_tdb(from: Scale, targets: &[Scale]) -> bool {
+pub(crate) fn uses_tdb(from: Scale, targets: &[Scale]) -> bool {
     let barycentric =
         |scale: Scale| matches!(scale, Scale::Tdb | Scale::Tcb | Scale::Tcl | Scale::Tl);
     barycentric(from) || targets.iter().any(|&target| barycentric(target))

@@ -5,7 +5,7 @@ use axum::http::{header, HeaderMap};
 use axum::response::{IntoResponse, Response};
 
 use super::broadcast_week::read_broadcast_week;
-use super::conversion::{convert_one, FieldName};
+use super::conversion::{convert_one, uses_tdb, FieldName};
 use super::csv::{self, CSV_CONTENT_TYPE};
 use super::forms::FormSelection;
 use super::json_view::{conversion_bytes_hint, json_bytes, BatchJson, ConversionJson};
@@ -54,13 +54,13 @@ fn respond((content_type, body): (&'static str, Vec<u8>)) -> Response {
 }
 
 /// An example CSV answer (UTC -> TAI, TDB with `forms=iso,j2000_s`).
-const CSV_EXAMPLE: &str = "epoch,TAI_iso,TAI_j2000_s,TDB_iso,TDB_j2000_s,warnings\r\n2026-03-14T06:30:00.123456789012,2026-03-14T06:30:37.123456789012,826741837.123456789012,2026-03-14T06:31:09.308982770736,826741869.308982770736444629,\r\n";
+const CSV_EXAMPLE: &str = "epoch,TAI_iso,TAI_j2000_s,TDB_iso,TDB_j2000_s,tdb_model,warnings\r\n2026-03-14T06:30:00.123456789012,2026-03-14T06:30:37.123456789012,826741837.123456789012,2026-03-14T06:31:09.308982770736,826741869.308982770736444629,series,\r\n";
 
 /// Converts one instant into one or more scales.
 #[utoipa::path(get, path = "/v1/time/convert", tag = "time",
     params(ConvertQuery),
     responses(
-        (status = 200, description = "The instant in each target scale: JSON, or CSV (RFC 4180, a header row and one row) when `Accept` prefers `text/csv`", content(
+        (status = 200, description = "The instant in each target scale: JSON, or CSV (RFC 4180, a header row and one row; a `tdb_model` column before `warnings` names the model of TDB - TT when TDB, TCB, TCL or TL is involved, as `tdb_model` does in JSON) when `Accept` prefers `text/csv`", content(
             (Conversion = "application/json"),
             (String = "text/csv", example = json!(CSV_EXAMPLE)))),
         QueryProblems,
@@ -125,8 +125,9 @@ pub async fn convert_get(
         ),
         AnswerType::Csv => {
             let mut out = Vec::with_capacity(256);
-            csv::push_header(&targets, &forms, &mut out);
-            csv::push_row(&query.at, &converted, &forms, &mut out);
+            let names_model = uses_tdb(from, &targets);
+            csv::push_header(&targets, &forms, names_model, &mut out);
+            csv::push_row(&query.at, &converted, &forms, names_model, &mut out);
             (CSV_CONTENT_TYPE, out)
         }
     };
@@ -137,7 +138,7 @@ pub async fn convert_get(
 #[utoipa::path(post, path = "/v1/time/convert", tag = "time",
     request_body = ConvertBatchRequest,
     responses(
-        (status = 200, description = "One conversion per epoch, in order: JSON, or CSV (RFC 4180: a header row `epoch,<SCALE>_<form>...,warnings`, then one row per epoch) when `Accept` prefers `text/csv`", content(
+        (status = 200, description = "One conversion per epoch, in order: JSON, or CSV (RFC 4180: a header row `epoch,<SCALE>_<form>...,warnings`, with `tdb_model` before `warnings` when TDB, TCB, TCL or TL is involved, as in JSON; then one row per epoch) when `Accept` prefers `text/csv`", content(
             (ConversionBatch = "application/json"),
             (String = "text/csv", example = json!(CSV_EXAMPLE)))),
         JsonBodyProblems,
@@ -217,9 +218,16 @@ pub async fn convert_post(
             }
             AnswerType::Csv => {
                 let mut out = Vec::with_capacity(64 * request.epochs.len());
-                csv::push_header(&targets, &forms, &mut out);
+                let names_model = uses_tdb(from, &targets);
+                csv::push_header(&targets, &forms, names_model, &mut out);
                 for (index, text) in request.epochs.iter().enumerate() {
-                    csv::push_row(text, &convert_at(index, text)?, &forms, &mut out);
+                    csv::push_row(
+                        text,
+                        &convert_at(index, text)?,
+                        &forms,
+                        names_model,
+                        &mut out,
+                    );
                 }
                 Ok((CSV_CONTENT_TYPE, out))
             }

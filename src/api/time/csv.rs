@@ -23,22 +23,45 @@ fn push_field(text: &str, out: &mut Vec<u8>) {
     }
 }
 
-/// The header row: `epoch,TDB_iso,...,warnings`.
-pub fn push_header(targets: &[Scale], forms: &FormSelection, out: &mut Vec<u8>) {
+/// The header row: `epoch,TDB_iso,...,warnings`, with a `tdb_model` column before `warnings`
+/// when `names_tdb_model` (the conversion involves TDB, TCB, TCL or TL, whose JSON answers
+/// name the model of TDB - TT as `tdb_model` too).
+pub fn push_header(
+    targets: &[Scale],
+    forms: &FormSelection,
+    names_tdb_model: bool,
+    out: &mut Vec<u8>,
+) {
     out.extend_from_slice(b"epoch");
     for target in targets {
         forms.push_csv_header(target.as_str(), out);
+    }
+    if names_tdb_model {
+        out.extend_from_slice(b",tdb_model");
     }
     out.extend_from_slice(b",warnings");
     out.extend_from_slice(LINE_END);
 }
 
-/// One row: the epoch as sent, the selected forms of each result, and the warnings joined by
-/// `; ` (an empty cell when there are none).
-pub fn push_row(epoch: &str, converted: &Converted, forms: &FormSelection, out: &mut Vec<u8>) {
+/// One row: the epoch as sent, the selected forms of each result, the model of TDB - TT when
+/// the header names it (`names_tdb_model`), and the warnings joined by `; ` (an empty cell
+/// when there are none).
+pub fn push_row(
+    epoch: &str,
+    converted: &Converted,
+    forms: &FormSelection,
+    names_tdb_model: bool,
+    out: &mut Vec<u8>,
+) {
     push_field(epoch, out);
     for result in &converted.results {
         forms.push_csv_cells(&result.digits, out);
+    }
+    if names_tdb_model {
+        out.push(b',');
+        if let Some(model) = converted.tdb_model {
+            out.extend_from_slice(model.as_str().as_bytes());
+        }
     }
     out.push(b',');
     if !converted.warnings.is_empty() {
