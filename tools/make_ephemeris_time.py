@@ -41,9 +41,12 @@ the largest, contributes about 2e-18 to the rate), the bodies' figures (J2 of th
 Earth's and the Moon's tidal terms, which are not part of the external potential at the centre
 of mass in eq. 10.4 beyond point masses).
 
-GM values (km^3/s^2, TDB-compatible): DE440 (Park et al. 2021, Astron. J. 161:105, table of
-constants), recalled from memory of the DE440 header constants; EMRAT splits the Earth-Moon
-barycentre's GM into the Earth's and the Moon's.
+GM values (km^3/s^2, TDB-compatible): DE440 (Park et al. 2021, Astron. J. 161:105), read from
+the GM table in the comment area of `de440.bsp` itself (the km^3/s^2 column; GM3 the Earth,
+GMM the Moon, the planets' systems GM1..GM9, GMS the Sun), the table gm.rs takes its values
+from. (Before, the values were typed in from memory; the Earth-Moon barycentre's GM was
+403503.235502 instead of the table's 403503.235625, split by EMRAT: a relative 3e-10 in the
+Earth's and the Moon's GM.)
 
 Integration: Chebyshev interpolation of the integrand on 4-day pieces (32 nodes each),
 integrated term by term (Numerical Recipes 3rd ed. sec. 5.9); the fit: Chebyshev pieces of
@@ -81,35 +84,52 @@ TDB0_S = -6.55e-5
 T0_JD = 2443144.5003725  # 1977-01-01T00:00:32.184 TT
 T0_S = (T0_JD - J2000_JD) * DAY_S  # seconds since J2000.0 (of the same scale)
 
-# DE440 GM values, km^3/s^2 (Park et al. 2021; from memory of the DE440 header).
-GM_SUN = 132712440041.279419
-GM_MERCURY = 22031.868551
-GM_VENUS = 324858.592000
-GM_EMB = 403503.235502
-GM_MARS_SYSTEM = 42828.375816
-GM_JUPITER_SYSTEM = 126712764.100000
-GM_SATURN_SYSTEM = 37940584.841800
-GM_URANUS_SYSTEM = 5794556.400000
-GM_NEPTUNE_SYSTEM = 6836527.100580
-GM_PLUTO_SYSTEM = 975.500000
-EMRAT = 81.3005682214972154
-GM_MOON = GM_EMB / (1.0 + EMRAT)
-GM_EARTH = GM_EMB - GM_MOON
-
-# Body name -> (GM, SPK chain from the solar-system barycentre).
-BODIES = {
-    "sun": (GM_SUN, [(0, 10)]),
-    "mercury": (GM_MERCURY, [(0, 1)]),
-    "venus": (GM_VENUS, [(0, 2)]),
-    "earth": (GM_EARTH, [(0, 3), (3, 399)]),
-    "moon": (GM_MOON, [(0, 3), (3, 301)]),
-    "mars": (GM_MARS_SYSTEM, [(0, 4)]),
-    "jupiter": (GM_JUPITER_SYSTEM, [(0, 5)]),
-    "saturn": (GM_SATURN_SYSTEM, [(0, 6)]),
-    "uranus": (GM_URANUS_SYSTEM, [(0, 7)]),
-    "neptune": (GM_NEPTUNE_SYSTEM, [(0, 8)]),
-    "pluto": (GM_PLUTO_SYSTEM, [(0, 9)]),
+# Body name -> (name of its GM in the kernel's GM table, SPK chain from the solar-system
+# barycentre). The GM values are read from the comment area of the kernel itself
+# (`kernel_gm_km3_s2`): the DE440 table of Park et al. 2021, the same table
+# src/physics/solar_system/gm.rs takes its values from.
+BODY_CHAINS = {
+    "sun": ("GMS", [(0, 10)]),
+    "mercury": ("GM1", [(0, 1)]),
+    "venus": ("GM2", [(0, 2)]),
+    "earth": ("GM3", [(0, 3), (3, 399)]),
+    "moon": ("GMM", [(0, 3), (3, 301)]),
+    "mars": ("GM4", [(0, 4)]),
+    "jupiter": ("GM5", [(0, 5)]),
+    "saturn": ("GM6", [(0, 6)]),
+    "uranus": ("GM7", [(0, 7)]),
+    "neptune": ("GM8", [(0, 8)]),
+    "pluto": ("GM9", [(0, 9)]),
 }
+
+
+def kernel_gm_km3_s2(kernel):
+    """The GM table of the kernel's comment area: name -> km^3/s^2 (its last column).
+
+    The rows read `GMS  2.9591220828411956e-04  1.000000  132712440041.279419` (au^3/day^2,
+    GM_Sun/GM, km^3/s^2); every name of BODY_CHAINS must be there.
+    """
+    table = {}
+    for line in kernel.comments().splitlines():
+        fields = line.split()
+        if len(fields) == 4 and fields[0].startswith("GM"):
+            try:
+                table.setdefault(fields[0], float(fields[3]))
+            except ValueError:
+                continue
+    missing = [name for name, _ in BODY_CHAINS.values() if name not in table]
+    if missing:
+        raise SystemExit(f"GM values {missing} not in the comment area of {DE440_PATH}")
+    return table
+
+
+def bodies(kernel):
+    """Body name -> (GM km^3/s^2, SPK chain), GM from the kernel's own table."""
+    gm = kernel_gm_km3_s2(kernel)
+    return {body: (gm[name], chain) for body, (name, chain) in BODY_CHAINS.items()}
+
+
+BODIES = {}
 
 # Integration grid (TDB days since J2000.0) and fit (TT days since J2000.0).
 INTEGRATION_PIECE_DAYS = 4.0
@@ -323,6 +343,7 @@ def annual_amplitude_s(values, tt_s):
 
 def main():
     kernel = SPK.open(DE440_PATH)
+    BODIES.update(bodies(kernel))
     start_days = FIT_START_DAYS - 2.0
     end_days = FIT_START_DAYS + PIECE_DAYS * PIECE_COUNT + 2.0
     earth = coordinate_time_integral(kernel, "earth", start_days, end_days)
