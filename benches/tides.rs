@@ -3,8 +3,8 @@
 //! Run: `cargo bench --bench tides`. The baseline is the J2 rate of the same state measured in
 //! the same run (`state_rate_about_axis`); the targets are a tidal-model rate <= 1 us
 //! and 86 400 states with tides < 40 ms (here the tidal rates of 86 400 states one second
-//! apart, the interpolated Sun and Moon included: the proper-time integrators do not take the
-//! tides yet).
+//! apart, the interpolated Sun and Moon included; proper time with the tides has its own bench,
+//! `proper_time_tides`).
 
 use criterion::{black_box, criterion_group, criterion_main, Criterion};
 use eigenzeit::physics::gravity::GravityModel;
