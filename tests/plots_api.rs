@@ -53,10 +53,11 @@ async fn proper_time_plot_draws_the_csv_numbers() {
         ids.dedup();
         ids
     };
-    // The demo file (demo-data/README) holds seven invented objects: two panels each.
+    // The demo file (demo-data/README) holds seven invented objects: three panels each with
+    // the default model j2_sun_moon (the tidal part on the third).
     assert_eq!(ids.len(), 7);
-    assert_eq!(panels.len(), 2 * ids.len());
-    for (object, pair) in ids.iter().zip(panels.chunks(2)) {
+    assert_eq!(panels.len(), 3 * ids.len());
+    for (object, pair) in ids.iter().zip(panels.chunks(3)) {
         assert!(
             svg.contains(&format!("{object}: tau - t against TT")),
             "{object}"
@@ -65,6 +66,7 @@ async fn proper_time_plot_draws_the_csv_numbers() {
         for (panel, columns) in pair.iter().zip([
             &["tau_minus_t_s", "velocity_part_s", "gravity_part_s"][..],
             &["periodic_s"][..],
+            &["tidal_part_s"][..],
         ]) {
             let (x_tol, y_tol) = panel.resolution();
             for name in columns {
@@ -100,7 +102,19 @@ async fn proper_time_plot_draws_the_csv_numbers() {
         .await
         .expect("request");
     let svg = summaries_only.text().await.expect("svg");
+    assert_eq!(read_svg(&svg).map(|p| p.len()).unwrap_or(0), 21);
+    // Without the tides (a model asked for), two panels per object.
+    let without_tides = client()
+        .post(server.url("/v1/clock/proper-time?gravity_model=j2"))
+        .header("content-type", "application/ccsds-oem")
+        .header("accept", "image/svg+xml")
+        .body(OEM)
+        .send()
+        .await
+        .expect("request");
+    let svg = without_tides.text().await.expect("svg");
     assert_eq!(read_svg(&svg).map(|p| p.len()).unwrap_or(0), 14);
+    assert!(!svg.contains("tidal part"));
 }
 
 #[tokio::test]

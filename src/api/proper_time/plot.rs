@@ -1,11 +1,12 @@
 //! The proper-time answer as a figure: per object, tau - t with its velocity and gravity parts
-//! on one panel and the periodic part on its own panel, against the time elapsed since the
-//! object's first epoch.
+//! on one panel, the periodic part on its own panel and, with the tides (`j2_sun_moon`), the
+//! tidal part on a third, against the time elapsed since the object's first epoch.
 
 use super::types::{ObjectOutput, ProperTimeAnswer, SampleOutput};
 use crate::api::plots::figure::{
     elapsed_unit, seconds_unit, short_iso, Figure, Panel, Series, XTicks,
 };
+use crate::physics::gravity::GravityModel;
 
 /// Most samples drawn per line; a longer series is drawn every k-th sample (the first and the
 /// last always), and the subtitle says so. The CSV answer keeps every sample.
@@ -33,7 +34,7 @@ fn largest_abs(samples: &[&SampleOutput], part: impl Fn(&SampleOutput) -> f64) -
         .fold(0.0, f64::max)
 }
 
-fn object_panels(object: &ObjectOutput, reference: &str) -> Vec<Panel> {
+fn object_panels(object: &ObjectOutput, reference: &str, tides: bool) -> Vec<Panel> {
     let all = object.series.as_deref().unwrap_or(&[]);
     let samples: Vec<&SampleOutput> = drawn_indices(all.len())
         .into_iter()
@@ -47,8 +48,22 @@ fn object_panels(object: &ObjectOutput, reference: &str) -> Vec<Panel> {
         .max(largest_abs(&samples, |s| s.velocity_part_s))
         .max(largest_abs(&samples, |s| s.gravity_part_s));
     let periodic_scale = largest_abs(&samples, |s| s.periodic_s);
+    let tidal_scale = largest_abs(&samples, |s| s.tidal_part_s);
     let start = short_iso(object.summary.start.iso.as_deref().unwrap_or_default());
-    vec![
+    let tidal = tides.then(|| Panel {
+        x: x.clone(),
+        heading: format!("{}: tidal part (the Sun and the Moon)", object.id),
+        y_quantity: "tidal part".to_string(),
+        y_unit: seconds_unit(tidal_scale),
+        series: vec![Series {
+            name: "tidal part".to_string(),
+            column: "tidal_part_s".to_string(),
+            values: column(|s| s.tidal_part_s),
+        }],
+        marks: Vec::new(),
+        zero_line: true,
+    });
+    let mut panels = vec![
         Panel {
             x: x.clone(),
             heading: format!(
@@ -90,7 +105,9 @@ fn object_panels(object: &ObjectOutput, reference: &str) -> Vec<Panel> {
             marks: Vec::new(),
             zero_line: true,
         },
-    ]
+    ];
+    panels.extend(tidal);
+    panels
 }
 
 /// The figure of a proper-time answer (its series must be present).
@@ -115,11 +132,18 @@ pub fn figure(answer: &ProperTimeAnswer) -> Figure {
         String::new()
     };
     let ids: Vec<&str> = answer.objects.iter().map(|o| o.id.as_str()).collect();
+    let tides = answer.gravity_model == GravityModel::J2SunMoon.as_str();
     Figure {
         title: format!("Proper time along the ephemeris: {}", ids.join(", ")),
         subtitle: format!(
-            "tau - t of each object's clock against {}, gravity model {}; velocity part -v^2/2c^2, gravity part from the potential (IERS Conventions (2010) eq. 10.6){sampling}",
-            answer.reference, answer.gravity_model
+            "tau - t of each object's clock against {}, gravity model {}; velocity part -v^2/2c^2, gravity part from the Earth's potential{} (IERS Conventions (2010) eq. 10.6){sampling}",
+            answer.reference,
+            answer.gravity_model,
+            if tides {
+                ", tidal part from the Sun's and the Moon's (on its own panel)"
+            } else {
+                ""
+            }
         ),
         x_quantity: "time since the object's first epoch".to_string(),
         x_column: "elapsed_s".to_string(),
@@ -129,7 +153,7 @@ pub fn figure(answer: &ProperTimeAnswer) -> Figure {
         panels: answer
             .objects
             .iter()
-            .flat_map(|object| object_panels(object, &answer.reference))
+            .flat_map(|object| object_panels(object, &answer.reference, tides))
             .collect(),
     }
 }
