@@ -11,14 +11,15 @@ use crate::api::extract::{check_batch_size, compute, JsonBody};
 use crate::api::state::AppState;
 
 /// Rate offsets of clocks (state vectors, orbits, ground sites, lunar sites) relative to TT or
-/// TCG, split into the velocity and gravity parts, with the frequency offset and the periodic
+/// TCG (lunar sites with an epoch or a span also against TCL and TL, and the proper time over
+/// the span), split into the velocity and gravity parts, with the frequency offset and the periodic
 /// term where they apply. Positive rates: the clock runs fast relative to the reference.
 #[utoipa::path(post, path = "/v1/clock/rate", tag = "clock",
     request_body = RateRequest,
     responses(
         (status = 200, description = "One answer per item, in order", body = RateBatchAnswer),
         JsonBodyProblems,
-        (status = 422, description = "A value cannot be used; `field` names it (e.g. `items[3].orbit.eccentricity`) and `code` says why: epoch_required (a GCRS state with a zonal model and no epoch, any state with the Sun and Moon tide model and no epoch; outside_ephemeris_span for that model at an epoch outside the planetary ephemeris; the epoch's own codes malformed_instant, impossible_date, unknown_scale; for an ITRF state with an epoch eop_before_table, eop_after_table: the epoch must lie inside the Earth orientation table in force), subject_missing, subject_ambiguous, unknown_reference, unknown_gravity_model, unknown_frame, unknown_height_reference, anomaly_ambiguous, empty_batch, batch_too_large, not_finite, speed_not_below_c, below_surface, beyond_model_range, invalid_semi_major_axis, invalid_eccentricity, latitude_out_of_range, angle_out_of_range, unsupported_gravity_model, input_required, invalid_frequency, rate_out_of_range", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it (e.g. `items[3].orbit.eccentricity`) and `code` says why: epoch_required (a GCRS state with a zonal model and no epoch, any state with the Sun and Moon tide model and no epoch; outside_ephemeris_span for that model at an epoch outside the planetary ephemeris; the epoch's own codes malformed_instant, impossible_date, unknown_scale; for an ITRF state with an epoch eop_before_table, eop_after_table: the epoch must lie inside the Earth orientation table in force), subject_missing, subject_ambiguous, unknown_reference, unknown_gravity_model, unknown_frame, unknown_height_reference, anomaly_ambiguous, empty_batch, batch_too_large, not_finite, speed_not_below_c, below_surface, beyond_model_range, invalid_semi_major_axis, invalid_eccentricity, latitude_out_of_range, angle_out_of_range, unsupported_gravity_model, input_required, invalid_frequency, rate_out_of_range; a lunar site with `epoch` or `span`: outside_ephemeris_span, outside_lunar_time_span (the epoch, the anomalistic month around it or a span end outside 1959-12-30 .. 2101-01-02 TDB), the epoch's own codes (malformed_instant, impossible_date, unknown_scale, utc_before_1960, ...), invalid_value (a span that does not end after its start), beyond_model_range (a span longer than 3660 days, or a height above 100 km)", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn rate(
     State(state): State<AppState>,

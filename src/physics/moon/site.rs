@@ -236,3 +236,11 @@ pub fn tl_rate_against_tt_at_centres(tdb_s: f64) -> Result<f64, TimeError> {
             / (2.0 * H_S),
     )
 }
+
+/// The model notes of the `de440_ephemeris` lunar-site model.
+pub const LUNAR_EPHEMERIS_NOTES: [&str; 4] = [
+    "lunar_site model de440_ephemeris: the Moon's orbit from DE440 (Park et al. 2021), its orientation from the IAU rotation model (Archinal et al. 2018, coefficients from memory; sub-Earth librations checked), the lunar field to degree 2 (GRAIL GL0660B J2 and C22, Konopliv et al. 2013, from memory), the Earth's and the Sun's tidal potentials at the site",
+    "against TT and TCG: geocentric frame (IAU 2000 Resolution B1.3, IERS Conventions (2010) eq. 10.6), as an Earth station compares the clock; against TCL: selenocentric frame (IAU 2024 Resolution II, the same metric with the Moon for the Earth); against TL: TCL's plus L_L = 3.1398e-11 (TL is a proposal, Turyshev et al. arXiv:2406.16147)",
+    "the coordinate-simultaneity term (TL - TT through the scale relations at the two centres minus the clocks' TL against TT; the v.x/c^2 parts of the transformations, about 126 us monthly) is a property of the coordinates, reported apart and never added to the clock",
+    "left out: the 1/c^4 terms (about 1e-18), the planets' tides at the Moon (below 1e-17), lunar degree 3 and above and the topography-correlated field (up to a few 1e-15), the height above the 1737.4 km sphere rather than the selenoid",
+];

@@ -71,6 +71,11 @@ pub struct LunarSiteSpan {
     /// The coordinate-simultaneity term over the span: the scales' TL - TT change minus the
     /// clocks' ((tau - TT) - (tau - TL)), s.
     pub simultaneity_s: f64,
+    /// The mean velocity part of the rate against TT and TCG, -<v^2>/(2 c^2) (geocentric).
+    pub geocentric_sr_mean: f64,
+    /// The mean velocity part of the rate against TCL and TL, -<v_s^2>/(2 c^2)
+    /// (selenocentric).
+    pub selenocentric_sr_mean: f64,
     /// The integration step used, s.
     pub step_s: f64,
     /// The periodic part against TT at every second node: (TDB s since J2000, value s).
@@ -116,6 +121,8 @@ pub fn lunar_site_over_span(
     let h = length_s / steps as f64;
     let mut tcl = vec![0.0; steps + 1];
     let mut tt = vec![0.0; steps + 1];
+    let mut geo_sr = vec![0.0; steps + 1];
+    let mut sel_sr = vec![0.0; steps + 1];
     for k in 0..=steps {
         let t = if k == steps {
             end_tdb_s
@@ -125,6 +132,8 @@ pub fn lunar_site_over_span(
         let rates = rates_at(body_fixed_m, t, ephemeris)?;
         tcl[k] = rates.tcl.total();
         tt[k] = rates.tt.total();
+        geo_sr[k] = rates.tt.sr;
+        sel_sr[k] = rates.tcl.sr;
     }
     let (tcl_curve, tt_curve) = (cumulative_simpson(&tcl, h), cumulative_simpson(&tt, h));
     let tl_minus_tt_scales_s =
@@ -141,6 +150,16 @@ pub fn lunar_site_over_span(
         tt: tt_acc,
         tl_minus_tt_scales_s,
         simultaneity_s: tl_minus_tt_scales_s - clocks_tl_minus_tt_s,
+        geocentric_sr_mean: cumulative_simpson(&geo_sr, h)
+            .last()
+            .copied()
+            .unwrap_or(0.0)
+            / length_s,
+        selenocentric_sr_mean: cumulative_simpson(&sel_sr, h)
+            .last()
+            .copied()
+            .unwrap_or(0.0)
+            / length_s,
         step_s: h,
         tt_periodic_s: tt_curve
             .iter()
