@@ -184,7 +184,8 @@ pub struct RateItem {
         {"orbit": {"semi_major_axis_m": 26561750.0, "eccentricity": 0.01, "mean_anomaly_deg": 30.0}},
         {"ground_site": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0}},
         {"state": {"frame": "GCRS", "position_m": [7000000.0, 0.0, 0.0], "velocity_m_s": [0.0, 7546.05, 0.0]}},
-        {"lunar_site": {"latitude_deg": -89.5, "longitude_deg": 0.0}}
+        {"lunar_site": {"latitude_deg": -89.5, "longitude_deg": 36.0, "height_m": 1200.0,
+            "epoch": "2026-03-14T06:30:00"}}
     ],
     "reference": "TT",
     "nominal_frequency_hz": 10.23e6

@@ -79,7 +79,7 @@ pub fn lunar_site_geocentric_state(site: &LunarSite) -> Result<([f64; 3], [f64; 
 
 /// The model notes of [`lunar_site_rate`].
 pub const LUNAR_NOTES: [&str; 2] = [
-    "mean rate in the geocentric frame: the Moon on a circular orbit of 384 400 km at the two-body speed, rotating synchronously; the monthly periodic term of the lunar eccentricity (about 0.47 us amplitude) is not included",
+    "lunar_site model circular_orbit (give `epoch` or `span` for the de440_ephemeris model): mean rate in the geocentric frame, the Moon on a circular orbit of 384 400 km at the two-body speed, rotating synchronously; the monthly periodic term of the lunar eccentricity (about 0.47 us amplitude) is not included",
     "the Moon's own potential as a point mass (GM of JPL DE430) through its geocentric tidal part; the Sun's tidal potential (GM_Sun D^2/d^3 P2 with D the Earth-Moon distance: a mean of +1.6e-14, 0.0014 us/day, varying over a month between about -3.3e-14 and +6.5e-14, -0.003 to +0.006 us/day), the lunar J2 (about 6e-15), librations and the tilts of the lunar axis and orbit are neglected",
 ];
 /// The model note of [`lunar_site_rate`] when J2 was asked for: the Earth is a point mass there.
