@@ -202,3 +202,16 @@ async fn demo_request_answers() {
     let mean = num(&answer["lunar"]["over_span"]["tt"]["mean_us_per_day"]);
     assert!((mean - 56.02 - SITE_SHARE_US_DAY).abs() < 0.01, "{mean}");
 }
+
+/// At most 100 lunar sites with an epoch or a span per request (each integrates the DE440
+/// orbit): 101 are refused with 422 `batch_too_large` naming `items`.
+#[tokio::test]
+async fn too_many_lunar_items_are_refused() {
+    let server = TestServer::start().await;
+    let item = json!({"lunar_site": {"latitude_deg": 0.0, "longitude_deg": 0.0,
+        "epoch": "2026-03-01T00:00:00"}});
+    let request = json!({"items": vec![item; 101]});
+    let answer = post_json(&server, "/v1/clock/rate", &request).await;
+    let problem = assert_problem(&answer, 422, "batch_too_large");
+    assert_eq!(problem["field"], "items");
+}

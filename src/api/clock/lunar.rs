@@ -31,6 +31,38 @@ use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::lunar::TL_WARNING;
 use crate::physics::time::scale::Scale;
 
+/// The most items with the `de440_ephemeris` lunar model in one request: each integrates up to
+/// 87 840 hourly samples (a 3660-day span; see the `lunar_site` bench for the time of one
+/// sample), and this bounds the work a single request can start.
+pub const MAX_LUNAR_EPHEMERIS_ITEMS: usize = 100;
+
+/// Whether `item` asks for the `de440_ephemeris` lunar model (an epoch or a span).
+pub fn uses_lunar_ephemeris(item: &super::types::RateItem) -> bool {
+    item.lunar_site
+        .as_ref()
+        .is_some_and(|site| site.epoch.is_some() || site.span.is_some())
+}
+
+/// How many lunar items with the DE440 model `items` hold; 422 `batch_too_large` naming
+/// `field` above [`MAX_LUNAR_EPHEMERIS_ITEMS`].
+pub fn check_lunar_items<'a>(
+    items: impl IntoIterator<Item = &'a super::types::RateItem>,
+    field: &str,
+) -> Result<usize, ApiError> {
+    let count = items
+        .into_iter()
+        .filter(|i| uses_lunar_ephemeris(i))
+        .count();
+    if count > MAX_LUNAR_EPHEMERIS_ITEMS {
+        return Err(ApiError::unprocessable(
+            "batch_too_large",
+            format!("{count} lunar sites with an epoch or a span in one request; at most {MAX_LUNAR_EPHEMERIS_ITEMS} (each integrates the DE440 lunar orbit): split the request"),
+        )
+        .with_field(field));
+    }
+    Ok(count)
+}
+
 /// What a lunar item answers.
 pub(super) struct LunarItem {
     pub(super) parts: RateParts,

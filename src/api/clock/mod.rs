@@ -4,7 +4,7 @@
 pub mod answer;
 pub mod compare;
 pub mod evaluate;
-mod lunar;
+pub mod lunar;
 pub mod lunar_answer;
 pub mod notes;
 mod orbit_item;
