@@ -35,7 +35,7 @@ use super::orientation::{moon_orientation, selenographic_to_body_fixed_m};
 use crate::physics::constants::{GM_EARTH_M3_S2, SPEED_OF_LIGHT_SQUARED_M2_S2, T0_TO_J2000_ATTOS};
 use crate::physics::gravity::{dot, norm, tidal_potential_m2_s2};
 use crate::physics::rate::lunar::{lunar_site_radius_m, LunarSite};
-use crate::physics::rate::{RateError, RateParts, RateReference};
+use crate::physics::rate::{RateError, RateErrorKind, RateParts, RateReference};
 use crate::physics::solar_system::gm::{GM_MOON_M3_S2, GM_SUN_M3_S2};
 use crate::physics::solar_system::{Body, Ephemeris, EphemerisError};
 use crate::physics::time::convert::tcb_minus_tdb_s;
@@ -154,7 +154,10 @@ pub fn rates_at(
     )?;
     let site = site_state(body_fixed_m, tdb_s);
     let c2 = SPEED_OF_LIGHT_SQUARED_M2_S2;
-    let moon_own_m2_s2 = moon_potential_m2_s2(body_fixed_m).unwrap_or(f64::NAN);
+    let moon_own_m2_s2 = moon_potential_m2_s2(body_fixed_m).ok_or_else(|| {
+        RateError::new("height_m", "the site must not be at the Moon's centre")
+            .with_kind(RateErrorKind::BelowSurface)
+    })?;
     // Selenocentric: the Earth's and the Sun's tides about the Moon's centre.
     let lunar_tides_m2_s2 =
         tidal_potential_m2_s2(GM_EARTH_M3_S2, earth.position_m, site.position_m)?
