@@ -215,3 +215,23 @@ async fn too_many_lunar_items_are_refused() {
     let problem = assert_problem(&answer, 422, "batch_too_large");
     assert_eq!(problem["field"], "items");
 }
+
+/// `POST /v1/clock/compare` takes the lunar clock too: against a clock on the geoid (rate 0
+/// against TT by the definition of TT, IAU 2000 Resolution B1.9) the difference is the lunar
+/// clock's own rate against TT.
+#[tokio::test]
+async fn lunar_clock_compared_with_a_geoid_clock() {
+    let server = TestServer::start().await;
+    let lunar = json!({"lunar_site": {"latitude_deg": -89.5, "longitude_deg": 36.0,
+        "height_m": 1200.0, "epoch": "2026-03-14T06:30:00"}});
+    let request = json!({"clock_a": lunar,
+        "clock_b": {"ground_site": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 0.0,
+            "height_reference": "geoid"}}});
+    let (status, _, body) = post_json(&server, "/v1/clock/compare", &request).await;
+    assert_eq!(status, 200, "{body}");
+    let a = num(&body["clock_a"]["fractional"]["total"]);
+    let b = num(&body["clock_b"]["fractional"]["total"]);
+    assert!(b.abs() < 1e-18, "{b}");
+    assert!((num(&body["a_minus_b"]["fractional"]) - a).abs() < 1e-18);
+    assert_eq!(body["clock_a"]["lunar_model"], "de440_ephemeris");
+}
