@@ -131,7 +131,7 @@ fn accumulated(a: &Accumulated) -> LunarAccumulatedAnswer {
     }
 }
 
-/// Evaluates a lunar site item at JSON path `path`.
+/// Evaluates a lunar site item (its JSON path is `origins.path`).
 pub(super) fn lunar_item(
     input: &LunarSiteInput,
     reference: RateReference,
