@@ -48,6 +48,18 @@ for r in json.load(sys.stdin)["results"]:
     print("%12s  sr %+9.4f  gr %+9.4f  total %+9.4f us/day" % (r["subject"], u["sr"], u["gr"], u["total"]))
 '
 
+echo "== The invented Skua lunar surface clock: rate on the demo day, proper time over a month"
+post /v1/clock/rate rate_skua_lunar_clock.json | python3 -c '
+import json, sys
+lunar = json.load(sys.stdin)["results"][0]["lunar"]
+at, span = lunar["at_epoch"], lunar["over_span"]
+for scale in ("tt", "tcg", "tcl", "tl"):
+    a, s = at[scale], span[scale]
+    print("%4s  %+10.5f us/day (month mean %+10.5f)  over the span %+.6e s, periodic %.3e s p-p" % (
+        scale.upper(), a["us_per_day"], a["month_mean_us_per_day"], s["offset_s"], s["periodic_peak_to_peak_s"]))
+print("simultaneity term over the span %+.3e s (kept apart)" % span["simultaneity_s"])
+'
+
 echo "== A Lyra clock against the Tessaro station clock"
 post /v1/clock/compare compare_lyra_vs_tessaro.json | python3 -c '
 import json, sys

@@ -290,6 +290,37 @@ def rate(api, m, document):
     assert with_tides.gravity_model == "j2_sun_moon", with_tides.gravity_model
     tide = with_tides.fractional.total - j2_only.fractional.total
     assert 1e-17 < abs(tide) <= 3.25e-15, tide
+    # The invented Selene Gate south-pole clock over one anomalistic month (27.55455 d) on the
+    # DE440 lunar orbit: about 56.02 us/day against TT (Ashby & Patla 2024, Astron. J.
+    # 168:112), the periodic part apart (Turyshev et al. arXiv:2406.16147 v5: 0.470 us
+    # amplitude at the anomalistic month), TL's proposal warning, and a 422 naming the span.
+    site = {"latitude_deg": -89.5, "longitude_deg": 36.0, "height_m": 1200.0}
+    lunar_body = m.RateRequest.from_dict(
+        {
+            "items": [
+                {
+                    "lunar_site": dict(
+                        site,
+                        epoch="2026-03-14T06:30:00",
+                        span={"start": "2026-03-01T00:00:00", "end": "2026-03-28T13:18:33"},
+                    )
+                }
+            ]
+        }
+    )
+    (lunar,) = expect(api.call("rate", body=lunar_body), 200).results
+    assert lunar.lunar_model == "de440_ephemeris", lunar.lunar_model
+    over = lunar.lunar.over_span
+    # 56.02 for an equator clock plus this clock's share, 0.0029 us/day (its height and the lunar
+    # J2 at the pole: its TL rate +0.00244 against the equator clock's -0.00048, measured in the
+    # physics tests).
+    assert abs(over.tt.mean_us_per_day - 56.02 - 0.0029) < 0.01, over.tt.mean_us_per_day
+    assert 0.7e-6 < over.tt.periodic_peak_to_peak_s < 1.25e-6, over.tt.periodic_peak_to_peak_s
+    assert "proposal" in lunar.lunar.tl_warning
+    bad = m.RateRequest.from_dict(
+        {"items": [{"lunar_site": dict(site, span={"start": "2026-03-02T00:00:00", "end": "2026-03-01T00:00:00"})}]}
+    )
+    expect_problem(api.call("rate", body=bad), 422, "invalid_value", field="items[0].lunar_site.span")
 
 
 @operation("compare")

@@ -102,6 +102,14 @@ pub struct RateAnswer {
     /// rate).
     #[serde(skip_serializing_if = "Option::is_none")]
     pub inclination_deg: Option<f64>,
+    /// For a lunar site: the model, `circular_orbit` (no epoch, no span: the Moon on a
+    /// circular orbit) or `de440_ephemeris` (with `epoch` and/or `span`).
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub lunar_model: Option<String>,
+    /// For a lunar site with the `de440_ephemeris` model: the rates against TT, TCG, TCL and TL
+    /// at the epoch and over the span.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub lunar: Option<super::lunar_answer::LunarAnswer>,
     /// The approximations behind this answer, in words.
     pub model_notes: Vec<String>,
 }

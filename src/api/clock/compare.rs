@@ -5,8 +5,10 @@ use axum::Json;
 
 use super::answer::{CompareAnswer, RateDifferenceAnswer};
 use super::evaluate::{evaluate_item, Defaults};
+use super::lunar::uses_lunar_ephemeris;
 use super::types::CompareRequest;
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, TimeoutProblem};
+use crate::api::extract::compute;
 use crate::api::extract::JsonBody;
 use crate::api::state::AppState;
 use crate::physics::rate::{
@@ -33,8 +35,17 @@ pub async fn compare(
         request.gravity_model.as_deref(),
         request.nominal_frequency_hz,
     )?;
-    let a = evaluate_item(&request.clock_a, &defaults, "clock_a", &eop, &ephemeris)?;
-    let b = evaluate_item(&request.clock_b, &defaults, "clock_b", &eop, &ephemeris)?;
+    // Lunar sites on the DE440 orbit take milliseconds to a second each: on the blocking pool.
+    let lunar = [&request.clock_a, &request.clock_b]
+        .into_iter()
+        .any(uses_lunar_ephemeris);
+    let (clock_a, clock_b) = (request.clock_a.clone(), request.clock_b.clone());
+    let (a, b) = compute(if lunar { usize::MAX } else { 2 }, move || {
+        let a = evaluate_item(&clock_a, &defaults, "clock_a", &eop, &ephemeris)?;
+        let b = evaluate_item(&clock_b, &defaults, "clock_b", &eop, &ephemeris)?;
+        Ok((a, b))
+    })
+    .await?;
     let fractional = rate_difference(&a.parts, &b.parts).map_err(|_| {
         let field = if request.clock_b.reference.is_some() {
             "clock_b.reference"

@@ -2,6 +2,7 @@
 //! call the rate library, shape the answer. Errors name the full JSON path at fault.
 
 use super::answer::{FrequencyAnswer, PeriodicAnswer, RateAnswer, RateSplit};
+use super::lunar::lunar_item;
 use super::notes;
 use super::orbit_item::{orbit_answer, Origins};
 use super::tides;
@@ -13,12 +14,14 @@ use crate::physics::earth::eop::EopTable;
 use crate::physics::earth::orientation::fast::celestial_pole_fast;
 use crate::physics::earth::orientation::span::{OrientationSpan, NODE_STEP_S};
 use crate::physics::earth::orientation::JulianDate;
+use crate::physics::moon::gravity::LUNAR_GRAVITY_MODEL;
+use crate::physics::moon::LunarSiteModel;
 use crate::physics::rate::state::state_rate_about_axis;
 use crate::physics::rate::state::{ITRF_EPOCH_NOTE, ITRF_WITHOUT_EPOCH_NOTE};
 use crate::physics::rate::state_rate_with_tides;
 use crate::physics::rate::{
-    frequency_offset, ground_site_rate, lunar_site_rate, Frame, GravityModel, GroundSite,
-    HeightReference, LunarSite, RateParts, RateReference, StateVector,
+    frequency_offset, ground_site_rate, Frame, GravityModel, GroundSite, HeightReference,
+    RateParts, RateReference, StateVector,
 };
 use crate::physics::solar_system::Ephemeris;
 use crate::physics::time::convert::{convert, ConversionContext};
@@ -183,6 +186,7 @@ pub fn evaluate_item(
     let requested_model = item_model.or(defaults.gravity_model);
     let mut notes: Vec<String> = Vec::new();
     let mut j2_answer = None;
+    let (mut lunar_model, mut lunar) = (None, None);
     let (parts, model_label, periodic, inclination_deg) = match subject {
         Subject::State(state) => {
             // The most complete model the inputs allow: with an epoch the Sun and Moon tides.
@@ -230,16 +234,15 @@ pub fn evaluate_item(
             (parts, label, None, None)
         }
         Subject::Lunar(site) => {
-            let lunar = LunarSite {
-                latitude_deg: site.latitude_deg,
-                longitude_deg: site.longitude_deg,
-                height_m: site.height_m.unwrap_or(0.0),
+            let item = lunar_item(site, reference, requested_model, &origins, (eop, ephemeris))?;
+            notes.extend(item.notes);
+            lunar_model = Some(item.model.as_str().to_string());
+            lunar = item.lunar;
+            let label = match item.model {
+                LunarSiteModel::CircularOrbit => "point_mass",
+                LunarSiteModel::De440Ephemeris => LUNAR_GRAVITY_MODEL,
             };
-            let parts = lunar_site_rate(&lunar, reference).map_err(|e| origins.error(e))?;
-            notes.extend(notes::lunar(
-                requested_model.is_some_and(|m| m != GravityModel::PointMass),
-            ));
-            (parts, "point_mass", None, None)
+            (item.parts, label, None, None)
         }
     };
     let nominal = item.nominal_frequency_hz.or(defaults.nominal_frequency_hz);
@@ -271,6 +274,8 @@ pub fn evaluate_item(
         periodic,
         j2: j2_answer,
         inclination_deg,
+        lunar_model,
+        lunar,
         model_notes: notes,
     };
     Ok(Evaluated { answer, parts })

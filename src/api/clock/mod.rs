@@ -4,6 +4,8 @@
 pub mod answer;
 pub mod compare;
 pub mod evaluate;
+pub mod lunar;
+pub mod lunar_answer;
 pub mod notes;
 mod orbit_item;
 pub mod rate;

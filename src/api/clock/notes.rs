@@ -64,3 +64,8 @@ pub fn lunar(j2_requested: bool) -> Vec<String> {
             .chain(j2),
     )
 }
+
+/// Notes for a lunar site with the `de440_ephemeris` model.
+pub fn lunar_ephemeris(model_notes: &[&str]) -> Vec<String> {
+    owned(std::iter::once(FIRST_ORDER_NOTE).chain(model_notes.iter().copied()))
+}

@@ -98,10 +98,30 @@ pub struct GroundSiteInput {
     pub height_reference: Option<String>,
 }
 
-/// A clock fixed on the Moon's surface.
+/// A span of time for a lunar clock: the mean rate over it and the proper time accumulated.
 #[derive(Debug, Clone, Deserialize, ToSchema)]
 #[serde(deny_unknown_fields)]
-#[schema(example = json!({"latitude_deg": -89.5, "longitude_deg": 0.0, "height_m": 0.0}))]
+#[schema(example = json!({"start": "2026-03-01T00:00:00", "end": "2026-03-28T13:18:33"}))]
+pub struct LunarSpanInput {
+    /// Start, ISO 8601 in the site's `epoch_scale`.
+    #[schema(value_type = InstantString, example = "2026-03-01T00:00:00")]
+    pub start: String,
+    /// End, ISO 8601 in the site's `epoch_scale`; after `start`, at most 3660 days later
+    /// (422 `invalid_value`, `beyond_model_range` naming `span`).
+    #[schema(value_type = InstantString, example = "2026-03-28T13:18:33")]
+    pub end: String,
+}
+
+/// A clock fixed on the Moon's surface. Without `epoch` and `span`, the mean rate against TT or
+/// TCG of the `circular_orbit` model (the Moon on a circular orbit, no lunar ephemeris); with
+/// either, the `de440_ephemeris` model (the real lunar orbit of DE440, the IAU rotation of the
+/// Moon, the GRAIL GL0660B degree-2 field, the Earth's and the Sun's tides) and a `lunar`
+/// answer against TT, TCG, TCL and TL.
+#[derive(Debug, Clone, Deserialize, ToSchema)]
+#[serde(deny_unknown_fields)]
+#[schema(example = json!({"latitude_deg": -89.5, "longitude_deg": 0.0, "height_m": 0.0,
+    "epoch": "2026-03-14T06:30:00",
+    "span": {"start": "2026-03-01T00:00:00", "end": "2026-03-28T13:18:33"}}))]
 pub struct LunarSiteInput {
     /// Selenographic latitude, degrees in [-90, 90] (IAU mean-Earth/polar-axis system).
     #[schema(minimum = -90.0, maximum = 90.0)]
@@ -110,9 +130,22 @@ pub struct LunarSiteInput {
     #[schema(minimum = -1.0e6, maximum = 1.0e6)]
     pub longitude_deg: f64,
     /// Height above the mean lunar sphere of radius 1737.4 km, metres, in [-11 000, 100 000]
-    /// (default 0).
+    /// (default 0; below: 422 `below_surface`, above: `beyond_model_range`).
     #[schema(minimum = -11000.0, maximum = 100000.0)]
     pub height_m: Option<f64>,
+    /// An epoch, ISO 8601 in `epoch_scale`: the instantaneous rate there, and its mean over
+    /// the anomalistic month (27.55455 d) centred on it, so the month must lie inside
+    /// 1959-12-30 .. 2101-01-02 TDB (422 `outside_ephemeris_span`, `outside_lunar_time_span`
+    /// naming `epoch`).
+    #[schema(value_type = Option<InstantString>, example = "2026-03-14T06:30:00")]
+    pub epoch: Option<String>,
+    /// A span: the mean rate over it and the proper time accumulated against TT, TCG, TCL
+    /// and TL, with the periodic part apart from the secular rate.
+    pub span: Option<LunarSpanInput>,
+    /// Scale of `epoch` and of the span's ends (default UTC; any scale of the service,
+    /// TCL and TL included).
+    #[schema(value_type = Option<ScaleName>)]
+    pub epoch_scale: Option<String>,
 }
 
 /// One clock: exactly one subject (`state`, `orbit`, `ground_site`, `lunar_site`), and
@@ -151,7 +184,8 @@ pub struct RateItem {
         {"orbit": {"semi_major_axis_m": 26561750.0, "eccentricity": 0.01, "mean_anomaly_deg": 30.0}},
         {"ground_site": {"latitude_deg": 46.1, "longitude_deg": 11.2, "height_m": 1050.0}},
         {"state": {"frame": "GCRS", "position_m": [7000000.0, 0.0, 0.0], "velocity_m_s": [0.0, 7546.05, 0.0]}},
-        {"lunar_site": {"latitude_deg": -89.5, "longitude_deg": 0.0}}
+        {"lunar_site": {"latitude_deg": -89.5, "longitude_deg": 36.0, "height_m": 1200.0,
+            "epoch": "2026-03-14T06:30:00"}}
     ],
     "reference": "TT",
     "nominal_frequency_hz": 10.23e6

@@ -25,9 +25,12 @@ pub struct LunarSite {
 /// Largest height above the mean lunar radius accepted for a site fixed to the Moon, m.
 pub const MAX_LUNAR_SITE_HEIGHT_M: f64 = 100_000.0;
 
-/// Geocentric position (m) and velocity (m/s) of a lunar site in the model below, on axes
-/// x = Earth towards the Moon, y = along the Moon's orbital motion, z = orbit normal.
-pub fn lunar_site_geocentric_state(site: &LunarSite) -> Result<([f64; 3], [f64; 3]), RateError> {
+/// Checks a lunar site (latitude in [-90, 90] deg, |longitude| <= 1e6 deg, height in
+/// [-11 km, 100 km] above the 1737.4 km sphere: the deepest lunar basin floor lies about 9 km
+/// below it and the highest terrain about 11 km above, from memory; a clock above 100 km is in
+/// orbit, not fixed to the Moon) and gives its distance from the Moon's centre, m. Errors name
+/// `latitude_deg`, `longitude_deg` or `height_m`.
+pub fn lunar_site_radius_m(site: &LunarSite) -> Result<f64, RateError> {
     require_latitude_deg("latitude_deg", site.latitude_deg)?;
     require_longitude_deg("longitude_deg", site.longitude_deg)?;
     let height_m = require_finite("height_m", site.height_m)?;
@@ -44,7 +47,13 @@ pub fn lunar_site_geocentric_state(site: &LunarSite) -> Result<([f64; 3], [f64; 
             RateErrorKind::BeyondModelRange
         }));
     }
-    let radius_m = MOON_MEAN_RADIUS_M + height_m;
+    Ok(MOON_MEAN_RADIUS_M + height_m)
+}
+
+/// Geocentric position (m) and velocity (m/s) of a lunar site in the model below, on axes
+/// x = Earth towards the Moon, y = along the Moon's orbital motion, z = orbit normal.
+pub fn lunar_site_geocentric_state(site: &LunarSite) -> Result<([f64; 3], [f64; 3]), RateError> {
+    let radius_m = lunar_site_radius_m(site)?;
     let (sin_lat, cos_lat) = site.latitude_deg.to_radians().sin_cos();
     let (sin_lon, cos_lon) = site.longitude_deg.to_radians().sin_cos();
     // Selenographic x points to the Earth (-x here), z is the spin axis (= orbit normal), so
@@ -70,7 +79,7 @@ pub fn lunar_site_geocentric_state(site: &LunarSite) -> Result<([f64; 3], [f64; 
 
 /// The model notes of [`lunar_site_rate`].
 pub const LUNAR_NOTES: [&str; 2] = [
-    "mean rate in the geocentric frame: the Moon on a circular orbit of 384 400 km at the two-body speed, rotating synchronously; the monthly periodic term of the lunar eccentricity (about 0.47 us amplitude) is not included",
+    "lunar_site model circular_orbit (give `epoch` or `span` for the de440_ephemeris model): mean rate in the geocentric frame, the Moon on a circular orbit of 384 400 km at the two-body speed, rotating synchronously; the monthly periodic term of the lunar eccentricity (about 0.47 us amplitude) is not included",
     "the Moon's own potential as a point mass (GM of JPL DE430) through its geocentric tidal part; the Sun's tidal potential (GM_Sun D^2/d^3 P2 with D the Earth-Moon distance: a mean of +1.6e-14, 0.0014 us/day, varying over a month between about -3.3e-14 and +6.5e-14, -0.003 to +0.006 us/day), the lunar J2 (about 6e-15), librations and the tilts of the lunar axis and orbit are neglected",
 ];
 /// The model note of [`lunar_site_rate`] when J2 was asked for: the Earth is a point mass there.
