@@ -118,3 +118,33 @@ fn outside_the_ephemeris_names_its_span() {
         TidalIntegrand::over_tt(&ephemeris, START_TT_ATTOS, f64::NAN, &context).unwrap_err();
     assert_eq!(error.code(), "ephemeris_epoch_not_finite");
 }
+
+#[test]
+fn long_spans_widen_the_nodes_and_stay_close_to_the_ephemeris() {
+    // 20 years of TT (above the 100 000 hourly intervals of TidalTrack: nodes 1.75 h apart):
+    // the interpolated tide at a navigation-MEO radius against direct reads at 200 epochs, and
+    // the last epoch covered. Bound: 1e-21 of rate (the h^4 growth of the notes: about
+    // (1.75)^4 * 4e-24 = 4e-23 at MEO; common practice for interpolation checks).
+    let ephemeris = Ephemeris::embedded().unwrap();
+    let table = LeapTable::builtin();
+    let context = ConversionContext::geocentric(table);
+    let span_s = 20.0 * 365.25 * 86_400.0;
+    let start_attos = START_TT_ATTOS - seconds_f64_to_attos(10.0 * 365.25 * 86_400.0);
+    let tides = TidalIntegrand::over_tt(&ephemeris, start_attos, span_s, &context).unwrap();
+    let orbit = navigation_orbit();
+    let mut worst = 0.0f64;
+    for k in 0..=200 {
+        let t_s = (span_s * f64::from(k) / 200.0 + 1_234.5).min(span_s);
+        let (position_m, _) = orbit.state_at(t_s);
+        let tt_attos = start_attos + seconds_f64_to_attos(t_s);
+        let tdb_attos =
+            tt_attos + seconds_f64_to_attos(tdb_minus_tt_fast_s(tt_attos as f64 / 1e18, 0.0, None));
+        let bodies = TidalBodies::at(&ephemeris, tdb_attos).unwrap();
+        let direct = -sun_moon_tidal_potential_m2_s2(&bodies, position_m).unwrap()
+            / SPEED_OF_LIGHT_SQUARED_M2_S2;
+        worst = worst.max((tides.rate_part(t_s, &position_m) - direct).abs());
+    }
+    assert!(tides.rate_part(span_s, &[2.6e7, 0.0, 0.0]).is_finite());
+    println!("20-year span: worst {worst:e}");
+    assert!(worst < 1e-21, "{worst:e}");
+}

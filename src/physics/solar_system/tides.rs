@@ -70,7 +70,8 @@ struct Node {
 }
 
 /// The Sun and the Moon over a time span, from ephemeris states at nodes [`Self::NODE_STEP_S`]
-/// apart, interpolated by cubic Hermite polynomials on position and velocity.
+/// apart (wider for spans above [`Self::MAX_INTERVALS`] hours, see below), interpolated by
+/// cubic Hermite polynomials on position and velocity.
 ///
 /// The time argument of the nodes is TDB seconds since J2000.0 ([`Self::new`]) or any other
 /// time in seconds whose TDB the caller gives at each node ([`Self::over_argument`], e.g. TT
@@ -85,15 +86,24 @@ struct Node {
 /// TT argument the node velocities (per second of TDB) stand for rates per second of TT: they
 /// differ by d(TDB - TT)/dTT, below 3.5e-10 (the 1.66 ms annual term), which moves the
 /// interpolated Moon by below 1 km/s * 3.5e-10 * 3600 s = 1.3e-3 m.
+///
+/// Memory: a node holds 12 numbers (96 B); at most [`Self::MAX_INTERVALS`] + 2 nodes (9.6 MB),
+/// so spans above 100 000 h (11.4 years) space their nodes more widely. The error grows as
+/// h^4: at the longest span the embedded ephemeris allows (143 years, h = 12.5 h) the Moon errs
+/// by about (12.5)^4 * 0.014 m = 340 m, which moves the tide at GEO by 3 GM_Moon r/d^3 * 340 m
+/// = 4.5e-3 m^2/s^2, 5e-20 of rate (from the formulas; the unit tests measure a 20-year span).
 #[derive(Debug, Clone)]
 pub struct TidalTrack {
     first_s: f64,
+    step_s: f64,
     nodes: Vec<Node>,
 }
 
 impl TidalTrack {
-    /// Spacing of the nodes, s.
+    /// Spacing of the nodes, s (up to [`Self::MAX_INTERVALS`] intervals).
     pub const NODE_STEP_S: f64 = 3600.0;
+    /// Most intervals between nodes; longer spans widen the spacing to span / MAX_INTERVALS.
+    pub const MAX_INTERVALS: usize = 100_000;
 
     /// Nodes covering `first_tdb_s ..= last_tdb_s` (TDB seconds since J2000.0); an error naming
     /// the ephemeris span when a node falls outside it.
@@ -107,7 +117,8 @@ impl TidalTrack {
         })
     }
 
-    /// Nodes at the time arguments `first_s + k NODE_STEP_S` covering `first_s ..= last_s`,
+    /// Nodes at the time arguments `first_s + k h` covering `first_s ..= last_s`, h =
+    /// [`Self::NODE_STEP_S`] (or span / [`Self::MAX_INTERVALS`] if that is wider),
     /// node k read from the ephemeris at the TDB instant `tdb_attos_at(argument)` (attoseconds
     /// since J2000.0 TDB); the first error of `tdb_attos_at` or of the ephemeris (naming its
     /// span) is returned.
@@ -124,10 +135,14 @@ impl TidalTrack {
         if !first_s.is_finite() || !last_s.is_finite() || last_s < first_s {
             return Err(EphemerisError::NotFinite.into());
         }
-        let count = ((last_s - first_s) / Self::NODE_STEP_S).ceil() as usize + 1;
+        let span_s = last_s - first_s;
+        let step_s = Self::NODE_STEP_S.max(span_s / Self::MAX_INTERVALS as f64);
+        // ceil may give MAX_INTERVALS + 1 where span / step rounds up: one node more, never a
+        // last epoch left uncovered.
+        let count = (span_s / step_s).ceil() as usize + 1;
         let mut nodes = Vec::with_capacity(count);
         for i in 0..count {
-            let attos = tdb_attos_at(first_s + i as f64 * Self::NODE_STEP_S)?;
+            let attos = tdb_attos_at(first_s + i as f64 * step_s)?;
             let [sun, moon] =
                 ephemeris.states_m([(Body::Sun, Body::Earth), (Body::Moon, Body::Earth)], attos)?;
             nodes.push(Node {
@@ -135,14 +150,18 @@ impl TidalTrack {
                 moon: (moon.position_m, moon.velocity_m_s),
             });
         }
-        Ok(Self { first_s, nodes })
+        Ok(Self {
+            first_s,
+            step_s,
+            nodes,
+        })
     }
 
     /// The Sun and the Moon at the time argument `tdb_s` (TDB seconds since J2000.0 for
     /// [`Self::new`], the caller's argument for [`Self::over_argument`]); `None` outside the
     /// nodes.
     pub fn bodies_at(&self, tdb_s: f64) -> Option<TidalBodies> {
-        let x = (tdb_s - self.first_s) / Self::NODE_STEP_S;
+        let x = (tdb_s - self.first_s) / self.step_s;
         if x.is_nan() || x < 0.0 || x > (self.nodes.len() - 1) as f64 {
             return None;
         }
@@ -157,8 +176,8 @@ impl TidalTrack {
         let s = x - i as f64;
         let (a, b) = (&self.nodes[i], &self.nodes[i + 1]);
         Some(TidalBodies {
-            sun_m: hermite(a.sun, b.sun, s, Self::NODE_STEP_S),
-            moon_m: hermite(a.moon, b.moon, s, Self::NODE_STEP_S),
+            sun_m: hermite(a.sun, b.sun, s, self.step_s),
+            moon_m: hermite(a.moon, b.moon, s, self.step_s),
         })
     }
 
