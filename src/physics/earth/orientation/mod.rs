@@ -23,6 +23,7 @@ pub mod rotation;
 mod series_data;
 pub mod span;
 mod value;
+pub mod xy_series;
 
 #[cfg(test)]
 mod tests_erfa;
