@@ -18,6 +18,7 @@ pub mod fast;
 pub mod matrix;
 pub mod nutation;
 pub mod pole;
+pub mod pole_rate;
 pub mod precession;
 pub mod rotation;
 mod series_data;
