@@ -27,14 +27,16 @@ pub async fn compare(
     JsonBody(request): JsonBody<CompareRequest>,
 ) -> Result<Json<CompareAnswer>, ApiError> {
     let eop = state.eop_table();
+    let leaps = state.leap_table();
     let ephemeris = state.ephemeris();
     let defaults = Defaults::parse(
         request.reference.as_deref(),
         request.gravity_model.as_deref(),
         request.nominal_frequency_hz,
     )?;
-    let a = evaluate_item(&request.clock_a, &defaults, "clock_a", &eop, &ephemeris)?;
-    let b = evaluate_item(&request.clock_b, &defaults, "clock_b", &eop, &ephemeris)?;
+    let tables = (&*leaps, &*eop);
+    let a = evaluate_item(&request.clock_a, &defaults, "clock_a", tables, &ephemeris)?;
+    let b = evaluate_item(&request.clock_b, &defaults, "clock_b", tables, &ephemeris)?;
     let fractional = rate_difference(&a.parts, &b.parts).map_err(|_| {
         let field = if request.clock_b.reference.is_some() {
             "clock_b.reference"

@@ -37,6 +37,7 @@ pub async fn rate(
     )?;
     let items = request.items.len();
     let eop = state.eop_table();
+    let leaps = state.leap_table();
     let ephemeris = state.ephemeris();
     let work = move || {
         request
@@ -48,7 +49,7 @@ pub async fn rate(
                     item,
                     &defaults,
                     &format!("items[{index}]"),
-                    &eop,
+                    (&leaps, &eop),
                     &ephemeris,
                 )
                 .map(|evaluated| evaluated.answer)
