@@ -7,7 +7,8 @@
 //! orientation parameters at that node, `Q` (from X, Y, s of the fast path
 //! [`super::fast::celestial_pole_fast`], plus dX, dY), `W` (x_p, y_p, s'), UT1 - TT and the
 //! Earth rotation angle. Between nodes `Q`, `W` and UT1 - TT are interpolated linearly and the
-//! Earth rotation angle follows exactly from UT1 (eq. 5.15 is linear in UT1). The linear
+//! Earth rotation angle follows exactly from UT1 (eq. 5.15 is linear in UT1; its sine and
+//! cosine from the node's by angle addition, [`turn_sin_cos`]). The linear
 //! interpolation of `Q` errs by at most A (w h)^2 / 8 for a nutation term of amplitude A and
 //! frequency w: for the 13.66-day term (A about 1.1e-6 rad in X, Y) and h = 300 s that is
 //! 3.5e-13 rad (2 um at 7000 km); polar motion and precession are smoother still.
@@ -121,9 +122,16 @@ fn turn_sin_cos(angle_rad: f64, sin: f64, cos: f64, delta_rad: f64) -> (f64, f64
     )
 }
 
-/// `a + t rate`, elementwise.
+/// `a + t rate`, elementwise (written out: see [`super::matrix::apply`]).
 fn advance(a: &Matrix3, rate: &Matrix3, t_s: f64) -> Matrix3 {
-    [0, 1, 2].map(|i| [0, 1, 2].map(|j| a[i][j] + t_s * rate[i][j]))
+    let row = |i: usize| {
+        [
+            a[i][0] + t_s * rate[i][0],
+            a[i][1] + t_s * rate[i][1],
+            a[i][2] + t_s * rate[i][2],
+        ]
+    };
+    [row(0), row(1), row(2)]
 }
 
 fn slope_matrix(a: &Matrix3, b: &Matrix3, per_s: f64) -> Matrix3 {
