@@ -92,3 +92,52 @@ async fn an_itrf_state_outside_the_eop_table_is_refused() {
     let body = assert_problem(&answer, 422, "eop_after_table");
     assert_eq!(body["field"], "items[0].state.epoch");
 }
+
+/// State epochs are read with the leap-second table in force, not the built-in one. The
+/// server's table here is the IERS file (tests/reference/Leap_Second.dat, astropy-iers-data)
+/// with one invented leap second added at the end of 2026 (TAI - UTC 38 s from MJD 61406,
+/// 2027-01-01): the second 2026-12-31T23:59:60 exists only in that table. A state at that
+/// second is answered (an ITRF state through the Earth orientation there, a GCRS state about
+/// the CIP there), where the built-in table would refuse the reading; and the same state half
+/// a second later, at 2027-01-01T00:00:00.5, is answered too (invented table: common practice
+/// for testing a table override, not a real announcement).
+#[tokio::test]
+async fn state_epochs_are_read_with_the_leap_second_table_in_force() {
+    let text = include_str!("reference/Leap_Second.dat").replace(
+        "File expires on 28 June 2027",
+        "File expires on 28 June 2028",
+    ) + "    61406.0    1  1 2027       38\n";
+    let table =
+        eigenzeit::physics::time::leap_seconds::LeapTable::parse_iers_leap_second_dat(&text)
+            .unwrap_or_else(|e| panic!("table with the invented leap second: {e}"));
+    let settings = eigenzeit::ops::config::Settings::default();
+    let server = TestServer::start_with_table(settings, table).await;
+    let builtin = TestServer::start().await;
+    let item = |frame: &str, epoch: &str| {
+        json!({"state": {"frame": frame, "position_m": [4_500_000.0, -3_900_000.0, 3_600_000.0],
+                         "velocity_m_s": [2_900.0, 5_600.0, 3_100.0], "epoch": epoch},
+               "gravity_model": "j2"})
+    };
+    let request = json!({"items": [
+        item("ITRF", "2026-12-31T23:59:60.5"),
+        item("GCRS", "2026-12-31T23:59:60.5"),
+        item("ITRF", "2027-01-01T00:00:00.5"),
+    ]});
+    let (status, _, body) = post_json(&server, "/v1/clock/rate", &request).await;
+    assert_eq!(status, 200, "{body}");
+    let results = body["results"].as_array().cloned().unwrap_or_default();
+    assert_eq!(results.len(), 3, "{body}");
+    // One second of the Earth's rotation between the two ITRF epochs turns the state about
+    // the CIP, which leaves a J2 rate about the CIP unchanged to far below 1e-18.
+    let total = |k: usize| num(&results[k]["fractional"]["total"]);
+    assert!(
+        (total(0) - total(2)).abs() < 1e-18,
+        "{} vs {}",
+        total(0),
+        total(2)
+    );
+    // The server on the built-in table refuses the same reading, naming the field.
+    let (status, _, body) = post_json(&builtin, "/v1/clock/rate", &request).await;
+    assert_eq!(status, 422, "{body}");
+    assert_eq!(body["field"], "items[0].state.epoch", "{body}");
+}

@@ -1,13 +1,16 @@
 #!/usr/bin/env python3
-"""Extract the IAU 2000A nutation and IAU 2006 CIO-locator series from ERFA's C sources.
+"""Extract the IAU 2000A nutation, IAU 2006 CIO-locator and CIP X, Y series from ERFA's C sources.
 
 The tables are published numerical data:
   - IAU 2000A nutation (MHB2000): Mathews, P.M., Herring, T.A. & Buffett, B.A. (2002),
     J. Geophys. Res. 107 (B4), 2068; IERS Conventions (2010) ch. 5, tables 5.3a and 5.3b
     (678 luni-solar and 687 planetary terms);
   - the series for s + XY/2 of IAU 2006/2000A: IERS Conventions (2010) ch. 5, table 5.2d
-    (Capitaine, N. & Wallace, P.T. 2006, Astron. Astrophys. 450, 855).
-Machine-readable copies are tabulated in ERFA's `liberfa/erfa/src/nut00a.c` and `s06.c`, which
+    (Capitaine, N. & Wallace, P.T. 2006, Astron. Astrophys. 450, 855);
+  - the series for the CIP coordinates X, Y of IAU 2006/2000A: IERS Conventions (2010) ch. 5,
+    tables 5.2a and 5.2b (Capitaine, N. & Wallace, P.T. 2006, Astron. Astrophys. 450, 855).
+Machine-readable copies are tabulated in ERFA's `liberfa/erfa/src/nut00a.c`, `s06.c` and
+`xy06.c`, which
 ship in the source distribution of the `pyerfa` package (BSD-3-Clause). Get that tarball with:
 
     pip download --no-binary pyerfa --no-deps pyerfa
@@ -20,6 +23,7 @@ It writes, under src/physics/earth/orientation/data/:
   nutation_iau2000a_luni_solar.txt  678 rows: l l' F D Om  sp spt cp  ce cet se (0.1 uas)
   nutation_iau2000a_planetary.txt   687 rows: l F D Om Me Ve E Ma Ju Sa Ur Ne pA  sp cp se ce
   cio_locator_iau2006_s06.txt       the polynomial and the t^0..t^4 periodic terms of s + XY/2
+  cip_xy_iau2006_xy06.txt           the polynomials of X, Y and their periodic terms per frequency
   LICENSE-ERFA.txt                  ERFA's licence notice, copied verbatim
 
 Numbers are copied as the text of the C literals (not re-formatted), so the Rust parser rounds
@@ -98,6 +102,53 @@ def header(sdist_name: str, source_file: str, lines: list) -> list:
     ]
 
 
+def write_xy06(xy06: str, sdist_name: str) -> None:
+    """xy06.c: polynomials `xyp[2][6]` (arcsec), multipliers `mfals[][5]` and `mfapl[][14]`,
+    pointers `nc[]` (1-based, one per frequency, luni-solar first) into amplitudes `a[]` (uas).
+    Each frequency's amplitudes run from a[nc[i]-1] to a[nc[i+1]-2] (the last to the end of a[]);
+    the k-th amplitude of a frequency is X or Y, sin or cos, t^p by ERFA's jaxy, jasc, japt."""
+    polynomial = NUMBER_RE.findall(table_block(xy06, "static const double xyp"))
+    if len(polynomial) != 12:
+        sys.exit(f"error: xy06 xyp: expected 12 coefficients, got {len(polynomial)}")
+    luni_solar = braced_rows(table_block(xy06, "static const int mfals"), 5, 653, "xy06 mfals")
+    planetary = braced_rows(table_block(xy06, "static const int mfapl"), 14, 656, "xy06 mfapl")
+    pointers = [int(n) for n in NUMBER_RE.findall(table_block(xy06, "static const int nc[]"))]
+    amplitudes = NUMBER_RE.findall(table_block(xy06, "static const double a[]"))
+    frequencies = len(luni_solar) + len(planetary)
+    if len(pointers) != frequencies or len(amplitudes) != 4755:
+        sys.exit(f"error: xy06: {len(pointers)} pointers, {len(amplitudes)} amplitudes")
+    ends = pointers[1:] + [len(amplitudes) + 1]
+    if pointers[0] != 1 or any(e - p < 1 or e - p > 20 for p, e in zip(pointers, ends)):
+        sys.exit("error: xy06 nc: pointers not increasing by 1 to 20")
+    lines = header(
+        sdist_name,
+        "xy06.c",
+        [
+            "# IAU 2006/2000A series for the CIP coordinates X, Y (IERS Conventions (2010)",
+            "# tables 5.2a, 5.2b), as tabulated in ERFA's xy06.c (eraXy06), in ERFA's order.",
+            "# POLY x|y power coefficient: the polynomial part in arcseconds, t^0 .. t^5.",
+            "# LS l l' F D Om n a1 .. an: a luni-solar frequency and its n amplitudes (uas).",
+            "# PL l l' F D Om Me Ve E Ma Ju Sa Ur Ne pA n a1 .. an: a planetary frequency.",
+            "# The k-th amplitude of a frequency (k = 0..19) adds a_k t^japt[k] sc[jasc[k]] to",
+            "# X (jaxy[k] = 0) or Y (1), sc = (sin, cos) of the argument, with ERFA's tables",
+            "#   jaxy = 0 1 0 1 0 1 0 1 0 1 0 1 0 1 0 1 0 1 0 1",
+            "#   jasc = 0 1 1 0 1 0 0 1 0 1 1 0 1 0 0 1 0 1 1 0",
+            "#   japt = 0 0 0 0 1 1 1 1 2 2 2 2 3 3 3 3 4 4 4 4",
+            "# X = (POLY x + (sum LS + sum PL) / 1e6) arcsec; ERFA sums from the last frequency",
+            "# and, within one, from the last amplitude.",
+        ],
+    )
+    for axis, offset in (("x", 0), ("y", 6)):
+        for power in range(6):
+            lines.append(f"POLY {axis} {power} {polynomial[offset + power]}")
+    for index, (kind, row) in enumerate(
+        [("LS", r) for r in luni_solar] + [("PL", r) for r in planetary]
+    ):
+        values = amplitudes[pointers[index] - 1 : ends[index] - 1]
+        lines.append(f"{kind} " + " ".join(row) + f" {len(values)} " + " ".join(values))
+    (DATA_DIR / "cip_xy_iau2006_xy06.txt").write_text("\n".join(lines) + "\n")
+
+
 def main() -> None:
     parser = argparse.ArgumentParser(description=__doc__.split("\n\n")[0])
     parser.add_argument("tarball", help="pyerfa source distribution (.tar.gz)")
@@ -106,6 +157,7 @@ def main() -> None:
     with tarfile.open(args.tarball, "r:gz") as tar:
         nut00a = strip_comments(read_member(tar, "liberfa/erfa/src/nut00a.c"))
         s06 = strip_comments(read_member(tar, "liberfa/erfa/src/s06.c"))
+        xy06 = strip_comments(read_member(tar, "liberfa/erfa/src/xy06.c"))
         licence = read_member(tar, "liberfa/erfa/LICENSE")
     sdist_name = pathlib.Path(args.tarball).name
 
@@ -168,11 +220,13 @@ def main() -> None:
             lines.append(f"TERM {power} " + " ".join(row))
     (DATA_DIR / "cio_locator_iau2006_s06.txt").write_text("\n".join(lines) + "\n")
 
+    write_xy06(xy06, sdist_name)
+
     notice = (
         "ERFA licence notice, copied verbatim from liberfa/erfa/LICENSE in "
         f"{sdist_name}.\nIt covers nutation_iau2000a_luni_solar.txt, "
-        "nutation_iau2000a_planetary.txt and\ncio_locator_iau2006_s06.txt, extracted from "
-        "ERFA's nut00a.c and s06.c.\n\n"
+        "nutation_iau2000a_planetary.txt,\ncio_locator_iau2006_s06.txt and "
+        "cip_xy_iau2006_xy06.txt, extracted from ERFA's nut00a.c,\ns06.c and xy06.c.\n\n"
     )
     (DATA_DIR / "LICENSE-ERFA.txt").write_text(notice + licence)
     print(

@@ -29,6 +29,7 @@ pub async fn compare(
     JsonBody(request): JsonBody<CompareRequest>,
 ) -> Result<Json<CompareAnswer>, ApiError> {
     let eop = state.eop_table();
+    let leaps = state.leap_table();
     let ephemeris = state.ephemeris();
     let defaults = Defaults::parse(
         request.reference.as_deref(),
@@ -41,8 +42,9 @@ pub async fn compare(
         .any(uses_lunar_ephemeris);
     let (clock_a, clock_b) = (request.clock_a.clone(), request.clock_b.clone());
     let (a, b) = compute(if lunar { usize::MAX } else { 2 }, move || {
-        let a = evaluate_item(&clock_a, &defaults, "clock_a", &eop, &ephemeris)?;
-        let b = evaluate_item(&clock_b, &defaults, "clock_b", &eop, &ephemeris)?;
+        let tables = (&*leaps, &*eop);
+        let a = evaluate_item(&clock_a, &defaults, "clock_a", tables, &ephemeris)?;
+        let b = evaluate_item(&clock_b, &defaults, "clock_b", tables, &ephemeris)?;
         Ok((a, b))
     })
     .await?;

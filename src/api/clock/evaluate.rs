@@ -154,13 +154,14 @@ fn setting_field(path: &str, name: &str, given_on_item: bool) -> String {
 }
 
 /// Evaluates one item at JSON path `path` (e.g. `items[3]` or `clock_a`).
-/// `eop` is the Earth orientation table in force (UT1 epochs, ITRF states with an epoch),
-/// `ephemeris` the planetary ephemeris in force (the Sun and Moon tides of states).
+/// `leaps` and `eop` are the leap-second and Earth orientation tables in force (state epochs,
+/// UT1, ITRF states with an epoch), `ephemeris` the planetary ephemeris in force (the Sun and
+/// Moon tides of states).
 pub fn evaluate_item(
     item: &RateItem,
     defaults: &Defaults,
     path: &str,
-    eop: &EopTable,
+    (leaps, eop): (&LeapTable, &EopTable),
     ephemeris: &Ephemeris,
 ) -> Result<Evaluated, ApiError> {
     let subject = subject_of(item, path)?;
@@ -195,8 +196,14 @@ pub fn evaluate_item(
             } else {
                 GravityModel::PointMass
             });
-            let (parts, periodic, frame_note) =
-                state_answer(state, reference, model, path, &origins, (eop, ephemeris))?;
+            let (parts, periodic, frame_note) = state_answer(
+                state,
+                reference,
+                model,
+                path,
+                &origins,
+                (leaps, eop, ephemeris),
+            )?;
             notes.extend(notes::state(model));
             notes.extend(frame_note.map(String::from));
             (parts, model.as_str(), Some(periodic), None)
@@ -281,20 +288,18 @@ pub fn evaluate_item(
     Ok(Evaluated { answer, parts })
 }
 
-/// The state's epoch as TT, when given (a UT1 epoch through the EOP table in force).
+/// The state's epoch as TT, when given, read and converted with the leap-second table in force
+/// (a UT1 epoch through the EOP table in force).
 fn state_epoch_tt(
     state: &StateInput,
     path: &str,
-    eop: &EopTable,
+    (table, eop): (&LeapTable, &EopTable),
 ) -> Result<Option<Instant>, ApiError> {
     let scale = parse_scale(
         state.epoch_scale.as_deref().unwrap_or("UTC"),
         &format!("{path}.state.epoch_scale"),
     )?;
     let field = format!("{path}.state.epoch");
-    // The built-in leap-second table: the pole moves about 1e-11 rad a second, so a leap
-    // second announced after this build would change the axis by far less than any term here.
-    let table = LeapTable::builtin();
     let Some(text) = &state.epoch else {
         return Ok(None);
     };
@@ -314,16 +319,16 @@ fn cip_at(tt: &Instant) -> [f64; 3] {
 
 /// An ITRF state at TT `tt` in the GCRS, with the CIP there: the full IERS Conventions (2010)
 /// ch. 5 rotation with the EOP table in force (polar motion with s', UT1, precession-nutation
-/// with dX, dY) and its time derivative (see [`OrientationSpan`]). Outside the table a 422
-/// naming the epoch.
+/// with dX, dY; UT1 - UTC read at UTC through the leap-second table in force) and its time
+/// derivative (see [`OrientationSpan`]). Outside the table a 422 naming the epoch.
 fn itrf_into_gcrs(
     vector: &StateVector,
     tt: &Instant,
-    eop: &EopTable,
+    (leaps, eop): (&LeapTable, &EopTable),
     field: &str,
 ) -> Result<(StateVector, [f64; 3]), ApiError> {
     let span = OrientationSpan::new(tt.count_attos(), NODE_STEP_S, |tt_attos| {
-        eop_at_tt(eop, LeapTable::builtin(), tt_attos)
+        eop_at_tt(eop, leaps, tt_attos)
     })
     .map_err(|error| {
         ApiError::unprocessable(
@@ -350,7 +355,7 @@ fn state_answer(
     model: GravityModel,
     path: &str,
     origins: &Origins<'_>,
-    (eop, ephemeris): (&EopTable, &Ephemeris),
+    (leaps, eop, ephemeris): (&LeapTable, &EopTable, &Ephemeris),
 ) -> Result<(RateParts, PeriodicAnswer, Option<&'static str>), ApiError> {
     let frame: Frame = parse_named(
         &state.frame,
@@ -363,7 +368,7 @@ fn state_answer(
         position_m: state.position_m,
         velocity_m_s: state.velocity_m_s,
     };
-    let tt = state_epoch_tt(state, path, eop)?;
+    let tt = state_epoch_tt(state, path, (leaps, eop))?;
     let field = format!("{path}.state.epoch");
     // The state is checked in its own frame first, so problems name its own fields.
     let own = state_rate_about_axis(&vector, reference, model, [0.0, 0.0, 1.0])
@@ -380,7 +385,7 @@ fn state_answer(
     };
     let (rate, note) = match (frame, tt) {
         (Frame::Itrf, Some(tt)) => {
-            let (inertial, axis) = itrf_into_gcrs(&vector, &tt, eop, &field)?;
+            let (inertial, axis) = itrf_into_gcrs(&vector, &tt, (leaps, eop), &field)?;
             (gcrs_rate(&inertial, axis, &tt)?, Some(ITRF_EPOCH_NOTE))
         }
         (_, None) if tides => {

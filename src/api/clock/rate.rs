@@ -42,6 +42,7 @@ pub async fn rate(
     let lunar = check_lunar_items(&request.items, "items")?;
     let weight = if lunar > 0 { usize::MAX } else { items };
     let eop = state.eop_table();
+    let leaps = state.leap_table();
     let ephemeris = state.ephemeris();
     let work = move || {
         request
@@ -53,7 +54,7 @@ pub async fn rate(
                     item,
                     &defaults,
                     &format!("items[{index}]"),
-                    &eop,
+                    (&leaps, &eop),
                     &ephemeris,
                 )
                 .map(|evaluated| evaluated.answer)

@@ -4,14 +4,14 @@
 use super::orientation_types::{EarthOrientationAnswer, EopProvenance};
 use super::types::EopLikelyError;
 use crate::api::error::ApiError;
-use crate::api::time::conversion::{convert_one, FieldName};
+use crate::api::time::conversion::{convert_one, Converted, FieldName};
 use crate::api::time::forms::FormSelection;
 use crate::physics::constants::TT_MINUS_TAI_ATTOS;
 use crate::physics::earth::eop::{EopLookupError, EopStatus, EopTable, EopValues};
 use crate::physics::earth::orientation::epoch::{tt_julian_date, ut1_julian_date};
 use crate::physics::earth::orientation::rotation::EARTH_ROTATION_RATE_RAD_S;
 use crate::physics::earth::orientation::{
-    earth_orientation_fast, CelestialPoleOffsets, JulianDate, ARCSEC_TO_RAD,
+    earth_orientation_fast, CelestialPoleOffsets, EarthOrientation, JulianDate, ARCSEC_TO_RAD,
 };
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::error::{TimeError, TimeErrorKind};
@@ -76,12 +76,32 @@ fn jd_pair(jd: JulianDate) -> [f64; 2] {
     [jd.jd1, jd.jd2]
 }
 
-/// The Earth orientation at the instant written `text`; problems name `field`.
-pub fn orientation_one(
+/// One instant evaluated: the conversions, the table's values and the orientation.
+struct Evaluated {
+    converted: Converted,
+    values: EopValues,
+    offsets: Option<CelestialPoleOffsets>,
+    tt: JulianDate,
+    ut1: JulianDate,
+    orientation: EarthOrientation,
+}
+
+/// The Earth orientation at the instant written `text` (the physics value, for the frame
+/// changes of other endpoints); problems name `field`.
+pub fn orientation_at(
     text: &str,
     request: &OrientationRequest<'_>,
     field: FieldName<'_>,
-) -> Result<EarthOrientationAnswer, ApiError> {
+) -> Result<EarthOrientation, ApiError> {
+    evaluate(text, request, field).map(|evaluated| evaluated.orientation)
+}
+
+/// Reads the instant, looks the table up and evaluates the orientation.
+fn evaluate(
+    text: &str,
+    request: &OrientationRequest<'_>,
+    field: FieldName<'_>,
+) -> Result<Evaluated, ApiError> {
     let leaps = request.leaps;
     // UT1 readings convert through the EOP table in force (`scale=UT1`).
     let context = ConversionContext::geocentric(leaps).with_ut1(request.eop);
@@ -127,13 +147,40 @@ pub fn orientation_one(
         values.xp_arcsec * ARCSEC_TO_RAD,
         values.yp_arcsec * ARCSEC_TO_RAD,
     );
-    let orientation = earth_orientation_fast(tt, ut1, xp_rad, yp_rad, offsets);
+    Ok(Evaluated {
+        converted,
+        values,
+        offsets,
+        tt,
+        ut1,
+        orientation: earth_orientation_fast(tt, ut1, xp_rad, yp_rad, offsets),
+    })
+}
+
+/// The Earth orientation at the instant written `text`; problems name `field`.
+pub fn orientation_one(
+    text: &str,
+    request: &OrientationRequest<'_>,
+    field: FieldName<'_>,
+) -> Result<EarthOrientationAnswer, ApiError> {
+    let Evaluated {
+        converted,
+        values,
+        offsets,
+        tt,
+        ut1,
+        orientation,
+    } = evaluate(text, request, field)?;
     let mut warnings = converted.warnings.clone();
     warnings.extend(eop_warnings(
         &values,
         offsets.is_some(),
         request.pole_offsets,
     ));
+    let (xp_rad, yp_rad) = (
+        values.xp_arcsec * ARCSEC_TO_RAD,
+        values.yp_arcsec * ARCSEC_TO_RAD,
+    );
     let forms = FormSelection::default();
     Ok(EarthOrientationAnswer {
         input: forms.json(&converted.input),

@@ -6,14 +6,15 @@ use axum::Json;
 use super::types::{
     Correction, PathEndpointInput, SignalPathAnswer, SignalPathRequest, SignalTerms,
 };
-use crate::api::earth::orientation_answer::{orientation_one, OrientationRequest};
+use crate::api::earth::orientation_answer::{orientation_at, OrientationRequest};
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, TimeoutProblem};
 use crate::api::extract::JsonBody;
 use crate::api::names::{parse_format, parse_named, parse_scale};
 use crate::api::state::AppState;
 use crate::api::time::conversion::FieldName;
 use crate::api::time::types::InstantForms;
-use crate::physics::constants::{EARTH_ROTATION_RAD_S, SPEED_OF_LIGHT_M_S};
+use crate::physics::constants::SPEED_OF_LIGHT_M_S;
+use crate::physics::earth::orientation::EarthOrientation;
 use crate::physics::geodesy::geodetic_to_ecef_m;
 use crate::physics::signal::{
     signal_path as solve, Endpoint, Frame, PathGeometry, SignalError, TransmitterMotion,
@@ -130,12 +131,12 @@ fn epoch_forms(request: &SignalPathRequest, state: &AppState) -> Result<InstantF
         .map_err(|e| ApiError::from_time(&e, "epoch"))
 }
 
-/// The GCRS -> ITRS rotation at the reception epoch (IERS Conventions (2010) eq. 5.1, with the
-/// EOP table in force), through the orientation endpoint's own computation.
-fn epoch_rotation(
+/// The Earth orientation at the reception epoch (IERS Conventions (2010) eq. 5.1, with the EOP
+/// table in force), through the orientation endpoint's own computation.
+fn epoch_orientation(
     request: &SignalPathRequest,
     state: &AppState,
-) -> Result<[[f64; 3]; 3], ApiError> {
+) -> Result<EarthOrientation, ApiError> {
     let leaps = state.leap_table();
     let eop = state.eop_table();
     let orientation = OrientationRequest {
@@ -145,40 +146,30 @@ fn epoch_rotation(
         leaps: &leaps,
         eop: &eop,
     };
-    orientation_one(&request.epoch, &orientation, FieldName::Named("epoch"))
-        .map(|answer| answer.gcrs_to_itrs)
+    orientation_at(&request.epoch, &orientation, FieldName::Named("epoch"))
 }
 
-/// `M^T v` for a row-major `M`.
-fn transposed_times(matrix: &[[f64; 3]; 3], vector: [f64; 3]) -> [f64; 3] {
-    [0, 1, 2].map(|j| (0..3).map(|i| matrix[i][j] * vector[i]).sum())
-}
-
-/// An ITRF endpoint as a GCRS one at the reception epoch: r_gcrs = M^T r_itrs and, for a
-/// transmitter, v_gcrs = M^T (v_itrs + omega_E x r_itrs) (IERS Conventions (2010) eq. 5.1 and its
-/// time derivative with the Earth rotation rate; the rates of precession-nutation and polar
-/// motion, below 1e-11 rad/s, are left out). An Earth-fixed transmitter at rest (no velocity)
-/// turns with the Earth: in the GCRS it is given omega_E x r and moves uniformly over the
-/// flight (0.08 mm from the circle over 70 ms); a GCRS endpoint is kept.
-fn into_gcrs(resolved: Resolved, gcrs_to_itrs: &[[f64; 3]; 3]) -> Resolved {
+/// An ITRF endpoint as a GCRS one at the reception epoch: r_gcrs = Q R W r_itrs and, for a
+/// transmitter, its time derivative (IERS Conventions (2010) eq. 5.1;
+/// `EarthOrientation::itrs_to_gcrs_velocity_m_s`: the Earth rotation about the CIP and the
+/// precession-nutation rate; the polar-motion and length-of-day rates, about 1e-6 and 1e-5 m/s
+/// at the surface, are left out). An Earth-fixed transmitter at rest (no velocity) turns with
+/// the Earth: in the GCRS it moves uniformly over the flight at that velocity (0.08 mm from the
+/// circle over 70 ms); a GCRS endpoint is kept.
+fn into_gcrs(resolved: Resolved, orientation: &EarthOrientation) -> Resolved {
     if resolved.frame == Frame::Gcrs {
         return resolved;
     }
     let r = resolved.endpoint.position_m;
-    let turning = [
-        -EARTH_ROTATION_RAD_S * r[1],
-        EARTH_ROTATION_RAD_S * r[0],
-        0.0,
-    ];
     let (velocity_itrs, motion) = match resolved.endpoint.velocity_m_s {
-        Some(v) => ([0, 1, 2].map(|i| v[i] + turning[i]), resolved.motion),
-        None => (turning, TransmitterMotion::Uniform),
+        Some(v) => (v, resolved.motion),
+        None => ([0.0; 3], TransmitterMotion::Uniform),
     };
     Resolved {
         frame: Frame::Gcrs,
         endpoint: Endpoint {
-            position_m: transposed_times(gcrs_to_itrs, r),
-            velocity_m_s: Some(transposed_times(gcrs_to_itrs, velocity_itrs)),
+            position_m: orientation.itrs_to_gcrs_position_m(&r),
+            velocity_m_s: Some(orientation.itrs_to_gcrs_velocity_m_s(&r, &velocity_itrs)),
         },
         motion,
         ground_site: resolved.ground_site,
@@ -204,10 +195,10 @@ pub async fn signal_path(
         (transmitter, receiver)
     } else {
         // Mixed frames: the Earth-fixed endpoint goes into the GCRS at the reception epoch.
-        let gcrs_to_itrs = epoch_rotation(&request, &state)?;
+        let orientation = epoch_orientation(&request, &state)?;
         (
-            into_gcrs(transmitter, &gcrs_to_itrs),
-            into_gcrs(receiver, &gcrs_to_itrs),
+            into_gcrs(transmitter, &orientation),
+            into_gcrs(receiver, &orientation),
         )
     };
     let geometry = PathGeometry {

@@ -33,8 +33,11 @@ pub struct GroundSiteInput {
 #[schema(example = json!({"frame": "ITRF", "position_m": [15600000.0, 7540000.0, 20140000.0],
     "velocity_m_s": [-2000.0, 2800.0, 500.0]}))]
 pub struct PathEndpointInput {
-    /// `GCRS` (geocentric, non-rotating) or `ITRF` (Earth-fixed). Both ends must use the same
-    /// frame; a `ground_site` counts as ITRF.
+    /// `GCRS` (geocentric, non-rotating) or `ITRF` (Earth-fixed); a `ground_site` counts as
+    /// ITRF. With the ends in different frames the ITRF end goes into the GCRS at the reception
+    /// epoch (IERS Conventions (2010) eq. 5.1 with the EOP table in force; its velocity with
+    /// the Earth rotation about the CIP and the precession-nutation rate) and the path is
+    /// solved in the GCRS.
     #[schema(value_type = Option<FrameName>)]
     pub frame: Option<String>,
     /// Geocentric position at the reception epoch, metres.

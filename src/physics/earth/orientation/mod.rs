@@ -18,11 +18,13 @@ pub mod fast;
 pub mod matrix;
 pub mod nutation;
 pub mod pole;
+pub mod pole_rate;
 pub mod precession;
 pub mod rotation;
 mod series_data;
 pub mod span;
 mod value;
+pub mod xy_series;
 
 #[cfg(test)]
 mod tests_erfa;

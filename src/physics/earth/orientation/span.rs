@@ -7,7 +7,8 @@
 //! orientation parameters at that node, `Q` (from X, Y, s of the fast path
 //! [`super::fast::celestial_pole_fast`], plus dX, dY), `W` (x_p, y_p, s'), UT1 - TT and the
 //! Earth rotation angle. Between nodes `Q`, `W` and UT1 - TT are interpolated linearly and the
-//! Earth rotation angle follows exactly from UT1 (eq. 5.15 is linear in UT1). The linear
+//! Earth rotation angle follows exactly from UT1 (eq. 5.15 is linear in UT1; its sine and
+//! cosine from the node's by angle addition, [`turn_sin_cos`]). The linear
 //! interpolation of `Q` errs by at most A (w h)^2 / 8 for a nutation term of amplitude A and
 //! frequency w: for the 13.66-day term (A about 1.1e-6 rad in X, Y) and h = 300 s that is
 //! 3.5e-13 rad (2 um at 7000 km); polar motion and precession are smoother still.
@@ -59,6 +60,9 @@ struct Node {
     /// d(ERA)/dt to the next node, rad per TT second.
     era_rate: f64,
     era_rad: f64,
+    /// sin and cos of `era_rad`, for [`turn_sin_cos`].
+    era_sin: f64,
+    era_cos: f64,
 }
 
 /// The orientation over one span of TT, `t_s` seconds from its start.
@@ -80,6 +84,8 @@ fn node(tt_attos: i128, eop: &EopAtEpoch) -> Node {
         pole.s_rad,
     );
     let sprime = tio_locator_sprime_rad(tt.julian_centuries_since_j2000());
+    let era_rad = earth_rotation_angle_rad(ut1);
+    let (era_sin, era_cos) = era_rad.sin_cos();
     Node {
         q: transpose(&c2i),
         q_rate: [[0.0; 3]; 3],
@@ -87,13 +93,45 @@ fn node(tt_attos: i128, eop: &EopAtEpoch) -> Node {
         w_rate: [[0.0; 3]; 3],
         ut1_minus_tt_s: eop.ut1_minus_tt_s,
         era_rate: EARTH_ROTATION_RATE_RAD_S,
-        era_rad: earth_rotation_angle_rad(ut1),
+        era_rad,
+        era_sin,
+        era_cos,
     }
 }
 
-/// `a + t rate`, elementwise.
+/// Largest angle step |delta| for which [`turn_sin_cos`] uses its series (the Earth turns by
+/// 0.022 rad in one 300 s node step): the first omitted terms, delta^9/9! and delta^10/10!, are
+/// below 1e-20 there.
+const SERIES_STEP_MAX_RAD: f64 = 0.025;
+
+/// sin and cos of `angle + delta` from sin and cos of `angle` (the angle-addition formulas) and
+/// the Taylor series of sin(delta) to delta^7 and cos(delta) to delta^8 (Abramowitz & Stegun
+/// 4.3.16, 4.3.17, 4.3.65, 4.3.66): one libm call less per quadrature node. Beyond
+/// [`SERIES_STEP_MAX_RAD`] (spans of more than 69 days, or times outside the span) it calls
+/// `sin_cos` of the sum.
+fn turn_sin_cos(angle_rad: f64, sin: f64, cos: f64, delta_rad: f64) -> (f64, f64) {
+    if delta_rad.abs() > SERIES_STEP_MAX_RAD {
+        return (angle_rad + delta_rad).sin_cos();
+    }
+    let d2 = delta_rad * delta_rad;
+    let sin_delta = delta_rad * (1.0 - d2 / 6.0 * (1.0 - d2 / 20.0 * (1.0 - d2 / 42.0)));
+    let cos_delta = 1.0 - d2 / 2.0 * (1.0 - d2 / 12.0 * (1.0 - d2 / 30.0 * (1.0 - d2 / 56.0)));
+    (
+        sin * cos_delta + cos * sin_delta,
+        cos * cos_delta - sin * sin_delta,
+    )
+}
+
+/// `a + t rate`, elementwise (written out: see [`super::matrix::apply`]).
 fn advance(a: &Matrix3, rate: &Matrix3, t_s: f64) -> Matrix3 {
-    [0, 1, 2].map(|i| [0, 1, 2].map(|j| a[i][j] + t_s * rate[i][j]))
+    let row = |i: usize| {
+        [
+            a[i][0] + t_s * rate[i][0],
+            a[i][1] + t_s * rate[i][1],
+            a[i][2] + t_s * rate[i][2],
+        ]
+    };
+    [row(0), row(1), row(2)]
 }
 
 fn slope_matrix(a: &Matrix3, b: &Matrix3, per_s: f64) -> Matrix3 {
@@ -154,15 +192,14 @@ impl OrientationSpan {
         let node = self.node_before(t_s);
         let local_s = t_s - node.0 as f64 * self.step_s;
         let a = node.1;
-        let era = a.era_rad + a.era_rate * local_s;
         let era_rate = a.era_rate;
+        let (sin, cos) = turn_sin_cos(a.era_rad, a.era_sin, a.era_cos, era_rate * local_s);
         let (w, w_rate) = (advance(&a.w, &a.w_rate, local_s), &a.w_rate);
         let (q, q_rate) = (advance(&a.q, &a.q_rate, local_s), &a.q_rate);
         // ITRS -> TIRS
         let r_t = apply(&w, r_itrs_m);
         let v_t = add(apply(&w, v_itrs_m_s), apply(w_rate, r_itrs_m));
         // TIRS -> CIRS: R3(-ERA), turning at era_rate about the CIP
-        let (sin, cos) = era.sin_cos();
         let turn = |v: [f64; 3]| [cos * v[0] - sin * v[1], sin * v[0] + cos * v[1], v[2]];
         let r_c = turn(r_t);
         let v_c = add(turn(v_t), [-era_rate * r_c[1], era_rate * r_c[0], 0.0]);

@@ -85,7 +85,12 @@ fn worst_differences(compute: fn(&Row) -> EarthOrientation) -> [f64; 7] {
 fn check(worst: [f64; 7], what: &str) {
     let names = ["era", "gmst", "gast", "x", "y", "s", "matrix"];
     for (name, value) in names.iter().zip(worst) {
-        eprintln!("{what}: worst {name} difference from ERFA {value:.3e} rad");
+        // Metres at the Earth's surface: the angle times the GRS80 equatorial radius (Moritz
+        // 2000); for the matrix, the largest element difference times the same radius.
+        eprintln!(
+            "{what}: worst {name} difference from ERFA {value:.3e} rad ({:.3e} m at the surface)",
+            value * 6_378_137.0
+        );
         assert!(value <= TOLERANCE_RAD, "{what} {name}: {value:e}");
     }
 }
