@@ -39,6 +39,9 @@ pub struct ProperTimeRequest {
     pub initial_offset_s: f64,
     /// Whether to answer the series.
     pub include_series: bool,
+    /// For a selenocentric ephemeris: its reference and field (then `reference` and
+    /// `gravity_model` above are not used).
+    pub lunar: Option<super::lunar::LunarOptions>,
 }
 
 /// An ephemeris error as a 422 problem naming the line, object and index.
@@ -218,13 +221,14 @@ pub fn read_request(
     check_geocentric_range(&ephemeris)?;
     let states: usize = ephemeris.objects.iter().map(|o| o.states.len()).sum();
     check_batch_size(states, settings.batch_limit, "objects", "ephemeris state")?;
-    let reference = match options.reference.as_deref() {
-        Some(text) => parse_reference(text, "reference")?,
-        None => RateReference::Tt,
+    let lunar = super::lunar::lunar_options(&ephemeris, &options)?;
+    let reference = match (options.reference.as_deref(), &lunar) {
+        (Some(text), None) => parse_reference(text, "reference")?,
+        _ => RateReference::Tt,
     };
-    let gravity_model = match options.gravity_model.as_deref() {
-        Some(text) => parse_gravity_model(text, "gravity_model")?,
-        None => GravityModel::PointMass,
+    let gravity_model = match (options.gravity_model.as_deref(), &lunar) {
+        (Some(text), None) => parse_gravity_model(text, "gravity_model")?,
+        _ => GravityModel::PointMass,
     };
     let interpolation = InterpolationOptions {
         points: options.interpolation_points.unwrap_or(8),
@@ -239,5 +243,6 @@ pub fn read_request(
         interpolation,
         initial_offset_s: options.initial_offset_s.unwrap_or(0.0),
         include_series: options.include_series.unwrap_or(true),
+        lunar,
     })
 }

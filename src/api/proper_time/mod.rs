@@ -3,10 +3,12 @@
 
 mod answer;
 mod body;
+mod lunar;
 pub use body::ephemeris_problem;
 mod options;
 pub mod plot;
 pub mod types;
+mod types_lunar;
 
 use axum::extract::State;
 use axum::http::{header, HeaderMap};
@@ -41,7 +43,7 @@ pub fn router() -> Router<AppState> {
         (status = 400, description = "The query string cannot be read (`invalid_query`: an unknown parameter or `format`, a wrong type), the body is not UTF-8 (`unreadable_body`), or a body sent as application/json is not the JSON ephemeris (`invalid_json`, `invalid_body`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 413, description = "Body above the configured limit (`body_too_large`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 415, description = "A Content-Type the endpoint does not read (`unsupported_media_type`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 422, description = "The ephemeris or an option cannot be used: `code` says why (a file that does not follow its format: unknown_ephemeris_format, json_invalid, the OEM and SP3 reader codes; unsupported_frame, unknown_scale, unsupported_time_scale (UT1), unknown_format, bad_epoch, mixed_velocity, not_finite, below_surface, beyond_model_range, speed_not_below_c, epochs_not_increasing, gap_too_long, too_few_states, sampling_too_coarse, bad_option, empty_batch, batch_too_large, unknown_reference, unknown_gravity_model, unsupported_gravity_model (the Sun and Moon tide model, not yet for proper time), integration_failed; for Earth-fixed tracks eop_before_table, eop_after_table: their epochs must lie inside the Earth orientation table in force); `line` (files), `object`, `index` and `field` say where", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 422, description = "The ephemeris or an option cannot be used: `code` says why (a file that does not follow its format: unknown_ephemeris_format, json_invalid, the OEM and SP3 reader codes; unsupported_frame, unknown_scale, unsupported_time_scale (UT1), unknown_format, bad_epoch, mixed_velocity, not_finite, below_surface, beyond_model_range, speed_not_below_c, epochs_not_increasing, gap_too_long, too_few_states, sampling_too_coarse, bad_option, empty_batch, batch_too_large, unknown_reference, unknown_gravity_model, unsupported_gravity_model (the Sun and Moon tide model, not yet for proper time), integration_failed; for Earth-fixed tracks eop_before_table, eop_after_table: their epochs must lie inside the Earth orientation table in force; for selenocentric tracks (OEM CENTER_NAME = MOON, JSON center moon) frame_center_mismatch (a frame or reference of the other centre, or mixed centres), unknown_center, outside_ephemeris_span and outside_lunar_time_span via bad_epoch (epochs outside 1960-2100), below_surface (below the Moon's mean radius, 1 737 400 m), beyond_model_range (beyond 60 000 km from the Moon)); `line` (files), `object`, `index` and `field` say where", body = crate::api::error::Problem, content_type = "application/problem+json"),
         crate::api::error::TimeoutProblem))]
 pub async fn proper_time(
     State(state): State<AppState>,
@@ -62,12 +64,16 @@ pub async fn proper_time(
     );
     let table = state.leap_table();
     let eop = state.eop_table();
+    let ephemeris = state.ephemeris();
     let settings = state.limits().clone();
     let work = move || -> Result<Response, ApiError> {
         let mut request = body::read_request(&headers, query, &body, &table, &settings)?;
         // A plot draws the series, whatever `include_series` says.
         request.include_series |= kind == AnswerType::Svg;
-        let answer = answer::compute(&request, &table, &eop)?;
+        let answer = match &request.lunar {
+            Some(lunar) => lunar::compute(&request, lunar, &table, &ephemeris)?,
+            None => answer::compute(&request, &table, &eop)?,
+        };
         let text = match kind {
             AnswerType::Json => {
                 return Ok(([(header::VARY, "accept")], Json(answer)).into_response())

@@ -3,7 +3,10 @@
 use serde::{Deserialize, Serialize};
 use utoipa::{IntoParams, ToSchema};
 
-use crate::api::clock::types::{GravityModelName, ReferenceName};
+pub use super::types_lunar::{
+    LunarSampleOutput, LunarSummaryOutput, ProperTimeReferenceName, TrajectoryCenterName,
+};
+use crate::api::clock::types::GravityModelName;
 use crate::api::names::{
     EphemerisFrameName, EphemerisVelocityMS, InstantFormatName, InstantString, PositionM, ScaleName,
 };
@@ -36,8 +39,10 @@ pub struct ProperTimeOptionsInput {
     /// it wins over the Content-Type.
     #[param(value_type = Option<EphemerisFormatName>, example = "oem")]
     pub format: Option<String>,
-    /// Coordinate time the clock is compared with: `TT` (default) or `TCG`.
-    #[param(value_type = Option<ReferenceName>, example = "TT")]
+    /// Coordinate time the clock is compared with: `TT` (default) or `TCG` for geocentric
+    /// tracks; `TCL` (default), `TL` (a proposal, not a standard) or `TT` for selenocentric
+    /// tracks (422 `frame_center_mismatch` otherwise).
+    #[param(value_type = Option<ProperTimeReferenceName>, example = "TT")]
     pub reference: Option<String>,
     /// Earth potential: `point_mass` (default), `j2` (IERS Conventions (2010) GM, J2, a_E) or
     /// `grs80` (the GRS80 normal field in closed form).
@@ -72,8 +77,9 @@ pub struct ProperTimeBodyOptions {
     /// Ignored in a JSON body (the body is JSON); checked like the query parameter.
     #[schema(value_type = Option<EphemerisFormatName>)]
     pub format: Option<String>,
-    /// Coordinate time the clock is compared with: `TT` (default) or `TCG`.
-    #[schema(value_type = Option<ReferenceName>)]
+    /// Coordinate time the clock is compared with: `TT` (default) or `TCG` for geocentric
+    /// tracks; `TCL` (default), `TL` (a proposal) or `TT` for selenocentric tracks.
+    #[schema(value_type = Option<ProperTimeReferenceName>)]
     pub reference: Option<String>,
     /// Earth potential: `point_mass` (default), `j2` or `grs80` (not yet `j2_sun_moon`).
     #[schema(value_type = Option<GravityModelName>)]
@@ -169,6 +175,12 @@ pub struct EphemerisInput {
     /// `ECEF`, `WGS84` (Earth-fixed; velocities made inertial with the Earth's rotation).
     #[schema(value_type = EphemerisFrameName)]
     pub frame: String,
+    /// The origin of the positions: `earth` (default) or `moon` (selenocentric states with
+    /// ICRF axes: `frame` ICRF, EME2000 or J2000; positions between the Moon's mean radius,
+    /// 1 737 400 m, and 60 000 km, else 422 `below_surface`, `beyond_model_range`). A lunar
+    /// frame with the Earth, or an Earth frame with the Moon: 422 `frame_center_mismatch`.
+    #[schema(value_type = Option<TrajectoryCenterName>, example = "moon")]
+    pub center: Option<String>,
     /// Time scale of the epochs: UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST.
     #[schema(value_type = ScaleName)]
     pub time_scale: String,
@@ -200,8 +212,13 @@ pub struct SampleOutput {
     /// The Keplerian periodic term -2 r.v / c^2 at this epoch, seconds (IS-GPS-200 20.3.3.3.3.1).
     pub periodic_s: f64,
     /// tau - t minus the periodic term and the least-squares line, seconds: what the broadcast
-    /// two-term model misses (e.g. J2 effects, manoeuvres).
+    /// two-term model misses (e.g. J2 effects, manoeuvres). For selenocentric objects: the
+    /// clock-rate periodic part minus the periodic term.
     pub residual_s: f64,
+    /// Selenocentric objects only: the lunar parts, the clock-rate periodic part and the
+    /// coordinate-simultaneity term, kept apart.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub lunar: Option<LunarSampleOutput>,
 }
 
 /// Summary of one object.
@@ -223,6 +240,10 @@ pub struct SummaryOutput {
     pub periodic_amplitude_s: f64,
     /// RMS of the residual against line + periodic term, seconds.
     pub kepler_residual_rms_s: f64,
+    /// Selenocentric objects only: the centre, the tides' rate, the clock-rate periodic and
+    /// simultaneity amplitudes.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub lunar: Option<LunarSummaryOutput>,
 }
 
 /// The answer for one object.
@@ -230,7 +251,7 @@ pub struct SummaryOutput {
 pub struct ObjectOutput {
     /// The object's id (OEM OBJECT_NAME, SP3 satellite id, JSON id).
     pub id: String,
-    /// `inertial` or `earth_fixed`.
+    /// `inertial`, `earth_fixed` or `lunar_inertial` (selenocentric, ICRF axes).
     pub frame: String,
     /// The time scale of the epochs.
     pub time_scale: String,
@@ -246,12 +267,16 @@ pub struct ObjectOutput {
 /// The answer: one entry per object in the ephemeris.
 #[derive(Debug, Clone, Serialize, ToSchema)]
 pub struct ProperTimeAnswer {
-    /// `TT` or `TCG`.
+    /// `TT` or `TCG`; for a selenocentric ephemeris `TCL`, `TL` or `TT`.
     pub reference: String,
-    /// `point_mass`, `j2` or `grs80`.
+    /// `point_mass`, `j2` or `grs80` (the Earth's field); for a selenocentric ephemeris
+    /// `point_mass` or `j2` (the Moon's field, with the Earth's and the Sun's tides).
     pub gravity_model: String,
     /// The objects, in the order of the ephemeris.
     pub objects: Vec<ObjectOutput>,
     /// The model and its approximations.
     pub model_notes: Vec<String>,
+    /// Warnings (e.g. that TL is a proposal, not a standard); absent when none.
+    #[serde(skip_serializing_if = "Vec::is_empty")]
+    pub warnings: Vec<String>,
 }

@@ -58,11 +58,11 @@ vocabulary! {
     #[derive(Debug, Clone, Copy, PartialEq, Eq)]
     pub enum LunarReference {
         /// TCL, the coordinate time of the LCRS (IAU 2024 Resolution II).
-        Tcl = "tcl",
+        Tcl = "TCL",
         /// TL, the lunar surface time proposed by Turyshev et al. (arXiv:2406.16147): a
         /// proposal, not a standard.
-        Tl = "tl",
+        Tl = "TL",
         /// TT, through the service's TCL - TT relation at the Moon's centre.
-        Tt = "tt",
+        Tt = "TT",
     }
 }

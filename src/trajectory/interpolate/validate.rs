@@ -2,7 +2,8 @@
 //! than light, strictly increasing epochs, enough states, no long gaps.
 
 use super::super::error::TrajectoryError;
-use super::super::ObjectTrack;
+use super::super::lunar::check_selenocentric_distance;
+use super::super::{Frame, ObjectTrack};
 use super::InterpolationOptions;
 use crate::physics::constants::{GRS80_SEMI_MINOR_AXIS_M, SPEED_OF_LIGHT_M_S};
 use crate::physics::readable::readable;
@@ -72,7 +73,9 @@ pub fn validate_track(
             ));
         }
         let radius_m = norm(&state.position_m);
-        if radius_m < GRS80_SEMI_MINOR_AXIS_M {
+        if track.frame == Frame::LunarInertial {
+            check_selenocentric_distance(radius_m, id, index)?;
+        } else if radius_m < GRS80_SEMI_MINOR_AXIS_M {
             return Err(TrajectoryError::at_state(
                 "below_surface",
                 id,
