@@ -16,8 +16,9 @@ use crate::physics::lunar_orbit::{
 use crate::physics::proper_time::ProperTimeOptions;
 use crate::physics::readable::readable;
 use crate::physics::solar_system::Ephemeris;
-use crate::physics::time::convert::{convert, ConversionContext};
+use crate::physics::time::convert::{convert, to_tt_attos, ConversionContext};
 use crate::physics::time::instant::{seconds_f64_to_attos, Instant};
+use crate::physics::time::lunar::L_L;
 use crate::physics::time::scale::Scale;
 use crate::trajectory::track_proper_time::MAX_OUTPUT_EPOCHS;
 
@@ -146,15 +147,18 @@ pub fn lunar_proper_time_of_track(
         .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(id))?;
     let series = match settings.reference {
         LunarReference::Tcl => series,
-        LunarReference::Tl | LunarReference::Tt => {
-            let scale = if settings.reference == LunarReference::Tl {
-                Scale::Tl
-            } else {
-                Scale::Tt
-            };
+        LunarReference::Tl => {
+            // TL - TCL = -L_L (TCL - T0): TCL elapsed minus TL elapsed is L_L times the TCL
+            // elapsed (Turyshev et al. arXiv:2406.16147; `physics::time::lunar`).
+            let parts: Vec<f64> = epochs_s.iter().map(|t| L_L * t).collect();
+            series.relative_to(&parts).unwrap_or(series)
+        }
+        LunarReference::Tt => {
+            // Through the engine's TCL -> TT (at the Moon's centre): its f64 steps round at
+            // about 1e-15 s per epoch.
             let reference = output_tcl
                 .iter()
-                .map(|t| convert(&tcl_instant(*t), scale, context).map(|i| i.count_attos()))
+                .map(|t| to_tt_attos(&tcl_instant(*t), context))
                 .collect::<Result<Vec<_>, _>>()
                 .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(id))?;
             let first_reference = reference.first().copied().unwrap_or(0);
