@@ -754,6 +754,8 @@ mod tests {
                         "week_near",
                         "rinex_clock",
                         "tdb_model",
+                        "observer_itrf_m",
+                        "selenocentric_observer_m",
                     ];
                     if is_code_like
                         && !known_field.contains(&word.as_str())

@@ -28,6 +28,7 @@
 pub mod environment;
 pub mod field;
 pub mod integrate;
+pub mod observer;
 #[cfg(test)]
 mod tests;
 
@@ -41,6 +42,7 @@ pub use integrate::{
     integrate_lunar_proper_time, LunarProperTimeSample, LunarProperTimeSeries,
     LunarProperTimeSummary, LUNAR_INTEGRATION_NOTE,
 };
+pub use observer::SelenocentricObserver;
 
 vocabulary! {
     /// The centre of an uploaded ephemeris's positions.
