@@ -11,6 +11,7 @@
 //! axes is not in this service yet.
 
 pub mod proper_time;
+pub mod tcl_axis;
 #[cfg(test)]
 mod tests;
 

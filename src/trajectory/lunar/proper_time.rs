@@ -2,7 +2,7 @@
 //! planetary ephemeris, [`integrate_lunar_proper_time`], then the answer against TCL, TL or TT.
 //!
 //! Coordinate time is TCL: every epoch goes to TCL through the engine (at the Moon's centre,
-//! `physics::time::lunar`), so the interpolation and the integral run on TCL seconds since the
+//! `physics::time::lunar`; TCL - TT at hourly nodes, [`super::tcl_axis`]), so the interpolation and the integral run on TCL seconds since the
 //! first epoch, and an output step is in TCL seconds. The ephemeris is read at TDB, mapped
 //! linearly from TCL between the first and last epochs (TDB - TCL has periodic terms of at
 //! most 1.7 ms, Lu, Yang & Xie 2025, which move the Moon by under 2 m: below 1e-21 of rate).
@@ -10,13 +10,14 @@
 use super::super::error::TrajectoryError;
 use super::super::interpolate::{validate_track, InterpolationOptions, Interpolator};
 use super::super::ObjectTrack;
+use super::tcl_axis::TclAxis;
 use crate::physics::lunar_orbit::{
     integrate_lunar_proper_time, LunarEnvironment, LunarProperTimeSeries, LunarReference,
 };
 use crate::physics::proper_time::ProperTimeOptions;
 use crate::physics::readable::readable;
 use crate::physics::solar_system::Ephemeris;
-use crate::physics::time::convert::{convert, to_tt_attos, ConversionContext};
+use crate::physics::time::convert::{convert, from_tt_attos, to_tt_attos, ConversionContext};
 use crate::physics::time::instant::{seconds_f64_to_attos, Instant};
 use crate::physics::time::lunar::L_L;
 use crate::physics::time::scale::Scale;
@@ -61,22 +62,29 @@ pub fn lunar_proper_time_of_track(
     context: &ConversionContext<'_>,
     settings: &LunarSettings<'_>,
 ) -> Result<LunarTrackProperTime, TrajectoryError> {
-    validate_track(track, interpolation, context)?;
+    let times_tt_s = validate_track(track, interpolation, context)?;
     let id = track.id.as_str();
     let in_scale = |epoch: &Instant, scale: Scale, index: usize| {
         convert(epoch, scale, context)
             .map_err(|e| TrajectoryError::at_state("bad_epoch", id, index, e.to_string()))
     };
-    let mut tcl_attos = Vec::with_capacity(track.states.len());
-    for (index, state) in track.states.iter().enumerate() {
-        tcl_attos.push(in_scale(&state.epoch, Scale::Tcl, index)?.count_attos());
-    }
-    let (Some(&first_tcl), Some(&last_tcl)) = (tcl_attos.first(), tcl_attos.last()) else {
+    let (Some(first), Some(last)) = (track.states.first(), track.states.last()) else {
         return Err(
             TrajectoryError::new("too_few_states", "the track has no states").for_object(id),
         );
     };
-    let times_s: Vec<f64> = tcl_attos.iter().map(|t| seconds(t - first_tcl)).collect();
+    let last_index = track.states.len() - 1;
+    // The ends in TCL and TDB: an epoch outside the lunar time span is named here.
+    in_scale(&first.epoch, Scale::Tcl, 0)?;
+    in_scale(&last.epoch, Scale::Tcl, last_index)?;
+    let first_tdb = in_scale(&first.epoch, Scale::Tdb, 0)?.count_attos();
+    let last_tdb = in_scale(&last.epoch, Scale::Tdb, last_index)?.count_attos();
+    let first_tt = to_tt_attos(&first.epoch, context)
+        .map_err(|e| TrajectoryError::at_state("bad_epoch", id, 0, e.to_string()))?;
+    let span_tt_s = times_tt_s.last().copied().unwrap_or(0.0);
+    let axis = TclAxis::new(first_tt, span_tt_s, context, id)?;
+    let times_s: Vec<f64> = times_tt_s.iter().map(|t| axis.tcl_s(*t)).collect();
+    let span_s = times_s.last().copied().unwrap_or(0.0);
     let positions_m = track.states.iter().map(|s| s.position_m).collect();
     let velocities_m_s = track.has_velocities().then(|| {
         track
@@ -85,16 +93,22 @@ pub fn lunar_proper_time_of_track(
             .map(|s| s.velocity_m_s.unwrap_or([0.0; 3]))
             .collect()
     });
-    let interpolator =
-        Interpolator::new(times_s, positions_m, velocities_m_s, interpolation.points).map_err(
-            |e| TrajectoryError {
-                object: Some(id.to_string()),
-                ..e
-            },
-        )?;
-    let span_s = seconds(last_tcl - first_tcl);
-    let output_tcl: Vec<i128> = match interpolation.output_step_s {
-        None => tcl_attos.clone(),
+    let interpolator = Interpolator::new(
+        times_s.clone(),
+        positions_m,
+        velocities_m_s,
+        interpolation.points,
+    )
+    .map_err(|e| TrajectoryError {
+        object: Some(id.to_string()),
+        ..e
+    })?;
+    let (epochs_s, output_tt_s, epochs) = match interpolation.output_step_s {
+        None => (
+            times_s,
+            times_tt_s,
+            track.states.iter().map(|s| s.epoch).collect::<Vec<_>>(),
+        ),
         Some(step_s) => {
             let count = (span_s / step_s).floor() as usize + 1;
             if count > MAX_OUTPUT_EPOCHS {
@@ -104,18 +118,20 @@ pub fn lunar_proper_time_of_track(
                 )
                 .for_object(id));
             }
-            let mut grid: Vec<i128> = (0..count)
-                .map(|k| first_tcl + seconds_f64_to_attos(k as f64 * step_s))
-                .filter(|t| *t < last_tcl)
+            let mut grid: Vec<f64> = (0..count)
+                .map(|k| k as f64 * step_s)
+                .filter(|t| *t < span_s)
                 .collect();
-            grid.push(last_tcl);
-            grid
+            grid.push(span_s);
+            let tt_s: Vec<f64> = grid.iter().map(|t| axis.tt_s(*t)).collect();
+            let epochs = tt_s
+                .iter()
+                .map(|t| from_tt_attos(first_tt + seconds_f64_to_attos(*t), track.scale, context))
+                .collect::<Result<Vec<_>, _>>()
+                .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(id))?;
+            (grid, tt_s, epochs)
         }
     };
-    let epochs_s: Vec<f64> = output_tcl.iter().map(|t| seconds(t - first_tcl)).collect();
-    let last_index = track.states.len() - 1;
-    let first_tdb = in_scale(&track.states[0].epoch, Scale::Tdb, 0)?.count_attos();
-    let last_tdb = in_scale(&track.states[last_index].epoch, Scale::Tdb, last_index)?.count_attos();
     let first_tdb_s = seconds(first_tdb);
     let tdb_per_tcl = if span_s > 0.0 {
         seconds(last_tdb - first_tdb) / span_s
@@ -139,12 +155,6 @@ pub fn lunar_proper_time_of_track(
         index: e.index,
         field: None,
     })?;
-    let tcl_instant = |attos: i128| Instant::from_count_attos(Scale::Tcl, attos);
-    let epochs = output_tcl
-        .iter()
-        .map(|t| convert(&tcl_instant(*t), track.scale, context))
-        .collect::<Result<Vec<_>, _>>()
-        .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(id))?;
     let series = match settings.reference {
         LunarReference::Tcl => series,
         LunarReference::Tl => {
@@ -154,26 +164,15 @@ pub fn lunar_proper_time_of_track(
             series.relative_to(&parts).unwrap_or(series)
         }
         LunarReference::Tt => {
-            // Through the engine's TCL -> TT (at the Moon's centre): its f64 steps round at
-            // about 1e-15 s per epoch.
-            let reference = output_tcl
-                .iter()
-                .map(|t| to_tt_attos(&tcl_instant(*t), context))
-                .collect::<Result<Vec<_>, _>>()
-                .map_err(|e| TrajectoryError::new("bad_epoch", e.to_string()).for_object(id))?;
-            let first_reference = reference.first().copied().unwrap_or(0);
-            let parts: Vec<f64> = output_tcl
-                .iter()
-                .zip(&reference)
-                .map(|(t, r)| seconds((t - first_tcl) - (r - first_reference)))
-                .collect();
+            // TCL elapsed minus TT elapsed: the change of TCL - TT since the first epoch.
+            let parts: Vec<f64> = output_tt_s.iter().map(|t| axis.offset_s(*t)).collect();
             series.relative_to(&parts).unwrap_or(series)
         }
     };
     Ok(LunarTrackProperTime {
         id: track.id.clone(),
-        start: track.states[0].epoch,
-        end: track.states[last_index].epoch,
+        start: first.epoch,
+        end: last.epoch,
         epochs,
         series,
     })
