@@ -246,3 +246,29 @@ async fn bad_lunar_inputs_name_line_field_and_object() {
     assert_eq!(answer.0, 200, "{}", answer.2);
     assert_eq!(answer.2["reference"], "TCL");
 }
+
+/// The documented request examples of the operation (JSON, geocentric and lunar; the lunar
+/// OEM text) are bodies the service answers with 200.
+#[tokio::test]
+async fn the_documented_examples_are_answered() {
+    let server = TestServer::start().await;
+    let document: Value =
+        serde_json::from_str(&eigenzeit::ops::openapi::document_json()).unwrap_or_default();
+    let content = &document["paths"]["/v1/clock/proper-time"]["post"]["requestBody"]["content"];
+    let examples = content["application/json"]["examples"]
+        .as_object()
+        .cloned()
+        .unwrap_or_default();
+    assert!(examples.contains_key("lunar"), "{content}");
+    for (name, example) in examples {
+        let body = serde_json::to_vec(&example["value"]).unwrap_or_default();
+        let answer = post_body(&server, "", "application/json", body).await;
+        assert_eq!(answer.0, 200, "{name}: {}", answer.2);
+    }
+    let oem = content["application/ccsds-oem"]["example"]
+        .as_str()
+        .unwrap_or_default();
+    let answer = post_oem(&server, "", oem).await;
+    assert_eq!(answer.0, 200, "{}", answer.2);
+    assert_eq!(answer.2["reference"], "TCL");
+}

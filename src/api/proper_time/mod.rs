@@ -32,8 +32,23 @@ pub fn router() -> Router<AppState> {
     params(ProperTimeOptionsInput),
     request_body(description = "The ephemeris: JSON (application/json), CCSDS OEM KVN (application/ccsds-oem) or SP3-c/d (application/sp3); text/plain with `format`, or sniffed from the first line.",
         content(
-            (types::EphemerisInput = "application/json"),
-            (String = "application/ccsds-oem"),
+            (types::EphemerisInput = "application/json", examples(
+                ("geocentric" = (summary = "An invented low-orbit clock in the GCRF (TT reference)", value = json!({
+                    "frame": "GCRF", "time_scale": "UTC",
+                    "objects": [{"id": "KESTREL-1", "states": [
+                        {"epoch": "2026-05-20T00:00:00", "position_m": [6828137.0, 0.0, 0.0], "velocity_m_s": [0.0, 4747.3, 5887.4]},
+                        {"epoch": "2026-05-20T00:01:00", "position_m": [6816514.4, 284532.4, 352852.0], "velocity_m_s": [-387.4, 4739.2, 5877.4]}
+                    ]}],
+                    "options": {"reference": "TT", "interpolation_points": 2}}))),
+                ("lunar" = (summary = "The invented lunar orbiter TERN-1 about the Moon (ICRF axes), against TL", value = json!({
+                    "frame": "ICRF", "center": "moon", "time_scale": "TDB",
+                    "objects": [{"id": "TERN-1", "states": [
+                        {"epoch": "2026-05-20T00:00:00", "position_m": [1837400.0, 0.0, 0.0], "velocity_m_s": [0.0, 0.0, 1633.5]},
+                        {"epoch": "2026-05-20T00:01:00", "position_m": [1834786.6, 0.0, 97963.8], "velocity_m_s": [-87.1, 0.0, 1631.2]}
+                    ]}],
+                    "options": {"reference": "TL", "interpolation_points": 2}})))
+            )),
+            (String = "application/ccsds-oem", example = "CCSDS_OEM_VERS = 2.0\nCREATION_DATE = 2026-05-19T12:00:00\nORIGINATOR = TERN-DEMO-OPS\nMETA_START\nOBJECT_NAME = TERN-1\nOBJECT_ID = 2026-951A\nCENTER_NAME = MOON\nREF_FRAME = ICRF\nTIME_SYSTEM = TDB\nSTART_TIME = 2026-05-20T00:00:00\nSTOP_TIME = 2026-05-20T00:03:00\nMETA_STOP\n2026-05-20T00:00:00 1837.4000 0 0.0000 0 0 1.633504\n2026-05-20T00:01:00 1834.7866 0 97.9638 -0.087093 0 1.631181\n2026-05-20T00:02:00 1826.9538 0 195.6489 -0.173938 0 1.624217\n2026-05-20T00:03:00 1813.9240 0 292.7774 -0.260288 0 1.612633\n"),
             (String = "application/sp3"),
             (String = "text/plain"))),
     responses(
