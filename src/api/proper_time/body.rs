@@ -41,7 +41,7 @@ pub struct ProperTimeRequest {
     pub include_series: bool,
     /// For a selenocentric ephemeris: its reference and field (then `reference` and
     /// `gravity_model` above are not used).
-    pub lunar: Option<super::lunar::LunarOptions>,
+    pub lunar: Option<super::lunar_options::LunarOptions>,
 }
 
 /// An ephemeris error as a 422 problem naming the line, object and index.
@@ -221,7 +221,7 @@ pub fn read_request(
     check_geocentric_range(&ephemeris)?;
     let states: usize = ephemeris.objects.iter().map(|o| o.states.len()).sum();
     check_batch_size(states, settings.batch_limit, "objects", "ephemeris state")?;
-    let lunar = super::lunar::lunar_options(&ephemeris, &options)?;
+    let lunar = super::lunar_options::lunar_options(&ephemeris, &options)?;
     let reference = match (options.reference.as_deref(), &lunar) {
         (Some(text), None) => parse_reference(text, "reference")?,
         _ => RateReference::Tt,

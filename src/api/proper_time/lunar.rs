@@ -3,89 +3,24 @@
 
 use super::answer::{instant_forms, iso_text};
 use super::body::{ephemeris_problem, ProperTimeRequest};
+use super::lunar_options::LunarOptions;
 use super::types::{
-    LunarSampleOutput, LunarSummaryOutput, ObjectOutput, ProperTimeAnswer, ProperTimeOptionsInput,
-    SampleOutput, SummaryOutput,
+    LunarSampleOutput, LunarSummaryOutput, ObjectOutput, ProperTimeAnswer, SampleOutput,
+    SummaryOutput,
 };
 use crate::api::error::ApiError;
 use crate::physics::lunar_orbit::integrate::LUNAR_PERIODIC_NOTE;
 use crate::physics::lunar_orbit::{LunarReference, LUNAR_INTEGRATION_NOTE};
 use crate::physics::proper_time::ProperTimeOptions;
-use crate::physics::rate::RateErrorKind;
 use crate::physics::solar_system::Ephemeris;
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::lunar::TL_WARNING;
 use crate::trajectory::lunar::proper_time::{lunar_proper_time_of_track, LunarSettings};
-use crate::trajectory::{Frame, TrajectorySet};
-
-/// The options of a selenocentric request.
-#[derive(Debug, Clone, Copy)]
-pub struct LunarOptions {
-    /// TCL (default), TL or TT.
-    pub reference: LunarReference,
-    /// The Moon's J2 (default) or its point mass only.
-    pub j2: bool,
-}
+use crate::trajectory::Frame;
 
 /// The model note of the coordinate time of lunar tracks.
 const LUNAR_TIME_NOTE: &str = "lunar tracks: every epoch goes to TCL through the service's TCB - TCL at the Moon's centre (DE440 integral); interpolation, integration and `step_s` run on TCL seconds; against TL the reference part is L_L t, against TT the TCL - TT relation at the Moon's centre (its annual and monthly terms are in reference_part_s, not in the clock's periodic part)";
-
-fn mismatch(message: &str, field: &str) -> ApiError {
-    ApiError::unprocessable("frame_center_mismatch", message).with_field(field)
-}
-
-/// The lunar options when every object is selenocentric, `None` when none is; a mix, or a
-/// reference or field model of the other centre, is a 422 naming the object or field.
-pub fn lunar_options(
-    ephemeris: &TrajectorySet,
-    options: &ProperTimeOptionsInput,
-) -> Result<Option<LunarOptions>, ApiError> {
-    let is_lunar = |frame: Frame| frame == Frame::LunarInertial;
-    let lunar_count = ephemeris
-        .objects
-        .iter()
-        .filter(|o| is_lunar(o.frame))
-        .count();
-    let reference = options.reference.as_deref();
-    if lunar_count == 0 {
-        if matches!(reference, Some("TCL" | "TL")) {
-            return Err(mismatch(
-                "TCL and TL are lunar time scales: they take a selenocentric ephemeris (center moon, or OEM CENTER_NAME = MOON); for geocentric tracks use TT or TCG",
-                "reference",
-            ));
-        }
-        return Ok(None);
-    }
-    if let Some(other) = ephemeris.objects.iter().find(|o| !is_lunar(o.frame)) {
-        return Err(ApiError::unprocessable(
-            "frame_center_mismatch",
-            "this object is geocentric while others are selenocentric; send Earth- and Moon-centred tracks in separate requests",
-        )
-        .with_object(Some(other.id.clone()), None));
-    }
-    let reference = match reference {
-        None => LunarReference::Tcl,
-        Some(text) => LunarReference::from_name(text).ok_or_else(|| {
-            mismatch(
-                &format!("{text} is a geocentric reference; a selenocentric ephemeris is compared with TCL, TL or TT"),
-                "reference",
-            )
-        })?,
-    };
-    let j2 = match options.gravity_model.as_deref() {
-        None | Some("j2") => true,
-        Some("point_mass") => false,
-        Some(other) => {
-            return Err(ApiError::unprocessable(
-                RateErrorKind::UnsupportedGravityModel.as_str(),
-                format!("{other} is a model of the Earth's field; a selenocentric ephemeris takes j2 (the Moon's J2, default) or point_mass (the Moon's point mass), both with the Earth's and the Sun's tides"),
-            )
-            .with_field("gravity_model"))
-        }
-    };
-    Ok(Some(LunarOptions { reference, j2 }))
-}
 
 /// Integrates every selenocentric object and shapes the answer.
 pub fn compute(

@@ -4,6 +4,7 @@
 mod answer;
 mod body;
 mod lunar;
+mod lunar_options;
 pub use body::ephemeris_problem;
 mod options;
 pub mod plot;

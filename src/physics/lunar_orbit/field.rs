@@ -84,3 +84,22 @@ pub fn moon_potential_m2_s2(position_m: &[f64; 3], pole: &LunarPole, j2: bool) -
     let sin2 = z * z / r2;
     point * (1.0 - MOON_J2 * MOON_J2_RADIUS_M * MOON_J2_RADIUS_M / r2 * 0.5 * (3.0 * sin2 - 1.0))
 }
+
+/// Refuses a selenocentric distance (m) of an orbiting clock below the Moon's mean radius
+/// (1 737 400 m, IAU WGCCRE, Archinal et al. 2018): (`below_surface`, message); or beyond
+/// [`MAX_SELENOCENTRIC_DISTANCE_M`]: (`beyond_model_range`, message).
+pub fn check_orbit_distance(radius_m: f64) -> Result<(), (&'static str, String)> {
+    if radius_m < crate::physics::constants::MOON_MEAN_RADIUS_M {
+        return Err((
+            "below_surface",
+            format!("the selenocentric distance is {radius_m:.1} m, below the Moon's mean radius (1 737 400 m); positions must be Moon-centred and in metres"),
+        ));
+    }
+    if radius_m > MAX_SELENOCENTRIC_DISTANCE_M {
+        return Err((
+            "beyond_model_range",
+            format!("the selenocentric distance is {radius_m:.4e} m, beyond 6e7 m (60 000 km, inside the Moon's Hill sphere of about 61 500 km), where the Earth's field is no longer a small tide about the Moon"),
+        ));
+    }
+    Ok(())
+}

@@ -17,8 +17,7 @@ mod tests;
 
 use super::error::TrajectoryError;
 use super::Frame;
-use crate::physics::constants::MOON_MEAN_RADIUS_M;
-use crate::physics::lunar_orbit::{TrajectoryCenter, MAX_SELENOCENTRIC_DISTANCE_M};
+use crate::physics::lunar_orbit::TrajectoryCenter;
 
 /// Frame names that give ICRF axes about the Moon (JSON); the OEM reader takes ICRF, EME2000.
 pub const LUNAR_AXES_NAMES: &[&str] = &["ICRF", "EME2000", "J2000"];
@@ -74,32 +73,4 @@ pub fn check_center_frame(
 pub fn json_frame(center: TrajectoryCenter, frame_name: &str) -> Result<Frame, TrajectoryError> {
     check_center_frame(center, frame_name)
         .map_err(|(code, message)| TrajectoryError::new(code, message).with_field("frame"))
-}
-
-/// Refuses a selenocentric distance below the Moon's mean radius (1 737 400 m, IAU WGCCRE,
-/// Archinal et al. 2018: `below_surface`) or beyond the LCRS range of the model
-/// ([`MAX_SELENOCENTRIC_DISTANCE_M`], 60 000 km, inside the Moon's Hill sphere:
-/// `beyond_model_range`), naming the object and the state.
-pub fn check_selenocentric_distance(
-    radius_m: f64,
-    object: &str,
-    index: usize,
-) -> Result<(), TrajectoryError> {
-    if radius_m < MOON_MEAN_RADIUS_M {
-        return Err(TrajectoryError::at_state(
-            "below_surface",
-            object,
-            index,
-            format!("the selenocentric distance is {radius_m:.1} m, below the Moon's mean radius (1 737 400 m); positions must be Moon-centred and in metres"),
-        ));
-    }
-    if radius_m > MAX_SELENOCENTRIC_DISTANCE_M {
-        return Err(TrajectoryError::at_state(
-            "beyond_model_range",
-            object,
-            index,
-            format!("the selenocentric distance is {radius_m:.4e} m, beyond 6e7 m (60 000 km, inside the Moon's Hill sphere of about 61 500 km), where the Earth's field is no longer a small tide about the Moon"),
-        ));
-    }
-    Ok(())
 }
