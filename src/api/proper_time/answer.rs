@@ -153,7 +153,7 @@ pub fn compute(
         gravity_model: request.gravity_model.as_str().to_string(),
         objects,
         model_notes: model_notes(request),
-        warnings: Vec::new(),
+        warnings: None,
     })
 }
 

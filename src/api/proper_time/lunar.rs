@@ -118,10 +118,6 @@ pub fn compute(
         model_notes: [LUNAR_INTEGRATION_NOTE, LUNAR_TIME_NOTE, LUNAR_PERIODIC_NOTE]
             .map(String::from)
             .to_vec(),
-        warnings: if lunar.reference == LunarReference::Tl {
-            vec![TL_WARNING.to_string()]
-        } else {
-            Vec::new()
-        },
+        warnings: (lunar.reference == LunarReference::Tl).then(|| vec![TL_WARNING.to_string()]),
     })
 }

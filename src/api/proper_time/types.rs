@@ -277,6 +277,6 @@ pub struct ProperTimeAnswer {
     /// The model and its approximations.
     pub model_notes: Vec<String>,
     /// Warnings (e.g. that TL is a proposal, not a standard); absent when none.
-    #[serde(skip_serializing_if = "Vec::is_empty")]
-    pub warnings: Vec<String>,
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub warnings: Option<Vec<String>>,
 }
