@@ -247,8 +247,9 @@ async fn bad_lunar_inputs_name_line_field_and_object() {
     assert_eq!(answer.2["reference"], "TCL");
 }
 
-/// The documented request examples of the operation (JSON, geocentric and lunar; the lunar
-/// OEM text) are bodies the service answers with 200.
+/// The documented request examples of the operation (JSON, geocentric and lunar) are bodies
+/// the service answers with 200 (the OEM body has no example: the contract test's generator
+/// cannot write application/ccsds-oem; the README's curl posts the demo file).
 #[tokio::test]
 async fn the_documented_examples_are_answered() {
     let server = TestServer::start().await;
@@ -265,10 +266,4 @@ async fn the_documented_examples_are_answered() {
         let answer = post_body(&server, "", "application/json", body).await;
         assert_eq!(answer.0, 200, "{name}: {}", answer.2);
     }
-    let oem = content["application/ccsds-oem"]["example"]
-        .as_str()
-        .unwrap_or_default();
-    let answer = post_oem(&server, "", oem).await;
-    assert_eq!(answer.0, 200, "{}", answer.2);
-    assert_eq!(answer.2["reference"], "TCL");
 }

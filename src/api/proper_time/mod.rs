@@ -49,7 +49,7 @@ pub fn router() -> Router<AppState> {
                     ]}],
                     "options": {"reference": "TL", "interpolation_points": 2}})))
             )),
-            (String = "application/ccsds-oem", example = "CCSDS_OEM_VERS = 2.0\nCREATION_DATE = 2026-05-19T12:00:00\nORIGINATOR = TERN-DEMO-OPS\nMETA_START\nOBJECT_NAME = TERN-1\nOBJECT_ID = 2026-951A\nCENTER_NAME = MOON\nREF_FRAME = ICRF\nTIME_SYSTEM = TDB\nSTART_TIME = 2026-05-20T00:00:00\nSTOP_TIME = 2026-05-20T00:03:00\nMETA_STOP\n2026-05-20T00:00:00 1837.4000 0 0.0000 0 0 1.633504\n2026-05-20T00:01:00 1834.7866 0 97.9638 -0.087093 0 1.631181\n2026-05-20T00:02:00 1826.9538 0 195.6489 -0.173938 0 1.624217\n2026-05-20T00:03:00 1813.9240 0 292.7774 -0.260288 0 1.612633\n"),
+            (String = "application/ccsds-oem"),
             (String = "application/sp3"),
             (String = "text/plain"))),
     responses(

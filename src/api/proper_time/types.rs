@@ -48,8 +48,8 @@ pub struct ProperTimeOptionsInput {
     /// `grs80` (the GRS80 normal field in closed form).
     #[param(value_type = Option<GravityModelName>, example = "point_mass")]
     pub gravity_model: Option<String>,
-    /// Answer every `step_s` seconds (of TT) from the first epoch instead of at the input
-    /// epochs; from 0.001 s to 315 537 897 600 s (the supported range of instants).
+    /// Answer every `step_s` seconds (of TT; of TCL for selenocentric tracks) from the first
+    /// epoch instead of at the input epochs; from 0.001 s to 315 537 897 600 s (the supported range of instants).
     #[param(minimum = 0.001, maximum = 315537897600.0, example = 600.0)]
     pub step_s: Option<f64>,
     /// tau - t at the first epoch, seconds (default 0): added to every `tau_minus_t_s`; at most
@@ -84,7 +84,8 @@ pub struct ProperTimeBodyOptions {
     /// Earth potential: `point_mass` (default), `j2` or `grs80` (not yet `j2_sun_moon`).
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
-    /// Output step, seconds of TT, from 0.001 to 315 537 897 600.
+    /// Output step, seconds of TT (of TCL for selenocentric tracks), from 0.001 to
+    /// 315 537 897 600.
     #[schema(minimum = 0.001, maximum = 315537897600.0)]
     pub step_s: Option<f64>,
     /// tau - t at the first epoch, seconds, at most 315 537 897 600 in magnitude.
@@ -200,7 +201,8 @@ pub struct EphemerisInput {
 pub struct SampleOutput {
     /// Epoch in the ephemeris' time scale, ISO 8601 with 12 decimals.
     pub epoch: String,
-    /// Coordinate time (TT, or TCG) since the first epoch, seconds.
+    /// Coordinate time (TT or TCG; TCL, TL or TT for selenocentric tracks: the `reference`)
+    /// since the first epoch, seconds.
     pub elapsed_s: f64,
     /// Proper time minus coordinate time, seconds: `initial_offset_s` + the accumulated
     /// integral of d(tau)/dt - 1. Positive and growing: the clock runs fast.
