@@ -104,9 +104,10 @@ impl LunarEnvironment {
                 p[2] + s * (q[2] - p[2]),
             ]
         };
+        let basis = HermiteBasis::at(s, Self::NODE_STEP_S);
         Some(LunarSurroundings {
-            earth_m: hermite(a.earth, b.earth, s, Self::NODE_STEP_S),
-            sun_m: hermite(a.sun, b.sun, s, Self::NODE_STEP_S),
+            earth_m: basis.apply(&a.earth, &b.earth),
+            sun_m: basis.apply(&a.sun, &b.sun),
             moon_velocity_m_s: linear(a.moon_velocity_m_s, b.moon_velocity_m_s),
             pole: LunarPole {
                 unit: linear(a.pole, b.pole),
@@ -115,17 +116,36 @@ impl LunarEnvironment {
     }
 }
 
-/// Cubic Hermite interpolation of a position between nodes `h_s` apart at the fraction `s`
-/// (the standard basis h00 = 2s^3 - 3s^2 + 1, h10 = s^3 - 2s^2 + s, h01 = -2s^3 + 3s^2,
-/// h11 = s^3 - s^2; e.g. Burden & Faires, Numerical Analysis, section 3.4).
-fn hermite(a: ([f64; 3], [f64; 3]), b: ([f64; 3], [f64; 3]), s: f64, h_s: f64) -> [f64; 3] {
-    let s2 = s * s;
-    let s3 = s2 * s;
-    let h00 = 2.0 * s3 - 3.0 * s2 + 1.0;
-    let h10 = (s3 - 2.0 * s2 + s) * h_s;
-    let h01 = -2.0 * s3 + 3.0 * s2;
-    let h11 = (s3 - s2) * h_s;
-    [0, 1, 2].map(|k| h00 * a.0[k] + h10 * a.1[k] + h01 * b.0[k] + h11 * b.1[k])
+/// The cubic Hermite basis at the fraction `s` between nodes `h_s` apart, computed once for
+/// every body interpolated at that time: h00 = 2s^3 - 3s^2 + 1, h10 = s^3 - 2s^2 + s,
+/// h01 = -2s^3 + 3s^2, h11 = s^3 - s^2 (e.g. Burden & Faires, Numerical Analysis, sec. 3.4).
+struct HermiteBasis {
+    h00: f64,
+    h10: f64,
+    h01: f64,
+    h11: f64,
+}
+
+impl HermiteBasis {
+    fn at(s: f64, h_s: f64) -> Self {
+        let s2 = s * s;
+        let s3 = s2 * s;
+        Self {
+            h00: 2.0 * s3 - 3.0 * s2 + 1.0,
+            h10: (s3 - 2.0 * s2 + s) * h_s,
+            h01: -2.0 * s3 + 3.0 * s2,
+            h11: (s3 - s2) * h_s,
+        }
+    }
+
+    /// The position between node states `a` and `b` (position, velocity).
+    fn apply(&self, a: &([f64; 3], [f64; 3]), b: &([f64; 3], [f64; 3])) -> [f64; 3] {
+        let mut out = [0.0; 3];
+        for (k, value) in out.iter_mut().enumerate() {
+            *value = self.h00 * a.0[k] + self.h10 * a.1[k] + self.h01 * b.0[k] + self.h11 * b.1[k];
+        }
+        out
+    }
 }
 
 /// Tidal potential of one body of mass parameter `gm_m3_s2` at selenocentric position
