@@ -24,6 +24,10 @@ echo "== CCSDS OEM (GCRF, UTC): Lyra and Kestrel-1"
 curl -sS --fail-with-body -X POST -H 'Content-Type: application/ccsds-oem' \
     --data-binary "@$here/lyra_kestrel.oem" "$url" | summarize
 
+echo "== CCSDS OEM (CENTER_NAME = MOON, ICRF, TDB): the Tern lunar orbiters against TCL"
+curl -sS --fail-with-body -X POST -H 'Content-Type: application/ccsds-oem' \
+    --data-binary "@$here/tern_lunar.oem" "$url?include_series=false" | summarize
+
 echo "== SP3-d (Earth-fixed, GPS time): Lyra"
 curl -sS --fail-with-body -X POST -H 'Content-Type: application/sp3' \
     --data-binary "@$here/lyra.sp3" "$url" | summarize

@@ -90,7 +90,7 @@ fn the_documented_json_ephemeris_is_the_type_that_reads_it() {
         (
             "EphemerisInput",
             fields_of::<JsonEphemeris<ProperTimeBodyOptions>>(),
-            &["epoch_format", "options"][..],
+            &["center", "epoch_format", "options"][..],
         ),
         ("EphemerisObjectInput", fields_of::<JsonObject>(), &[][..]),
         (

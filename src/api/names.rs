@@ -154,7 +154,10 @@ pub fn vocabulary_schema<V: Vocabulary>(description: &str) -> RefOr<Schema> {
     string_enum(V::SPELLINGS.iter().copied(), description)
 }
 
-fn string_enum<'a>(values: impl IntoIterator<Item = &'a str>, description: &str) -> RefOr<Schema> {
+pub fn string_enum<'a>(
+    values: impl IntoIterator<Item = &'a str>,
+    description: &str,
+) -> RefOr<Schema> {
     ObjectBuilder::new()
         .schema_type(Type::String)
         .enum_values(Some(values))

@@ -404,11 +404,19 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     ),
     (
         "oem_unsupported_center",
-        "CENTER_NAME is not EARTH: the service computes geocentric clock rates.",
+        "CENTER_NAME is neither EARTH (geocentric states) nor MOON (selenocentric states, ICRF axes).",
+    ),
+    (
+        "frame_center_mismatch",
+        "The frame does not belong to the centre (a lunar frame for an Earth-centred ephemeris, an Earth frame such as GCRF or ITRF for a Moon-centred one), geocentric and selenocentric objects are mixed, or the `reference` belongs to the other centre (TCL, TL for lunar tracks; TCG for geocentric ones); `line`, `field` or `object` says where.",
+    ),
+    (
+        "unknown_center",
+        "The JSON ephemeris `center` is neither `earth` nor `moon` (written exactly so).",
     ),
     (
         "oem_unsupported_frame",
-        "REF_FRAME is not one the service reads (EME2000, GCRF, ICRF, ITRF family).",
+        "REF_FRAME is not one the service reads (EME2000, GCRF, ICRF, ITRF family; with CENTER_NAME = MOON: ICRF or EME2000, lunar body-fixed frames are not read yet).",
     ),
     (
         "oem_unsupported_time_system",
@@ -750,6 +758,8 @@ mod tests {
                         "week_near",
                         "rinex_clock",
                         "tdb_model",
+                        "observer_itrf_m",
+                        "selenocentric_observer_m",
                     ];
                     if is_code_like
                         && !known_field.contains(&word.as_str())

@@ -8,6 +8,7 @@ pub mod constants;
 pub mod earth;
 pub mod geodesy;
 pub mod gravity;
+pub mod lunar_orbit;
 pub mod moon;
 pub mod proper_time;
 pub mod rate;

@@ -14,7 +14,8 @@ use serde::Deserialize;
 
 use super::error::TrajectoryError;
 use super::text::to_storage;
-use super::{Frame, ObjectTrack, TrajectorySet, TrajectoryState};
+use super::{ObjectTrack, TrajectorySet, TrajectoryState};
+use crate::physics::lunar_orbit::TrajectoryCenter;
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::error::TimeError;
 use crate::physics::time::formats::{parse_instant, InstantFormat};
@@ -29,6 +30,10 @@ use crate::physics::time::scale::Scale;
 pub struct JsonEphemeris<O = NoOptions> {
     /// Frame name (GCRF, GCRS, EME2000, ICRF, ITRF...), written exactly.
     pub frame: String,
+    /// The origin of the positions: `earth` (default) or `moon` (selenocentric, ICRF axes; see
+    /// [`super::lunar`]).
+    #[serde(default)]
+    pub center: Option<String>,
     /// Time scale of the epochs, written exactly.
     pub time_scale: String,
     /// Instant format of the epochs (default `iso`), written exactly.
@@ -98,17 +103,20 @@ pub fn from_document<O>(
     document: &JsonEphemeris<O>,
     context: &ConversionContext<'_>,
 ) -> Result<TrajectorySet, TrajectoryError> {
-    let frame = Frame::from_name(&document.frame).ok_or_else(|| {
-        TrajectoryError::new(
-            "unsupported_frame",
-            format!(
-                "frame {:?} is not supported; expected {}, in upper case",
-                document.frame,
-                Frame::names_in_words()
-            ),
-        )
-        .with_field("frame")
-    })?;
+    let center = match document.center.as_deref() {
+        None => TrajectoryCenter::Earth,
+        Some(name) => TrajectoryCenter::from_name(name).ok_or_else(|| {
+            TrajectoryError::new(
+                "unknown_center",
+                format!(
+                    "center {name:?} is not known; expected {} (written exactly so)",
+                    TrajectoryCenter::NAMES.join(" or ")
+                ),
+            )
+            .with_field("center")
+        })?,
+    };
+    let frame = super::lunar::json_frame(center, &document.frame)?;
     let time_error = |error: TimeError, field: &'static str| {
         TrajectoryError::new(error.code(), error.to_string()).with_field(field)
     };

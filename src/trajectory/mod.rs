@@ -20,6 +20,7 @@ pub mod interpolate;
 pub mod json;
 #[cfg(test)]
 mod json_tests;
+pub mod lunar;
 pub mod oem;
 pub mod sp3;
 pub mod text;
@@ -45,6 +46,9 @@ pub enum Frame {
     Inertial,
     /// A geocentric frame rotating with the Earth: ITRF realizations, the IGS frames of SP3.
     EarthFixed,
+    /// A selenocentric frame with ICRF axes (the LCRS's spatial axes): OEM `CENTER_NAME =
+    /// MOON` with `REF_FRAME = ICRF` or `EME2000`, JSON `center: moon` (see [`lunar`]).
+    LunarInertial,
 }
 
 /// Exact names of the geocentric inertial frames a JSON ephemeris may name.
@@ -88,6 +92,7 @@ impl Frame {
         match self {
             Frame::Inertial => "inertial",
             Frame::EarthFixed => "earth_fixed",
+            Frame::LunarInertial => "lunar_inertial",
         }
     }
 }

@@ -129,6 +129,13 @@ where
             };
             integrate_proper_time_at(&rotating, &epochs_s, rate, options)
         }
+        Frame::LunarInertial => {
+            return Err(TrajectoryError::new(
+                "frame_center_mismatch",
+                "a selenocentric track takes the lunar-orbit rate (trajectory::lunar), not a geocentric one",
+            )
+            .for_object(&track.id))
+        }
     }
     .map_err(|e| from_physics(e, &track.id))?;
     Ok(TrackProperTime {

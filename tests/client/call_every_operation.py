@@ -129,6 +129,26 @@ def convert_get(api, m, document):
     ut1 = expect(api.call("convert_get", at="2026-03-14T06:30:00", to="UT1"), 200)
     assert abs(Decimal(ut1.results[0].difference_exact_s)) < Decimal("0.9"), ut1.results[0]
     assert ut1.warnings == [], ut1.warnings
+    # A selenocentric observer at the lunar south pole moves TCL by -v_M.x/c^2 (IAU 2000
+    # B1.5 with the Moon for the Earth): at most |v_M| r / c^2 = 6e-7 s (common practice).
+    centre = expect(api.call("convert_get", at="2026-03-14T06:30:00", to="TCL"), 200)
+    pole = expect(
+        api.call(
+            "convert_get",
+            at="2026-03-14T06:30:00",
+            to="TCL",
+            selenocentric_observer_m="0,0,-1737400",
+        ),
+        200,
+    )
+    moved = Decimal(pole.results[0].difference_exact_s) - Decimal(centre.results[0].difference_exact_s)
+    assert Decimal("1e-9") < abs(moved) < Decimal("6.3e-7"), moved
+    expect_problem(
+        api.call("convert_get", at="2026-03-14T06:30:00", to="TCL", selenocentric_observer_m="0,0,1e6"),
+        422,
+        "below_surface",
+        field="selenocentric_observer_m",
+    )
     # An unknown scale and a date that does not exist are 422 problems with their codes.
     expect_problem(
         api.call("convert_get", at="2026-03-14T06:30:00", to="TAI,XYZ"),
@@ -410,7 +430,7 @@ def proper_time(api, m, document):
         api.call(
             "proper_time",
             body=body,
-            reference=m.ReferenceName.TT,
+            reference=m.ProperTimeReferenceName.TT,
             gravity_model=m.GravityModelName.POINT_MASS,
         ),
         200,
@@ -437,12 +457,59 @@ def proper_time(api, m, document):
 
     # The same request drawn (Accept: image/svg+xml): a self-contained SVG with the series.
     drawn = api.call_accepting(
-        "image/svg+xml", "proper_time", body=body, reference=m.ReferenceName.TT
+        "image/svg+xml", "proper_time", body=body, reference=m.ProperTimeReferenceName.TT
     )
     expect(drawn, 200, "image/svg+xml")
     svg = drawn.content.decode("utf-8")
     assert "<svg" in svg and 'data-series="tau_minus_t_s"' in svg and "WREN-7" in svg, svg[:300]
     assert "<script" not in svg and "@font-face" not in svg
+
+    # An invented lunar orbiter (TERN-9) on a circle of 1 837.4 km about the Moon, ICRF axes:
+    # against TL the answer warns that TL is a proposal; against TCL with the Moon's point mass
+    # the rate is -(3 GM_M / (2a))/c^2 = -4.4534e-11 (common practice) within the tides of the
+    # Earth and the Sun (below 3e-16); the simultaneity term stays apart from tau - t.
+    gm_moon, a_m = 4.902800118e12, 1_837_400.0
+    speed, states = math.sqrt(gm_moon / a_m), []
+    for t_s in (0, 60, 120, 180):
+        angle = speed / a_m * t_s
+        states.append(
+            {
+                "epoch": f"2026-05-20T00:{t_s // 60:02d}:00",
+                "position_m": [a_m * math.cos(angle), 0.0, a_m * math.sin(angle)],
+                "velocity_m_s": [-speed * math.sin(angle), 0.0, speed * math.cos(angle)],
+            }
+        )
+    lunar = m.EphemerisInput.from_dict(
+        {
+            "frame": "ICRF",
+            "center": "moon",
+            "time_scale": "TDB",
+            "objects": [{"id": "TERN-9", "states": states}],
+        }
+    )
+    tl = expect(api.call("proper_time", body=lunar, reference=m.ProperTimeReferenceName.TL), 200)
+    assert tl.reference == "TL" and any("proposal" in w for w in tl.warnings), tl.warnings
+    tcl = expect(
+        api.call(
+            "proper_time",
+            body=lunar,
+            reference=m.ProperTimeReferenceName.TCL,
+            gravity_model=m.GravityModelName.POINT_MASS,
+        ),
+        200,
+    )
+    (tern,) = tcl.objects
+    assert tern.frame == "lunar_inertial", tern.frame
+    near(tern.summary.mean_rate, -1.5 * gm_moon / (a_m * C_M_S**2), 3e-16, "lunar orbit rate")
+    sample = tern.series[-1]
+    near(sample.tau_minus_t_s, sample.velocity_part_s + sample.gravity_part_s, 1e-18, "parts")
+    assert sample.lunar.simultaneity_s != 0.0
+    # An Earth frame for a Moon-centred ephemeris: 422 naming the field.
+    wrong = m.EphemerisInput.from_dict(
+        {"frame": "GCRF", "center": "moon", "time_scale": "TDB",
+         "objects": [{"id": "TERN-9", "states": states}]}
+    )
+    expect_problem(api.call("proper_time", body=wrong), 422, "frame_center_mismatch", field="frame")
 
 
 def csv_rows(response):

@@ -67,13 +67,16 @@ fn figure_axis(track: &ObjectTrack, context: &ConversionContext<'_>) -> [f64; 3]
     }
 }
 
-fn instant_forms(instant: &Instant, table: &LeapTable) -> Result<InstantForms, ApiError> {
+pub(super) fn instant_forms(
+    instant: &Instant,
+    table: &LeapTable,
+) -> Result<InstantForms, ApiError> {
     write_instant(instant, table)
         .map(InstantForms::from)
         .map_err(|e| ApiError::from_time(&e, "ephemeris"))
 }
 
-fn iso_text(instant: &Instant, table: &LeapTable) -> String {
+pub(super) fn iso_text(instant: &Instant, table: &LeapTable) -> String {
     day_reading(instant, table)
         .map(|reading| write_iso(&reading, ISO_DECIMALS))
         .unwrap_or_default()
@@ -117,6 +120,7 @@ fn object_output(
                 tidal_part_s: sample.tidal_part_s,
                 periodic_s: sample.periodic_s,
                 residual_s: sample.residual_s,
+                lunar: None,
             })
             .collect()
     });
@@ -134,6 +138,7 @@ fn object_output(
             mean_rate_us_per_day: summary.mean_rate_us_per_day,
             periodic_amplitude_s: summary.periodic_amplitude_s,
             kepler_residual_rms_s: summary.kepler_residual_rms_s,
+            lunar: None,
         },
         id: track.id,
         series: samples,
@@ -226,6 +231,7 @@ pub fn compute(
         tdb_model: request.tdb_model.as_str().to_string(),
         objects,
         model_notes: model_notes(model, fell_back),
+        warnings: None,
     })
 }
 

@@ -43,6 +43,9 @@ pub struct ProperTimeRequest {
     pub include_series: bool,
     /// The model of TDB - TT (TDB and TCB epochs, the TDB of the Sun and the Moon).
     pub tdb_model: TdbModel,
+    /// For a selenocentric ephemeris: its reference and field (then `reference` and
+    /// `gravity_model` above are not used).
+    pub lunar: Option<super::lunar_options::LunarOptions>,
 }
 
 /// An ephemeris error as a 422 problem naming the line, object and index.
@@ -231,15 +234,15 @@ pub fn read_request(
     check_geocentric_range(&ephemeris)?;
     let states: usize = ephemeris.objects.iter().map(|o| o.states.len()).sum();
     check_batch_size(states, settings.batch_limit, "objects", "ephemeris state")?;
-    let reference = match options.reference.as_deref() {
-        Some(text) => parse_reference(text, "reference")?,
-        None => RateReference::Tt,
+    let lunar = super::lunar_options::lunar_options(&ephemeris, &options)?;
+    let reference = match (options.reference.as_deref(), &lunar) {
+        (Some(text), None) => parse_reference(text, "reference")?,
+        _ => RateReference::Tt,
     };
-    let gravity_model = options
-        .gravity_model
-        .as_deref()
-        .map(|text| parse_gravity_model(text, "gravity_model"))
-        .transpose()?;
+    let gravity_model = match (options.gravity_model.as_deref(), &lunar) {
+        (Some(text), None) => Some(parse_gravity_model(text, "gravity_model")?),
+        _ => None,
+    };
     let interpolation = InterpolationOptions {
         points: options.interpolation_points.unwrap_or(8),
         max_gap_s: options.max_gap_s.unwrap_or(settings.max_ephemeris_gap_s),
@@ -255,5 +258,6 @@ pub fn read_request(
         interpolation,
         initial_offset_s: options.initial_offset_s.unwrap_or(0.0),
         include_series: options.include_series.unwrap_or(true),
+        lunar,
     })
 }

@@ -3,10 +3,13 @@
 
 mod answer;
 mod body;
+mod lunar;
+mod lunar_options;
 pub use body::ephemeris_problem;
 mod options;
 pub mod plot;
 pub mod types;
+mod types_lunar;
 
 use axum::extract::State;
 use axum::http::{header, HeaderMap};
@@ -30,7 +33,22 @@ pub fn router() -> Router<AppState> {
     params(ProperTimeOptionsInput),
     request_body(description = "The ephemeris: JSON (application/json), CCSDS OEM KVN (application/ccsds-oem) or SP3-c/d (application/sp3); text/plain with `format`, or sniffed from the first line.",
         content(
-            (types::EphemerisInput = "application/json"),
+            (types::EphemerisInput = "application/json", examples(
+                ("geocentric" = (summary = "An invented low-orbit clock in the GCRF (TT reference)", value = json!({
+                    "frame": "GCRF", "time_scale": "UTC",
+                    "objects": [{"id": "KESTREL-1", "states": [
+                        {"epoch": "2026-05-20T00:00:00", "position_m": [6828137.0, 0.0, 0.0], "velocity_m_s": [0.0, 4747.3, 5887.4]},
+                        {"epoch": "2026-05-20T00:01:00", "position_m": [6816514.4, 284532.4, 352852.0], "velocity_m_s": [-387.4, 4739.2, 5877.4]}
+                    ]}],
+                    "options": {"reference": "TT", "interpolation_points": 2}}))),
+                ("lunar" = (summary = "The invented lunar orbiter TERN-1 about the Moon (ICRF axes), against TL", value = json!({
+                    "frame": "ICRF", "center": "moon", "time_scale": "TDB",
+                    "objects": [{"id": "TERN-1", "states": [
+                        {"epoch": "2026-05-20T00:00:00", "position_m": [1837400.0, 0.0, 0.0], "velocity_m_s": [0.0, 0.0, 1633.5]},
+                        {"epoch": "2026-05-20T00:01:00", "position_m": [1834786.6, 0.0, 97963.8], "velocity_m_s": [-87.1, 0.0, 1631.2]}
+                    ]}],
+                    "options": {"reference": "TL", "interpolation_points": 2}})))
+            )),
             (String = "application/ccsds-oem"),
             (String = "application/sp3"),
             (String = "text/plain"))),
@@ -41,7 +59,7 @@ pub fn router() -> Router<AppState> {
         (status = 400, description = "The query string cannot be read (`invalid_query`: an unknown parameter or `format`, a wrong type), the body is not UTF-8 (`unreadable_body`), or a body sent as application/json is not the JSON ephemeris (`invalid_json`, `invalid_body`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 413, description = "Body above the configured limit (`body_too_large`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 415, description = "A Content-Type the endpoint does not read (`unsupported_media_type`)", body = crate::api::error::Problem, content_type = "application/problem+json"),
-        (status = 422, description = "The ephemeris or an option cannot be used: `code` says why (a file that does not follow its format: unknown_ephemeris_format, json_invalid, the OEM and SP3 reader codes; unsupported_frame, unknown_scale, unsupported_time_scale (UT1), unknown_format, bad_epoch, mixed_velocity, not_finite, below_surface, beyond_model_range, speed_not_below_c, epochs_not_increasing, gap_too_long, too_few_states, sampling_too_coarse, bad_option, empty_batch, batch_too_large, unknown_reference, unknown_gravity_model, integration_failed; outside_ephemeris_span (a track beyond the planetary ephemeris in force when the Sun and Moon tide model is asked for by name; without a model the default falls back to J2 alone, with a note); unknown_tdb_model, outside_tdb_model_span (`tdb_model=ephemeris` for epochs outside 1959-12-30 to 2101-01-02 TT); for Earth-fixed tracks eop_before_table, eop_after_table: their epochs must lie inside the Earth orientation table in force); `line` (files), `object`, `index` and `field` say where", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 422, description = "The ephemeris or an option cannot be used: `code` says why (a file that does not follow its format: unknown_ephemeris_format, json_invalid, the OEM and SP3 reader codes; unsupported_frame, unknown_scale, unsupported_time_scale (UT1), unknown_format, bad_epoch, mixed_velocity, not_finite, below_surface, beyond_model_range, speed_not_below_c, epochs_not_increasing, gap_too_long, too_few_states, sampling_too_coarse, bad_option, empty_batch, batch_too_large, unknown_reference, unknown_gravity_model, integration_failed; outside_ephemeris_span (a track beyond the planetary ephemeris in force when the Sun and Moon tide model is asked for by name; without a model the default falls back to J2 alone, with a note); unknown_tdb_model, outside_tdb_model_span (`tdb_model=ephemeris` for epochs outside 1959-12-30 to 2101-01-02 TT); for Earth-fixed tracks eop_before_table, eop_after_table: their epochs must lie inside the Earth orientation table in force; for selenocentric tracks (OEM CENTER_NAME = MOON, JSON center moon) frame_center_mismatch (a frame or reference of the other centre, or mixed centres), unknown_center, outside_ephemeris_span and outside_lunar_time_span via bad_epoch (epochs outside 1960-2100), below_surface (below the Moon's mean radius, 1 737 400 m), beyond_model_range (beyond 60 000 km from the Moon)); `line` (files), `object`, `index` and `field` say where", body = crate::api::error::Problem, content_type = "application/problem+json"),
         crate::api::error::TimeoutProblem))]
 pub async fn proper_time(
     State(state): State<AppState>,
@@ -68,7 +86,10 @@ pub async fn proper_time(
         let mut request = body::read_request(&headers, query, &body, &table, &settings)?;
         // A plot draws the series, whatever `include_series` says.
         request.include_series |= kind == AnswerType::Svg;
-        let answer = answer::compute(&request, &table, &eop, &ephemeris)?;
+        let answer = match &request.lunar {
+            Some(lunar) => lunar::compute(&request, lunar, &table, &ephemeris)?,
+            None => answer::compute(&request, &table, &eop, &ephemeris)?,
+        };
         let text = match kind {
             AnswerType::Json => {
                 return Ok(([(header::VARY, "accept")], Json(answer)).into_response())

@@ -8,6 +8,7 @@ use super::types::{ProperTimeOptionsInput, MAX_OPTION_SECONDS};
 use crate::api::clock::evaluate::{parse_gravity_model, parse_reference};
 use crate::api::error::ApiError;
 use crate::api::names::parse_tdb_model;
+use crate::physics::lunar_orbit::LunarReference;
 use crate::physics::readable::readable;
 use crate::trajectory::MAX_POINTS;
 
@@ -19,7 +20,15 @@ const MIN_STEP_S: f64 = 1e-3;
 pub fn check_options(options: &ProperTimeOptionsInput, prefix: &str) -> Result<(), ApiError> {
     let field = |name: &str| format!("{prefix}{name}");
     if let Some(text) = options.reference.as_deref() {
-        parse_reference(text, &field("reference"))?;
+        if LunarReference::from_name(text).is_none() {
+            parse_reference(text, &field("reference")).map_err(|_| {
+                ApiError::unprocessable(
+                    "unknown_reference",
+                    format!("reference `{text}` is not known; expected TT or TCG (geocentric tracks), or TCL, TL or TT (selenocentric tracks), written exactly so"),
+                )
+                .with_field(field("reference"))
+            })?;
+        }
     }
     if let Some(text) = options.gravity_model.as_deref() {
         parse_gravity_model(text, &field("gravity_model"))?;

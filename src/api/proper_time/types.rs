@@ -3,7 +3,10 @@
 use serde::{Deserialize, Serialize};
 use utoipa::{IntoParams, ToSchema};
 
-use crate::api::clock::types::{GravityModelName, ReferenceName};
+pub use super::types_lunar::{
+    LunarSampleOutput, LunarSummaryOutput, ProperTimeReferenceName, TrajectoryCenterName,
+};
+use crate::api::clock::types::GravityModelName;
 use crate::api::names::{
     EphemerisFrameName, EphemerisVelocityMS, InstantFormatName, InstantString, PositionM,
     ScaleName, TdbModelName,
@@ -37,8 +40,10 @@ pub struct ProperTimeOptionsInput {
     /// it wins over the Content-Type.
     #[param(value_type = Option<EphemerisFormatName>, example = "oem")]
     pub format: Option<String>,
-    /// Coordinate time the clock is compared with: `TT` (default) or `TCG`.
-    #[param(value_type = Option<ReferenceName>, example = "TT")]
+    /// Coordinate time the clock is compared with: `TT` (default) or `TCG` for geocentric
+    /// tracks; `TCL` (default), `TL` (a proposal, not a standard) or `TT` for selenocentric
+    /// tracks (422 `frame_center_mismatch` otherwise).
+    #[param(value_type = Option<ProperTimeReferenceName>, example = "TT")]
     pub reference: Option<String>,
     /// Potential model: `j2_sun_moon` (default: J2 about the CIP with the IERS Conventions
     /// (2010) GM, J2, a_E, plus the Sun's and the Moon's tidal potentials from the planetary
@@ -46,8 +51,8 @@ pub struct ProperTimeOptionsInput {
     /// ephemeris), `j2`, `grs80` (the GRS80 normal field in closed form) or `point_mass`.
     #[param(value_type = Option<GravityModelName>, example = "j2_sun_moon")]
     pub gravity_model: Option<String>,
-    /// Answer every `step_s` seconds (of TT) from the first epoch instead of at the input
-    /// epochs; from 0.001 s to 315 537 897 600 s (the supported range of instants).
+    /// Answer every `step_s` seconds (of TT; of TCL for selenocentric tracks) from the first
+    /// epoch instead of at the input epochs; from 0.001 s to 315 537 897 600 s (the supported range of instants).
     #[param(minimum = 0.001, maximum = 315537897600.0, example = 600.0)]
     pub step_s: Option<f64>,
     /// tau - t at the first epoch, seconds (default 0): added to every `tau_minus_t_s`; at most
@@ -80,14 +85,16 @@ pub struct ProperTimeBodyOptions {
     /// Ignored in a JSON body (the body is JSON); checked like the query parameter.
     #[schema(value_type = Option<EphemerisFormatName>)]
     pub format: Option<String>,
-    /// Coordinate time the clock is compared with: `TT` (default) or `TCG`.
-    #[schema(value_type = Option<ReferenceName>)]
+    /// Coordinate time the clock is compared with: `TT` (default) or `TCG` for geocentric
+    /// tracks; `TCL` (default), `TL` (a proposal) or `TT` for selenocentric tracks.
+    #[schema(value_type = Option<ProperTimeReferenceName>)]
     pub reference: Option<String>,
     /// Potential model: `j2_sun_moon` (default; J2 alone, with a note, when a track lies
     /// outside the planetary ephemeris), `j2`, `grs80` or `point_mass`.
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
-    /// Output step, seconds of TT, from 0.001 to 315 537 897 600.
+    /// Output step, seconds of TT (of TCL for selenocentric tracks), from 0.001 to
+    /// 315 537 897 600.
     #[schema(minimum = 0.001, maximum = 315537897600.0)]
     pub step_s: Option<f64>,
     /// tau - t at the first epoch, seconds, at most 315 537 897 600 in magnitude.
@@ -182,6 +189,12 @@ pub struct EphemerisInput {
     /// `ECEF`, `WGS84` (Earth-fixed; velocities made inertial with the Earth's rotation).
     #[schema(value_type = EphemerisFrameName)]
     pub frame: String,
+    /// The origin of the positions: `earth` (default) or `moon` (selenocentric states with
+    /// ICRF axes: `frame` ICRF, EME2000 or J2000; positions between the Moon's mean radius,
+    /// 1 737 400 m, and 60 000 km, else 422 `below_surface`, `beyond_model_range`). A lunar
+    /// frame with the Earth, or an Earth frame with the Moon: 422 `frame_center_mismatch`.
+    #[schema(value_type = Option<TrajectoryCenterName>, example = "moon")]
+    pub center: Option<String>,
     /// Time scale of the epochs: UTC, TAI, TT, TCG, TCB, TDB, GPST, GST, BDT, QZSST.
     #[schema(value_type = ScaleName)]
     pub time_scale: String,
@@ -201,7 +214,8 @@ pub struct EphemerisInput {
 pub struct SampleOutput {
     /// Epoch in the ephemeris' time scale, ISO 8601 with 12 decimals.
     pub epoch: String,
-    /// Coordinate time (TT, or TCG) since the first epoch, seconds.
+    /// Coordinate time (TT or TCG; TCL, TL or TT for selenocentric tracks: the `reference`)
+    /// since the first epoch, seconds.
     pub elapsed_s: f64,
     /// Proper time minus coordinate time, seconds: `initial_offset_s` + the accumulated
     /// integral of d(tau)/dt - 1. Positive and growing: the clock runs fast.
@@ -209,17 +223,24 @@ pub struct SampleOutput {
     /// The part of the accumulated offset due to the velocity term -v^2/(2c^2), seconds.
     pub velocity_part_s: f64,
     /// The part due to the Earth's gravity term (W0 - U)/c^2 against TT, -U/c^2 against TCG,
-    /// seconds.
+    /// seconds (selenocentric objects: the Moon's -U_Moon/c^2 plus the reference's part, see
+    /// `lunar`).
     pub gravity_part_s: f64,
     /// The part due to the tidal potentials of the Sun and the Moon, -w_tidal/c^2 (IERS
-    /// Conventions (2010) eq. 10.6), seconds; zero for models without them. tau - t =
+    /// Conventions (2010) eq. 10.6), seconds (selenocentric objects: of the Earth and the Sun);
+    /// zero for models without them. tau - t =
     /// initial_offset_s + velocity_part_s + gravity_part_s + tidal_part_s.
     pub tidal_part_s: f64,
     /// The Keplerian periodic term -2 r.v / c^2 at this epoch, seconds (IS-GPS-200 20.3.3.3.3.1).
     pub periodic_s: f64,
     /// tau - t minus the periodic term and the least-squares line, seconds: what the broadcast
-    /// two-term model misses (e.g. J2 effects, manoeuvres).
+    /// two-term model misses (e.g. J2 effects, manoeuvres). For selenocentric objects: the
+    /// clock-rate periodic part minus the periodic term.
     pub residual_s: f64,
+    /// Selenocentric objects only: the lunar parts, the clock-rate periodic part and the
+    /// coordinate-simultaneity term, kept apart.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub lunar: Option<LunarSampleOutput>,
 }
 
 /// Summary of one object.
@@ -233,8 +254,8 @@ pub struct SummaryOutput {
     pub span_s: f64,
     /// tau - t accumulated from the first to the last epoch, seconds (without the initial offset).
     pub accumulated_s: f64,
-    /// The part of `accumulated_s` due to the tidal potentials of the Sun and the Moon,
-    /// seconds (zero for models without them).
+    /// The part of `accumulated_s` due to the tidal potentials of the Sun and the Moon
+    /// (selenocentric objects: the Earth and the Sun), seconds (zero for models without them).
     pub tidal_part_s: f64,
     /// accumulated / span: the mean fractional rate offset (positive: runs fast).
     pub mean_rate: f64,
@@ -244,6 +265,10 @@ pub struct SummaryOutput {
     pub periodic_amplitude_s: f64,
     /// RMS of the residual against line + periodic term, seconds.
     pub kepler_residual_rms_s: f64,
+    /// Selenocentric objects only: the centre, the tides' rate, the clock-rate periodic and
+    /// simultaneity amplitudes.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub lunar: Option<LunarSummaryOutput>,
 }
 
 /// The answer for one object.
@@ -251,7 +276,7 @@ pub struct SummaryOutput {
 pub struct ObjectOutput {
     /// The object's id (OEM OBJECT_NAME, SP3 satellite id, JSON id).
     pub id: String,
-    /// `inertial` or `earth_fixed`.
+    /// `inertial`, `earth_fixed` or `lunar_inertial` (selenocentric, ICRF axes).
     pub frame: String,
     /// The time scale of the epochs.
     pub time_scale: String,
@@ -267,10 +292,12 @@ pub struct ObjectOutput {
 /// The answer: one entry per object in the ephemeris.
 #[derive(Debug, Clone, Serialize, ToSchema)]
 pub struct ProperTimeAnswer {
-    /// `TT` or `TCG`.
+    /// `TT` or `TCG`; for a selenocentric ephemeris `TCL`, `TL` or `TT`.
     pub reference: String,
     /// The model used: `j2_sun_moon`, `j2`, `grs80` or `point_mass` (the default `j2_sun_moon`
-    /// becomes `j2` when a track lies outside the planetary ephemeris; a note says so).
+    /// becomes `j2` when a track lies outside the planetary ephemeris; a note says so); for a
+    /// selenocentric ephemeris `point_mass` or `j2` (the Moon's field, with the Earth's and the
+    /// Sun's tides).
     pub gravity_model: String,
     /// The model of TDB - TT used (`series` or `ephemeris`): for epochs given in TDB or TCB
     /// and for the TDB at which the Sun and the Moon of the tides are read.
@@ -280,4 +307,7 @@ pub struct ProperTimeAnswer {
     pub objects: Vec<ObjectOutput>,
     /// The model and its approximations.
     pub model_notes: Vec<String>,
+    /// Warnings (e.g. that TL is a proposal, not a standard); absent when none.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub warnings: Option<Vec<String>>,
 }

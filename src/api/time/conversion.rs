@@ -2,6 +2,7 @@
 //! any media type (JSON with the selected forms, or CSV cells).
 
 use super::forms::FormSelection;
+use super::lunar_observer::{is_lunar, shift_s, LunarObserver};
 use super::types::{Conversion, ConvertedInstant};
 use crate::api::error::ApiError;
 use crate::physics::time::calendar::CalendarDate;
@@ -9,7 +10,7 @@ use crate::physics::time::convert::{convert, ConversionContext};
 use crate::physics::time::decimal::format_attos_as_seconds;
 use crate::physics::time::error::TimeError;
 use crate::physics::time::formats::{parse_instant, InstantDigits, InstantFormat};
-use crate::physics::time::instant::{attos_to_seconds_f64, Instant};
+use crate::physics::time::instant::{attos_to_seconds_f64, seconds_f64_to_attos, Instant};
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::scale::Scale;
 use crate::physics::time::tdb_model::TdbModel;
@@ -107,6 +108,21 @@ pub fn convert_one(
     context: &ConversionContext<'_>,
     field: FieldName<'_>,
 ) -> Result<Converted, ApiError> {
+    convert_one_observed(text, format, from, targets, context, field, None)
+}
+
+/// [`convert_one`] for an event at a selenocentric observer (`lunar`): results between a
+/// lunar scale and another carry the position-dependent term of TCB - TCL (see
+/// [`super::lunar_observer::shift_s`]), and a warning states its value.
+pub fn convert_one_observed(
+    text: &str,
+    format: InstantFormat,
+    from: Scale,
+    targets: &[Scale],
+    context: &ConversionContext<'_>,
+    field: FieldName<'_>,
+    lunar: Option<&LunarObserver>,
+) -> Result<Converted, ApiError> {
     let table = context.table;
     let digits =
         |instant: &Instant| InstantDigits::new(instant, table).map_err(|e| field.problem(&e));
@@ -115,9 +131,29 @@ pub fn convert_one(
     let input_reading = input.reading_count_attos();
     let mut warnings: Vec<String> = expiry_warning(&input, table).into_iter().collect();
     let mut results = Vec::with_capacity(targets.len());
+    let lunar_term_s = match lunar {
+        Some(observer) if targets.iter().any(|&t| is_lunar(t) != is_lunar(from)) => {
+            let term_s = observer.term_s(&input_instant, context)?;
+            warnings.push(format!("selenocentric observer: the position-dependent term v_M.(x - x_M)/c^2 of TCB - TCL is {term_s:.6e} s at this epoch and is included in the results between the lunar scales and the others (IAU 2000 Resolution B1.5 form with the Moon in place of the Earth)"));
+            term_s
+        }
+        Some(_) => {
+            warnings.push("selenocentric observer: no conversion here goes between a lunar scale (TCL, TL) and another, so the observer changes nothing".to_string());
+            0.0
+        }
+        None => 0.0,
+    };
     for &target in targets {
-        let output =
-            digits(&convert(&input_instant, target, context).map_err(|e| field.problem(&e))?)?;
+        let mut instant =
+            convert(&input_instant, target, context).map_err(|e| field.problem(&e))?;
+        let shift_s = shift_s(from, target, lunar_term_s);
+        if shift_s != 0.0 {
+            instant = Instant::from_count_attos(
+                target,
+                instant.count_attos() + seconds_f64_to_attos(shift_s),
+            );
+        }
+        let output = digits(&instant)?;
         if let Some(warning) = expiry_warning(&output, table) {
             if !warnings.contains(&warning) {
                 warnings.push(warning);

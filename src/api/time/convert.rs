@@ -5,10 +5,11 @@ use axum::http::{header, HeaderMap};
 use axum::response::{IntoResponse, Response};
 
 use super::broadcast_week::read_broadcast_week;
-use super::conversion::{convert_one, uses_tdb, FieldName};
+use super::conversion::{convert_one_observed, uses_tdb, FieldName};
 use super::csv::{self, CSV_CONTENT_TYPE};
 use super::forms::FormSelection;
 use super::json_view::{conversion_bytes_hint, json_bytes, BatchJson, ConversionJson};
+use super::lunar_observer::{lunar_observer, parse_lunar_observer_query};
 use super::observer::{observer_from_input, parse_observer_query};
 use super::types::{Conversion, ConversionBatch, ConvertBatchRequest, ConvertQuery};
 use crate::api::error::{ApiError, JsonBodyProblems, Problem, QueryProblems, TimeoutProblem};
@@ -64,7 +65,7 @@ const CSV_EXAMPLE: &str = "epoch,TAI_iso,TAI_j2000_s,TDB_iso,TDB_j2000_s,tdb_mod
             (Conversion = "application/json"),
             (String = "text/csv", example = json!(CSV_EXAMPLE)))),
         QueryProblems,
-        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales, a week_counter of another system than the scale), unknown_week_counter, week_counter_needs_gnss_week (a week_counter with another format, or week_near without week_counter), ut1_outside_eop_table (UT1 asked for, or given, at an epoch the Earth orientation table does not cover: before 1962 or after the end of its predictions), not_finite, observer_not_on_ground, unknown_tdb_model, outside_tdb_model_span (TDB or TCB with the ephemeris model outside 1959-12-30 to 2101-01-02 TT), outside_lunar_time_span (TCL or TL outside 1959-12-30 to 2101-01-02 TDB)", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it and `code` says why: unknown_scale, unknown_format (also for a name in `forms`), no_target_scale, no_form, malformed_instant (the text does not fit `format`), impossible_date (2026-02-30), invalid_leap_second, utc_before_1960, instant_out_of_range, format_not_for_scale (unix_s outside UTC, gnss_week outside GNSS scales, a week_counter of another system than the scale), unknown_week_counter, week_counter_needs_gnss_week (a week_counter with another format, or week_near without week_counter), ut1_outside_eop_table (UT1 asked for, or given, at an epoch the Earth orientation table does not cover: before 1962 or after the end of its predictions), not_finite, observer_not_on_ground, unknown_tdb_model, outside_tdb_model_span (TDB or TCB with the ephemeris model outside 1959-12-30 to 2101-01-02 TT), outside_lunar_time_span (TCL or TL outside 1959-12-30 to 2101-01-02 TDB); for selenocentric_observer_m: below_surface (below the lunar surface), beyond_model_range (beyond 60 000 km from the Moon), invalid_observer (with observer_itrf_m too), outside_ephemeris_span", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn convert_get(
     State(state): State<AppState>,
@@ -90,6 +91,16 @@ pub async fn convert_get(
         .as_deref()
         .map(parse_observer_query)
         .transpose()?;
+    let lunar = query
+        .selenocentric_observer_m
+        .as_deref()
+        .map(|text| parse_lunar_observer_query(text, state.ephemeris(), "selenocentric_observer_m"))
+        .transpose()?;
+    one_observer(
+        observer.is_some(),
+        lunar.is_some(),
+        "selenocentric_observer_m",
+    )?;
     let eop = state.eop_table();
     let context = ConversionContext {
         table: &table,
@@ -105,13 +116,14 @@ pub async fn convert_get(
         }
         None => (query.at.clone(), None),
     };
-    let mut converted = convert_one(
+    let mut converted = convert_one_observed(
         &at,
         format,
         from,
         &targets,
         &context,
         FieldName::Named("at"),
+        lunar.as_ref(),
     )?;
     converted.warnings.extend(note);
     let written = match answer_type(&headers) {
@@ -142,7 +154,7 @@ pub async fn convert_get(
             (ConversionBatch = "application/json"),
             (String = "text/csv", example = json!(CSV_EXAMPLE)))),
         JsonBodyProblems,
-        (status = 422, description = "A value cannot be used; `field` names it (e.g. `epochs[3]`, `forms[1]`) and `code` says why: the codes of `GET /v1/time/convert`, plus empty_batch, batch_too_large (above the configured limit), invalid_observer", body = Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A value cannot be used; `field` names it (e.g. `epochs[3]`, `forms[1]`) and `code` says why: the codes of `GET /v1/time/convert`, plus empty_batch, batch_too_large (above the configured limit), invalid_observer (also for observer with selenocentric_observer_m)", body = Problem, content_type = "application/problem+json"),
         TimeoutProblem))]
 pub async fn convert_post(
     State(state): State<AppState>,
@@ -176,6 +188,15 @@ pub async fn convert_post(
         .as_ref()
         .map(|o| observer_from_input(o, "observer"))
         .transpose()?;
+    let lunar = request
+        .selenocentric_observer_m
+        .map(|position| lunar_observer(position, state.ephemeris(), "selenocentric_observer_m"))
+        .transpose()?;
+    one_observer(
+        observer.is_some(),
+        lunar.is_some(),
+        "selenocentric_observer_m",
+    )?;
     let table = state.leap_table();
     let eop = state.eop_table();
     let items = request.epochs.len();
@@ -191,10 +212,26 @@ pub async fn convert_post(
         let convert_at = |index: usize, text: &str| {
             let field = FieldName::Item("epochs", index);
             let Some(week) = &broadcast else {
-                return convert_one(text, format, from, &targets, &context, field);
+                return convert_one_observed(
+                    text,
+                    format,
+                    from,
+                    &targets,
+                    &context,
+                    field,
+                    lunar.as_ref(),
+                );
             };
             let (full, note) = week.resolve(text, from, field)?;
-            let mut converted = convert_one(&full, format, from, &targets, &context, field)?;
+            let mut converted = convert_one_observed(
+                &full,
+                format,
+                from,
+                &targets,
+                &context,
+                field,
+                lunar.as_ref(),
+            )?;
             converted.warnings.push(note);
             Ok(converted)
         };
@@ -234,4 +271,16 @@ pub async fn convert_post(
         }
     };
     compute(items, work).await.map(respond)
+}
+
+/// Refuses an observer on the Earth together with one near the Moon: an event is at one place.
+fn one_observer(on_earth: bool, near_moon: bool, field: &str) -> Result<(), ApiError> {
+    if on_earth && near_moon {
+        return Err(ApiError::unprocessable(
+            "invalid_observer",
+            "give an observer on the Earth (for TDB - TT) or one near the Moon (for TCB - TCL), not both: an event is at one place",
+        )
+        .with_field(field));
+    }
+    Ok(())
 }

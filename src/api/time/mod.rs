@@ -6,6 +6,7 @@ pub mod convert;
 pub mod csv;
 pub mod forms;
 pub mod json_view;
+pub mod lunar_observer;
 pub mod observer;
 pub mod reference;
 pub mod types;

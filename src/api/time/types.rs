@@ -140,6 +140,13 @@ pub struct ConvertQuery {
     /// otherwise).
     #[param(value_type = Option<ThreeNumbersText>, example = "4346657.2,860661.3,4573718.4")]
     pub observer_itrf_m: Option<String>,
+    /// Observer near the Moon for the position-dependent term v_M.(x - x_M)/c^2 of TCB - TCL:
+    /// position relative to the Moon's centre, ICRF axes, metres, `x,y,z` (no spaces), from
+    /// the lunar surface (1 737 400 m less 10 km) to 60 000 km (422 `below_surface`,
+    /// `beyond_model_range` otherwise); it changes the results between TCL or TL and the
+    /// other scales. Not together with `observer_itrf_m` (422 `invalid_observer`).
+    #[param(value_type = Option<ThreeNumbersText>, example = "0,0,-1737400")]
+    pub selenocentric_observer_m: Option<String>,
     /// The forms each instant of the answer carries, comma-separated without spaces, in the
     /// order wanted: iso, mjd, jd, j2000_s, unix_s (UTC only), gnss_week (GNSS scales only)
     /// (default: every form but unix_s). In CSV one column per form per target.
@@ -207,6 +214,12 @@ pub struct ConvertBatchRequest {
     pub epochs: Vec<String>,
     /// Observer for the topocentric part of TDB - TT (geocentric when absent).
     pub observer: Option<ObserverInput>,
+    /// Observer near the Moon for the position-dependent term v_M.(x - x_M)/c^2 of TCB - TCL:
+    /// [x, y, z] relative to the Moon's centre, ICRF axes, metres, from the lunar surface
+    /// (1 737 400 m less 10 km) to 60 000 km (422 `below_surface`, `beyond_model_range`); it
+    /// changes the results between TCL or TL and the other scales. Not with `observer`.
+    #[schema(value_type = Option<Vec<f64>>, min_items = 3, max_items = 3, example = json!([0.0, 0.0, -1737400.0]))]
+    pub selenocentric_observer_m: Option<[f64; 3]>,
     /// The forms each instant of the answer carries, in the order wanted, at least one (default:
     /// every form but `unix_s`). In CSV one column per form per target.
     #[schema(value_type = Option<Vec<InstantFormatName>>, min_items = 1)]

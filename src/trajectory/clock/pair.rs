@@ -87,7 +87,8 @@ pub fn pair_clocks_with_orbits(
             let (position_m, velocity_m_s) = interpolator.state_at(t_orbit_s);
             let inertial = match track.frame {
                 Frame::EarthFixed => inertial_velocity_m_s(position_m, velocity_m_s),
-                Frame::Inertial => velocity_m_s,
+                // SP3 files are geocentric: the reader never gives a lunar track.
+                Frame::Inertial | Frame::LunarInertial => velocity_m_s,
             };
             let (_, reference_tt) = *reference.get_or_insert((value.epoch, tt));
             samples.push(ClockSample {

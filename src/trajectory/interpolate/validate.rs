@@ -2,9 +2,10 @@
 //! than light, strictly increasing epochs, enough states, no long gaps.
 
 use super::super::error::TrajectoryError;
-use super::super::ObjectTrack;
+use super::super::{Frame, ObjectTrack};
 use super::InterpolationOptions;
 use crate::physics::constants::{GRS80_SEMI_MINOR_AXIS_M, SPEED_OF_LIGHT_M_S};
+use crate::physics::lunar_orbit::check_orbit_distance;
 use crate::physics::readable::readable;
 use crate::physics::time::convert::{to_tt_attos, ConversionContext};
 use crate::physics::time::instant::Instant;
@@ -73,7 +74,10 @@ pub fn validate_track(
             ));
         }
         let radius_m = norm(&state.position_m);
-        if radius_m < GRS80_SEMI_MINOR_AXIS_M {
+        if track.frame == Frame::LunarInertial {
+            check_orbit_distance(radius_m)
+                .map_err(|(code, message)| TrajectoryError::at_state(code, id, index, message))?;
+        } else if radius_m < GRS80_SEMI_MINOR_AXIS_M {
             return Err(TrajectoryError::at_state(
                 "below_surface",
                 id,

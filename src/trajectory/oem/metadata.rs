@@ -2,8 +2,10 @@
 //! adds MESSAGE_ID to the header and keeps the metadata keywords).
 
 use super::super::error::TrajectoryError;
+use super::super::lunar::{check_center_frame, is_lunar_frame};
 use super::super::text::{epoch_error, parse_epoch};
 use super::super::Frame;
+use crate::physics::lunar_orbit::TrajectoryCenter;
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::instant::Instant;
 use crate::physics::time::scale::Scale;
@@ -138,20 +140,44 @@ impl MetadataBlock {
             .ok_or_else(|| missing("START_TIME"))?;
         let (stop_text, stop_time_line) =
             self.stop_time.clone().ok_or_else(|| missing("STOP_TIME"))?;
-        if !center.eq_ignore_ascii_case("EARTH") {
-            return Err(TrajectoryError::at_line(
-                "oem_unsupported_center",
-                self.start_line,
-                format!("CENTER_NAME is {center:?}; only EARTH (geocentric states) is supported"),
-            ));
-        }
-        let frame = frame_of_ref_frame(&frame_name).ok_or_else(|| {
-            TrajectoryError::at_line(
-                "oem_unsupported_frame",
-                frame_line,
-                format!("REF_FRAME {frame_name:?} is not supported; expected EME2000, GCRF, ICRF (inertial) or ITRF, ITRF-93, ITRF2000, ITRF2014, ITRF2020 (Earth-fixed){}", if frame_name == "GCRS" { "; CCSDS names the GCRS `GCRF`" } else { "" }),
-            )
-        })?;
+        let center = match center.to_ascii_uppercase().as_str() {
+            "EARTH" => TrajectoryCenter::Earth,
+            "MOON" => TrajectoryCenter::Moon,
+            _ => {
+                return Err(TrajectoryError::at_line(
+                    "oem_unsupported_center",
+                    self.start_line,
+                    format!("CENTER_NAME is {center:?}; EARTH (geocentric states) and MOON (selenocentric states, ICRF axes) are supported"),
+                ))
+            }
+        };
+        let frame = if center == TrajectoryCenter::Moon || is_lunar_frame(&frame_name) {
+            if frame_name == "J2000" {
+                // Selenocentric states take ICRF axes, named ICRF or EME2000 in the CCSDS
+                // (SANA) registry; J2000 is not one of its names.
+                return Err(TrajectoryError::at_line(
+                    "oem_unsupported_frame",
+                    frame_line,
+                    "REF_FRAME J2000 is not a CCSDS frame name; write EME2000 (or ICRF)",
+                ));
+            }
+            check_center_frame(center, &frame_name).map_err(|(code, message)| {
+                let code = if code == "unsupported_frame" {
+                    "oem_unsupported_frame"
+                } else {
+                    code
+                };
+                TrajectoryError::at_line(code, frame_line, format!("REF_FRAME: {message}"))
+            })?
+        } else {
+            frame_of_ref_frame(&frame_name).ok_or_else(|| {
+                TrajectoryError::at_line(
+                    "oem_unsupported_frame",
+                    frame_line,
+                    format!("REF_FRAME {frame_name:?} is not supported; expected EME2000, GCRF, ICRF (inertial) or ITRF, ITRF-93, ITRF2000, ITRF2014, ITRF2020 (Earth-fixed){}", if frame_name == "GCRS" { "; CCSDS names the GCRS `GCRF`" } else { "" }),
+                )
+            })?
+        };
         let scale = scale_of_time_system(&system).ok_or_else(|| {
             TrajectoryError::at_line(
                 "oem_unsupported_time_system",

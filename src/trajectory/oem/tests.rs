@@ -129,7 +129,7 @@ fn each_error_has_its_code_and_line() {
         ("oem_missing_keyword", Some(17))
     );
     assert_eq!(
-        error_of("CENTER_NAME = EARTH", "CENTER_NAME = MOON"),
+        error_of("CENTER_NAME = EARTH", "CENTER_NAME = MARS"),
         ("oem_unsupported_center", Some(6))
     );
     assert_eq!(
