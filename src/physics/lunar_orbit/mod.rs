@@ -36,8 +36,7 @@ use crate::physics::vocabulary::vocabulary;
 
 pub use environment::{LunarEnvironment, LunarSurroundings};
 pub use field::{
-    check_orbit_distance, moon_potential_m2_s2, LunarPole, MAX_SELENOCENTRIC_DISTANCE_M, MOON_J2,
-    MOON_J2_RADIUS_M,
+    check_orbit_distance, moon_zonal_potential_m2_s2, LunarPole, MAX_SELENOCENTRIC_DISTANCE_M,
 };
 pub use integrate::{
     integrate_lunar_proper_time, LunarProperTimeSample, LunarProperTimeSeries,

@@ -5,6 +5,7 @@
 
 use super::*;
 use crate::physics::constants::SPEED_OF_LIGHT_SQUARED_M2_S2;
+use crate::physics::moon::gravity::{GL0660B_J2, GL0660B_REFERENCE_RADIUS_M};
 use crate::physics::proper_time::ProperTimeOptions;
 use crate::physics::solar_system::gm::{GM_EARTH_DE440_M3_S2, GM_MOON_M3_S2, GM_SUN_M3_S2};
 use crate::physics::solar_system::{Body, Ephemeris};
@@ -87,7 +88,7 @@ fn moon_potential_apart(x: &[f64; 3], pole: &[f64; 3]) -> f64 {
     let r = r2.sqrt();
     let z: f64 = x.iter().zip(pole).map(|(a, b)| a * b).sum();
     GM_MOON_M3_S2 / r
-        - GM_MOON_M3_S2 * MOON_J2 * MOON_J2_RADIUS_M.powi(2) * (3.0 * z * z - r2)
+        - GM_MOON_M3_S2 * GL0660B_J2 * GL0660B_REFERENCE_RADIUS_M.powi(2) * (3.0 * z * z - r2)
             / (2.0 * r2 * r2 * r)
 }
 
