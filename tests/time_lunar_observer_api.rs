@@ -114,3 +114,68 @@ async fn observers_out_of_range_or_doubled_are_refused_naming_the_field() {
     let answer = post_json(&server, "/v1/time/convert", &request).await;
     assert_eq!(answer.0, 200, "{}", answer.2);
 }
+
+fn result_of<'a>(answer: &'a Value, scale: &str) -> &'a Value {
+    answer["results"]
+        .as_array()
+        .and_then(|results| results.iter().find(|r| r["scale"] == scale))
+        .unwrap_or(&Value::Null)
+}
+
+/// `GET /v1/time/now` takes the same selenocentric observer: its TCL - UTC equals that of
+/// `GET /v1/time/convert` at the UTC instant it answered with the same observer (to the 1 ns
+/// of the written UTC times the 1e-8 rate difference), and differs from the Moon's-centre
+/// value by at most |v_M| r / c^2 (common practice, as above).
+#[tokio::test]
+async fn now_takes_the_selenocentric_observer() {
+    let server = TestServer::start().await;
+    let observer = "selenocentric_observer_m=0,0,-1737400";
+    let now = get_json(&server, &format!("/v1/time/now?forms=iso&{observer}")).await;
+    assert_eq!(now.0, 200, "{}", now.2);
+    let utc = result_of(&now.2, "UTC")["iso"]
+        .as_str()
+        .unwrap_or_default()
+        .to_string();
+    let tcl_minus_utc = |answer: &Value| {
+        let number = |r: &Value| {
+            r["difference_exact_s"]
+                .as_str()
+                .and_then(|t| t.parse::<f64>().ok())
+                .unwrap_or(f64::NAN)
+        };
+        number(result_of(answer, "TCL")) - number(result_of(answer, "UTC"))
+    };
+    let base = format!("/v1/time/convert?at={utc}&from=UTC&to=UTC,TCL&forms=iso");
+    let at_observer = get_json(&server, &format!("{base}&{observer}")).await;
+    let at_centre = get_json(&server, &base).await;
+    assert_eq!(
+        (at_observer.0, at_centre.0),
+        (200, 200),
+        "{}",
+        at_observer.2
+    );
+    let (now_s, observer_s, centre_s) = (
+        tcl_minus_utc(&now.2),
+        tcl_minus_utc(&at_observer.2),
+        tcl_minus_utc(&at_centre.2),
+    );
+    println!(
+        "now at the south pole: TCL - UTC {now_s} s; convert: {observer_s} s; centre {centre_s} s"
+    );
+    assert!(
+        (now_s - observer_s).abs() < 1e-12,
+        "{now_s} vs {observer_s}"
+    );
+    let term = observer_s - centre_s;
+    assert!(
+        term.abs() > 1e-8 && term.abs() < 3.1e4 * 1_737_400.0 / C2,
+        "{term:e}"
+    );
+    let below = get_json(
+        &server,
+        "/v1/time/now?selenocentric_observer_m=0,0,-1700000",
+    )
+    .await;
+    let body = assert_problem(&below, 422, "below_surface");
+    assert_eq!(body["field"], "selenocentric_observer_m");
+}

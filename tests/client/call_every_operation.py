@@ -502,7 +502,9 @@ def proper_time(api, m, document):
     assert tern.frame == "lunar_inertial", tern.frame
     near(tern.summary.mean_rate, -1.5 * gm_moon / (a_m * C_M_S**2), 3e-16, "lunar orbit rate")
     sample = tern.series[-1]
-    near(sample.tau_minus_t_s, sample.velocity_part_s + sample.gravity_part_s, 1e-18, "parts")
+    parts = sample.velocity_part_s + sample.gravity_part_s + sample.tidal_part_s
+    near(sample.tau_minus_t_s, parts, 1e-18, "parts")
+    assert sample.tidal_part_s == sample.lunar.tidal_part_s != 0.0
     assert sample.lunar.simultaneity_s != 0.0
     # An Earth frame for a Moon-centred ephemeris: 422 naming the field.
     wrong = m.EphemerisInput.from_dict(

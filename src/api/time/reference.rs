@@ -8,9 +8,10 @@ use axum::response::{IntoResponse, Response};
 use serde::Serialize;
 use utoipa::ToSchema;
 
-use super::conversion::{convert_one, FieldName};
+use super::conversion::{convert_one_observed, FieldName};
 use super::forms::FormSelection;
 use super::json_view::{conversion_bytes_hint, json_bytes, ConversionJson};
+use super::lunar_observer::parse_lunar_observer_query;
 use super::types::{Conversion, NowQuery};
 use crate::api::error::{ApiError, QueryProblems};
 use crate::api::extract::QueryParams;
@@ -201,7 +202,7 @@ pub async fn leap_seconds(State(state): State<AppState>, headers: HeaderMap) -> 
         (status = 200, description = "Now, in every scale (never cached)", body = Conversion,
             headers(("Cache-Control" = String, description = "`no-store`"))),
         QueryProblems,
-        (status = 422, description = "A name in `forms` is not a form (`unknown_format`, `field` names it), `tdb_model` is not a model (`unknown_tdb_model`), or the server's clock reads outside the span of `tdb_model=ephemeris` (`outside_tdb_model_span`) or of TCL and TL (`outside_lunar_time_span`, after 2101-01-02)", body = crate::api::error::Problem, content_type = "application/problem+json"),
+        (status = 422, description = "A name in `forms` is not a form (`unknown_format`, `field` names it), `tdb_model` is not a model (`unknown_tdb_model`), `selenocentric_observer_m` lies below the lunar surface (`below_surface`) or beyond 60 000 km from the Moon (`beyond_model_range`), or the server's clock reads outside the span of `tdb_model=ephemeris` (`outside_tdb_model_span`) or of TCL and TL (`outside_lunar_time_span`, after 2101-01-02)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 503, description = "The server's clock reads before 1970 (`clock_unavailable`), or the request took longer than the configured timeout (`request_timeout`)", body = crate::api::error::Problem, content_type = "application/problem+json")))]
 pub async fn now(
     State(state): State<AppState>,
@@ -223,15 +224,21 @@ pub async fn now(
         since_epoch.as_secs(),
         since_epoch.subsec_nanos()
     );
+    let lunar = query
+        .selenocentric_observer_m
+        .as_deref()
+        .map(|text| parse_lunar_observer_query(text, state.ephemeris(), "selenocentric_observer_m"))
+        .transpose()?;
     let table = state.leap_table();
     let context = ConversionContext::geocentric(&table).with_tdb_model(tdb_model);
-    let conversion = convert_one(
+    let conversion = convert_one_observed(
         &text,
         InstantFormat::UnixS,
         Scale::Utc,
         &Scale::without_earth_orientation().collect::<Vec<_>>(),
         &context,
         FieldName::Named("now"),
+        lunar.as_ref(),
     )?;
     let body = json_bytes(
         &ConversionJson(&conversion, &forms),

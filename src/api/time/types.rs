@@ -252,6 +252,12 @@ pub struct NowQuery {
     /// The TDB - TT model for TDB and TCB: `series` (default) or `ephemeris` (JPL DE440).
     #[param(value_type = Option<TdbModelName>, example = "ephemeris")]
     pub tdb_model: Option<String>,
+    /// Observer near the Moon, as for `GET /v1/time/convert`: position relative to the Moon's
+    /// centre, ICRF axes, metres, `x,y,z` (no spaces), from the lunar surface (1 737 400 m less
+    /// 10 km) to 60 000 km (422 `below_surface`, `beyond_model_range` otherwise); TCL and TL
+    /// then carry the position-dependent term v_M.(x - x_M)/c^2 of TCB - TCL at the observer.
+    #[param(value_type = Option<ThreeNumbersText>, example = "0,0,-1737400")]
+    pub selenocentric_observer_m: Option<String>,
 }
 
 /// Schema of a week counter name.
