@@ -6,6 +6,7 @@
 //! that both polynomials have degree `points - 1`. Times are TT seconds since the first epoch.
 
 mod basis;
+mod tt_axis;
 mod validate;
 
 pub(crate) use validate::attos_difference_s;

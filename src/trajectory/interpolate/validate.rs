@@ -3,11 +3,12 @@
 
 use super::super::error::TrajectoryError;
 use super::super::{Frame, ObjectTrack};
+use super::tt_axis::TtAxis;
 use super::InterpolationOptions;
 use crate::physics::constants::{GRS80_SEMI_MINOR_AXIS_M, SPEED_OF_LIGHT_M_S};
 use crate::physics::lunar_orbit::check_orbit_distance;
 use crate::physics::readable::readable;
-use crate::physics::time::convert::{to_tt_attos, ConversionContext};
+use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::instant::Instant;
 use crate::trajectory::error::epoch_error_code;
 
@@ -48,14 +49,15 @@ pub fn validate_track(
         )
         .for_object(id));
     }
+    let (Some(first), Some(last)) = (track.states.first(), track.states.last()) else {
+        return Ok(Vec::new());
+    };
+    let axis = TtAxis::new(context, &first.epoch, &last.epoch, track.states.len());
     let tt_of = |index: usize, epoch: &Instant| {
-        to_tt_attos(epoch, context)
+        axis.tt_attos(epoch)
             .map_err(|e| TrajectoryError::at_state(epoch_error_code(&e), id, index, e.to_string()))
     };
-    let first_tt = match track.states.first() {
-        Some(state) => tt_of(0, &state.epoch)?,
-        None => 0,
-    };
+    let first_tt = tt_of(0, &first.epoch)?;
     let mut times_s = Vec::with_capacity(track.states.len());
     let mut previous_tt: Option<i128> = None;
     for (index, state) in track.states.iter().enumerate() {
