@@ -188,12 +188,14 @@ async fn bad_lunar_inputs_name_line_field_and_object() {
         "frame_center_mismatch",
     );
     assert_eq!(body["field"], "reference");
-    let body = assert_problem(
-        &post_oem(&server, "?gravity_model=grs80", &text).await,
-        422,
-        "unsupported_gravity_model",
-    );
-    assert_eq!(body["field"], "gravity_model");
+    for model in ["grs80", "j2_sun_moon"] {
+        let body = assert_problem(
+            &post_oem(&server, &format!("?gravity_model={model}"), &text).await,
+            422,
+            "unsupported_gravity_model",
+        );
+        assert_eq!(body["field"], "gravity_model");
+    }
     let earth = String::from_utf8(
         std::fs::read(concat!(
             env!("CARGO_MANIFEST_DIR"),

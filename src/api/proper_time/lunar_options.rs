@@ -3,6 +3,7 @@
 
 use super::types::ProperTimeOptionsInput;
 use crate::api::error::ApiError;
+use crate::physics::gravity::GravityModel;
 use crate::physics::lunar_orbit::LunarReference;
 use crate::physics::rate::RateErrorKind;
 use crate::trajectory::{Frame, TrajectorySet};
@@ -58,10 +59,11 @@ pub fn lunar_options(
             )
         })?,
     };
-    let j2 = match options.gravity_model.as_deref() {
-        None | Some("j2") => true,
-        Some("point_mass") => false,
-        Some(other) => {
+    let model = options.gravity_model.as_deref();
+    let j2 = match model.map(|text| (text, GravityModel::from_name(text))) {
+        None | Some((_, Some(GravityModel::J2))) => true,
+        Some((_, Some(GravityModel::PointMass))) => false,
+        Some((other, _)) => {
             return Err(ApiError::unprocessable(
                 RateErrorKind::UnsupportedGravityModel.as_str(),
                 format!("{other} is a model of the Earth's field; a selenocentric ephemeris takes j2 (the Moon's J2, default) or point_mass (the Moon's point mass), both with the Earth's and the Sun's tides"),
