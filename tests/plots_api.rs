@@ -153,6 +153,36 @@ async fn plot_endpoints_negotiate_svg_and_csv() {
 }
 
 #[tokio::test]
+async fn scale_offsets_say_that_tl_is_a_proposal() {
+    let server = TestServer::start().await;
+    let path = "/v1/plots/scale-offsets?from=2020-01-01&to=2021-01-01&points=3";
+    let svg = get_accepting(&server, path, "image/svg+xml").await;
+    let svg = svg.text().await.expect("svg");
+    assert!(svg.contains("TL is a proposal, not a standard"));
+    let csv = get_accepting(&server, path, "text/csv").await;
+    let (header, rows) = read_csv(&csv.text().await.expect("csv"));
+    let column = |name: &str| {
+        header
+            .iter()
+            .position(|h| h == name)
+            .unwrap_or_else(|| panic!("no column {name}"))
+    };
+    assert_eq!(rows.len(), 3);
+    for row in &rows {
+        assert!(row[column("warnings")].contains("TL (lunar surface time) is a proposal"));
+        // TCL and TT read alike at 1977-01-01T00:00:32.184 TT (MJD 43144, the origin TCG and
+        // TCB share), and TCL gains 6.79835524e-10 on TDB (Lu, Yang & Xie 2025), TDB keeping
+        // TT's mean rate: about 0.92 s by 2020, within the annual term (1.65 ms) and TDB0.
+        let utc_mjd: f64 = row[column("utc_mjd")].parse().expect("mjd");
+        let expected = (utc_mjd - 43_144.0) * 86_400.0 * 6.79835524e-10;
+        let tcl: f64 = row[column("tcl_minus_tt_s")].parse().expect("tcl");
+        let tl: f64 = row[column("tl_minus_tt_s")].parse().expect("tl");
+        assert!((tcl - expected).abs() < 2e-3, "{tcl} vs {expected}");
+        assert!(tl < tcl, "{tcl} {tl}");
+    }
+}
+
+#[tokio::test]
 async fn plot_queries_name_the_bad_field() {
     let server = TestServer::start().await;
     let cases = [

@@ -133,18 +133,32 @@ pub fn self_contained(text: &str) -> Result<(), String> {
     Ok(())
 }
 
-/// Reads a CSV answer (no quoted commas in the plot CSVs' numeric columns) into a header and
-/// rows of fields.
+/// Reads a CSV answer (quoted fields as RFC 4180 writes them) into a header and rows of fields.
 pub fn read_csv(text: &str) -> (Vec<String>, Vec<Vec<String>>) {
     let mut lines = text.lines();
-    let header = lines
-        .next()
-        .unwrap_or_default()
-        .split(',')
-        .map(str::to_string)
-        .collect();
-    let rows = lines
-        .map(|line| line.split(',').map(str::to_string).collect())
-        .collect();
+    let header = csv_fields(lines.next().unwrap_or_default());
+    let rows = lines.map(csv_fields).collect();
     (header, rows)
+}
+
+/// The fields of one CSV line (RFC 4180 sec. 2: a field in double quotes may hold commas, and
+/// `""` inside it is one quote).
+fn csv_fields(line: &str) -> Vec<String> {
+    let mut fields = Vec::new();
+    let mut field = String::new();
+    let mut quoted = false;
+    let mut chars = line.chars().peekable();
+    while let Some(c) = chars.next() {
+        match (c, quoted) {
+            ('"', true) if chars.peek() == Some(&'"') => {
+                field.push('"');
+                chars.next();
+            }
+            ('"', _) => quoted = !quoted,
+            (',', false) => fields.push(std::mem::take(&mut field)),
+            _ => field.push(c),
+        }
+    }
+    fields.push(field);
+    fields
 }

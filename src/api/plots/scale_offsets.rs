@@ -1,7 +1,8 @@
 //! `GET /v1/plots/scale-offsets`: the offsets between the time scales over a span of UTC
 //! (TAI - UTC with its leap-second steps, the GNSS system times against UTC, TT - TAI,
-//! TDB - TT and UT1 - UTC where the Earth orientation table covers the instant); SVG, or CSV
-//! when preferred.
+//! TDB - TT, UT1 - UTC where the Earth orientation table covers the instant, and TCL - TT and
+//! TL - TT at the Moon's centre inside the span of the lunar time relation, TL being a
+//! proposal); SVG, or CSV when preferred.
 
 use axum::extract::State;
 use axum::http::HeaderMap;
@@ -19,6 +20,7 @@ use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::formats::{instant_from_day_reading, parse_iso, write_iso};
 use crate::physics::time::instant::{DayReading, ATTOS_PER_DAY};
 use crate::physics::time::leap_seconds::LeapTable;
+use crate::physics::time::lunar::TL_WARNING;
 use crate::physics::time::offsets::{offsets_at, offsets_over_span, OffsetSample};
 use crate::physics::time::scale::Scale;
 
@@ -210,6 +212,29 @@ pub fn figure(samples: &[OffsetSample], table: &LeapTable) -> Figure {
         marks: Vec::new(),
         zero_line: true,
     });
+    let tcl: Vec<Option<f64>> = samples.iter().map(|s| s.tcl_minus_tt_s).collect();
+    let tl: Vec<Option<f64>> = samples.iter().map(|s| s.tl_minus_tt_s).collect();
+    let lunar_largest = tcl
+        .iter()
+        .chain(&tl)
+        .flatten()
+        .fold(0.0f64, |m, v| m.max(v.abs()));
+    panels.push(Panel {
+        x: x.clone(),
+        heading: if tcl.iter().any(Option::is_some) {
+            "TCL - TT and TL - TT at the Moon's centre (TL is a proposal, not a standard; blank outside 1960-2100)".to_string()
+        } else {
+            "TCL - TT and TL - TT: the lunar time relation does not cover this span (1960-2100)".to_string()
+        },
+        y_quantity: "offset".to_string(),
+        y_unit: seconds_unit(lunar_largest),
+        series: vec![
+            series("TCL - TT", "tcl_minus_tt_s", tcl),
+            series("TL - TT (proposal)", "tl_minus_tt_s", tl),
+        ],
+        marks: Vec::new(),
+        zero_line: true,
+    });
     let first = samples
         .first()
         .map(|s| short_iso(&iso_of(s)))
@@ -231,7 +256,19 @@ pub fn figure(samples: &[OffsetSample], table: &LeapTable) -> Figure {
             x.first().copied().unwrap_or(0.0),
             x.last().copied().unwrap_or(1.0),
         )),
-        labels: vec![("utc".to_string(), samples.iter().map(iso_of).collect())],
+        labels: vec![
+            ("utc".to_string(), samples.iter().map(iso_of).collect()),
+            (
+                "warnings".to_string(),
+                samples
+                    .iter()
+                    .map(|s| match s.tl_minus_tt_s {
+                        Some(_) => TL_WARNING.to_string(),
+                        None => String::new(),
+                    })
+                    .collect(),
+            ),
+        ],
         panels,
     }
 }
@@ -240,10 +277,10 @@ pub fn figure(samples: &[OffsetSample], table: &LeapTable) -> Figure {
 #[utoipa::path(get, path = "/v1/plots/scale-offsets", tag = "plots",
     params(ScaleOffsetsQuery),
     responses(
-        (status = 200, description = "The plot (SVG 1.1, self-contained), or when `Accept` prefers `text/csv` its numbers: utc, utc_mjd, tai_minus_utc_s, tt_minus_tai_s, gpst_minus_utc_s, bdt_minus_utc_s, tdb_minus_tt_s, ut1_minus_utc_s (empty outside the Earth orientation table), one row per instant",
+        (status = 200, description = "The plot (SVG 1.1, self-contained), or when `Accept` prefers `text/csv` its numbers: utc, warnings (that TL is a proposal, not a standard, on the rows that give it), utc_mjd, tai_minus_utc_s, tt_minus_tai_s, gpst_minus_utc_s, bdt_minus_utc_s, tdb_minus_tt_s, ut1_minus_utc_s (empty outside the Earth orientation table), tcl_minus_tt_s and tl_minus_tt_s (at the Moon's centre; empty outside 1960-2100), one row per instant",
             content(
                 (String = "image/svg+xml", example = "<svg xmlns=\"http://www.w3.org/2000/svg\" ...>...</svg>"),
-                (String = "text/csv", example = "utc,utc_mjd,tai_minus_utc_s,tt_minus_tai_s,gpst_minus_utc_s,bdt_minus_utc_s,tdb_minus_tt_s,ut1_minus_utc_s\n2017-01-01T00:00:00.000,57754,37,32.184,18,4,-4.949663477060717e-5,0.591287\n")),
+                (String = "text/csv", example = "utc,warnings,utc_mjd,tai_minus_utc_s,tt_minus_tai_s,gpst_minus_utc_s,bdt_minus_utc_s,tdb_minus_tt_s,ut1_minus_utc_s,tcl_minus_tt_s,tl_minus_tt_s\n2020-01-01T00:00:00.000,\"TL (lunar surface time) is a proposal, not a standard: ...\",58849,37,32.184,18,4,-0.00010131283377201594,-0.1771665,0.9224961523738299,0.8798915706611172\n")),
             headers(("Vary" = String, description = "`accept`"))),
         (status = 400, description = "The query string cannot be read (`invalid_query`: an unknown parameter, a value of the wrong type)", body = crate::api::error::Problem, content_type = "application/problem+json"),
         (status = 422, description = "`from` or `to` is not an ISO UTC instant from 1960 on (`malformed_instant`, `impossible_date`, `invalid_leap_second`, `utc_before_1960`, `instant_out_of_range`), `to` not after `from` or `points` outside 2 to 5 000 (`bad_option`); `field` names it", body = crate::api::error::Problem, content_type = "application/problem+json"),

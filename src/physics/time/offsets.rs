@@ -31,6 +31,10 @@ pub struct OffsetSample {
     pub bdt_minus_utc_s: f64,
     /// UT1 - UTC where the context has a UT1 source covering the instant.
     pub ut1_minus_utc_s: Option<f64>,
+    /// TCL - TT at the Moon's centre, inside the span of the lunar time relation.
+    pub tcl_minus_tt_s: Option<f64>,
+    /// TL - TT at the Moon's centre (TL: a proposal, not a standard), inside the same span.
+    pub tl_minus_tt_s: Option<f64>,
 }
 
 impl OffsetSample {
@@ -72,6 +76,11 @@ pub fn offsets_at(
         .ut1
         .and_then(|_| count(Scale::Ut1).ok())
         .map(|ut1| reading_difference_s(ut1, utc_reading));
+    let lunar = |scale: Scale| {
+        count(scale)
+            .ok()
+            .map(|reading| reading_difference_s(reading, tt))
+    };
     Ok(OffsetSample {
         utc_mjd: mjd,
         utc_seconds_of_day_attos: seconds_of_day_attos,
@@ -81,6 +90,8 @@ pub fn offsets_at(
         gpst_minus_utc_s: reading_difference_s(gpst, utc_reading),
         bdt_minus_utc_s: reading_difference_s(bdt, utc_reading),
         ut1_minus_utc_s: ut1,
+        tcl_minus_tt_s: lunar(Scale::Tcl),
+        tl_minus_tt_s: lunar(Scale::Tl),
     })
 }
 
@@ -167,5 +178,29 @@ mod tests {
             assert_eq!(mjd, expect);
             assert!((gap_days - one_second_days).abs() < 1e-9);
         }
+    }
+
+    #[test]
+    fn lunar_offsets_drift_at_the_published_rates() {
+        let table = LeapTable::builtin();
+        let context = ConversionContext::geocentric(table);
+        // 1980-01-01 (MJD 44239) and 2020-01-01 (MJD 58849): the same phase of the year, so the
+        // annual term (about 1.65 ms) cancels to well below 1e-12 of the 40-year span.
+        let first = offsets_at(44_239, 0, &context).expect("in table");
+        let last = offsets_at(58_849, 0, &context).expect("in table");
+        let span_s = (58_849.0 - 44_239.0) * 86_400.0;
+        let rate = |a: Option<f64>, b: Option<f64>| {
+            (b.expect("inside the lunar span") - a.expect("inside the lunar span")) / span_s
+        };
+        // Lu, Yang & Xie 2025 (A&A 704, A76): mean dTCL/dTDB - 1 = 6.79835524e-10, and TDB
+        // keeps TT's mean rate (IAU 2006 Resolution B3).
+        let tcl = rate(first.tcl_minus_tt_s, last.tcl_minus_tt_s);
+        assert!((tcl - 6.79835524e-10).abs() < 1e-12, "{tcl:e}");
+        // Turyshev et al. (arXiv:2406.16147 v5): TL - TT drifts 56.0256 us/day.
+        let tl = rate(first.tl_minus_tt_s, last.tl_minus_tt_s);
+        assert!((tl - 56.0256e-6 / 86_400.0).abs() < 1e-12, "{tl:e}");
+        // Outside the span of the lunar relation (1960-2100) both are absent.
+        let later = offsets_at(89_164, 0, &context).expect("in table"); // 2103-01-01
+        assert_eq!((later.tcl_minus_tt_s, later.tl_minus_tt_s), (None, None));
     }
 }
