@@ -11,12 +11,14 @@ use crate::api::names::{one_of, parse_tdb_model};
 use crate::api::state::Limits;
 use crate::physics::constants::MAX_GEOCENTRIC_DISTANCE_M;
 use crate::physics::gravity::GravityModel;
+use crate::physics::lunar_orbit::TrajectoryCenter;
 use crate::physics::rate::RateReference;
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::leap_seconds::LeapTable;
 use crate::physics::time::tdb_model::TdbModel;
 use crate::trajectory::json::{from_document, JsonEphemeris};
-use crate::trajectory::{read_oem, read_sp3, InterpolationOptions, TrajectoryError, TrajectorySet};
+use crate::trajectory::sp3::read_sp3_about;
+use crate::trajectory::{read_oem, Frame, InterpolationOptions, TrajectoryError, TrajectorySet};
 
 /// The formats the endpoint reads.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -175,6 +177,47 @@ fn merge(
         max_gap_s: body.max_gap_s.or(query.max_gap_s),
         include_series: body.include_series.or(query.include_series),
         tdb_model: body.tdb_model.or(query.tdb_model),
+        center: query.center,
+    }
+}
+
+/// The `center` query parameter (422 `unknown_center` naming `center` for an unknown name).
+fn parse_center(name: Option<&str>) -> Result<Option<TrajectoryCenter>, ApiError> {
+    name.map(|name| {
+        TrajectoryCenter::from_name(name).ok_or_else(|| {
+            ApiError::unprocessable(
+                "unknown_center",
+                format!(
+                    "center `{name}` is not known; expected {} (written exactly so)",
+                    TrajectoryCenter::NAMES.join(" or ")
+                ),
+            )
+            .with_field("center")
+        })
+    })
+    .transpose()
+}
+
+/// A centre named in the query must be the file's own (OEM `CENTER_NAME`, JSON `center`; SP3
+/// was read about it): 422 `frame_center_mismatch` naming `center` otherwise.
+fn check_named_center(ephemeris: &TrajectorySet, center: TrajectoryCenter) -> Result<(), ApiError> {
+    let lunar = |frame: Frame| frame == Frame::LunarInertial;
+    match ephemeris
+        .objects
+        .iter()
+        .find(|track| lunar(track.frame) != (center == TrajectoryCenter::Moon))
+    {
+        None => Ok(()),
+        Some(track) => Err(ApiError::unprocessable(
+            "frame_center_mismatch",
+            format!(
+                "center is {} but the file gives object {} about the {}; OEM (CENTER_NAME) and JSON (center) name their centre themselves",
+                center.as_str(),
+                track.id,
+                if lunar(track.frame) { "Moon" } else { "Earth" }
+            ),
+        )
+        .with_field("center")),
     }
 }
 
@@ -193,6 +236,7 @@ pub fn read_request(
         )
     })?;
     check_options(&query, "")?;
+    let center = parse_center(query.center.as_deref())?;
     let query_model = parse_tdb_model(query.tdb_model.as_deref(), "tdb_model")?;
     let context = ConversionContext::geocentric(table).with_tdb_model(query_model);
     let (ephemeris, options) = match body_format(headers, query.format.as_deref(), text)? {
@@ -229,8 +273,15 @@ pub fn read_request(
             (ephemeris, merge(query, body_options))
         }
         BodyFormat::Oem => (read_oem(text, &context).map_err(ephemeris_problem)?, query),
-        BodyFormat::Sp3 => (read_sp3(text, &context).map_err(ephemeris_problem)?, query),
+        BodyFormat::Sp3 => (
+            read_sp3_about(text, &context, center.unwrap_or(TrajectoryCenter::Earth))
+                .map_err(ephemeris_problem)?,
+            query,
+        ),
     };
+    if let Some(center) = center {
+        check_named_center(&ephemeris, center)?;
+    }
     check_geocentric_range(&ephemeris)?;
     let states: usize = ephemeris.objects.iter().map(|o| o.states.len()).sum();
     check_batch_size(states, settings.batch_limit, "objects", "ephemeris state")?;

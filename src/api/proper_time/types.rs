@@ -75,6 +75,13 @@ pub struct ProperTimeOptionsInput {
     /// 422 `outside_tdb_model_span` elsewhere).
     #[param(value_type = Option<TdbModelName>, example = "series")]
     pub tdb_model: Option<String>,
+    /// Centre of an SP3 file's positions, which SP3 cannot say: `earth` (default; Earth-fixed,
+    /// as IGS writes them) or `moon` (ICRF axes: the header's coordinate system, columns 47-51
+    /// of the first line, `ICRF` or `J2000`; 422 `frame_center_mismatch` at line 1 otherwise).
+    /// OEM and JSON name their centre themselves (`CENTER_NAME`, `center`); given with them it
+    /// must agree (422 `frame_center_mismatch`). Query only.
+    #[param(value_type = Option<TrajectoryCenterName>, example = "moon")]
+    pub center: Option<String>,
 }
 
 /// The options of a JSON body: the query parameters of the same names, which they override.
@@ -127,6 +134,7 @@ impl From<ProperTimeBodyOptions> for ProperTimeOptionsInput {
             max_gap_s: options.max_gap_s,
             include_series: options.include_series,
             tdb_model: options.tdb_model,
+            center: None,
         }
     }
 }

@@ -5,10 +5,11 @@
 //! A track is selenocentric when its file says so: CCSDS OEM `CENTER_NAME = MOON` with
 //! `REF_FRAME = ICRF` or `EME2000` (CCSDS 502.0-B-2 sec. 5.2.3: the frame names the axes, the
 //! centre the origin), a JSON ephemeris with `"center": "moon"` and frame ICRF, EME2000 or
-//! J2000. SP3 has no lunar convention: its header carries a terrestrial coordinate system
-//! label (IGS20, ITRF...) and no centre, so SP3 tracks stay geocentric. Lunar body-fixed frames
-//! (MOON_PA, MOON_ME...) are refused: the Moon's orientation that would take them into ICRF
-//! axes is not in this service yet.
+//! J2000, or an SP3 file read with the centre named by the request (SP3 has no centre field) and
+//! the coordinate system `ICRF` or `J2000` in its header ([`super::sp3::read_sp3_about`]).
+//! Lunar body-fixed frames (MOON_PA, MOON_ME...) are refused: they are realized by the
+//! libration angles of the DE ephemerides, which the embedded product does not carry, and the
+//! IAU rotation model of [`crate::physics::moon::orientation`] only approximates them.
 
 pub mod proper_time;
 pub mod tcl_axis;
@@ -47,7 +48,7 @@ pub fn check_center_frame(
         TrajectoryCenter::Moon if LUNAR_AXES_NAMES.contains(&frame_name) => Ok(Frame::LunarInertial),
         TrajectoryCenter::Moon if is_lunar_frame(frame_name) => Err((
             "unsupported_frame",
-            format!("{frame_name} is a lunar body-fixed frame, not supported yet (the Moon's orientation is not in this service); give selenocentric states with ICRF axes (ICRF or EME2000)"),
+            format!("{frame_name} is a lunar body-fixed frame, not supported yet (its libration angles are not in the embedded ephemeris); give selenocentric states with ICRF axes (ICRF or EME2000)"),
         )),
         TrajectoryCenter::Moon => Err((
             "frame_center_mismatch",

@@ -29,6 +29,10 @@ pub struct Sp3Header {
     pub time_system: Sp3TimeSystem,
     /// Whether a `%c` line was seen.
     pub time_system_seen: bool,
+    /// The coordinate system label of the first line (columns 47-51, trimmed): IGS20,
+    /// ITRF... for Earth-fixed positions; ICRF or J2000 for the ICRF axes of a Moon-centred
+    /// file.
+    pub coordinate_system: String,
 }
 
 impl Sp3Header {
@@ -69,6 +73,7 @@ impl Sp3Header {
             announced: 0,
             time_system: Sp3TimeSystem::Scale(Scale::Gpst),
             time_system_seen: false,
+            coordinate_system: line.get(46..51).unwrap_or("").trim().to_string(),
         })
     }
 

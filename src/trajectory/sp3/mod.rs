@@ -1,7 +1,10 @@
 //! IGS SP3-c and SP3-d orbit files (Hilla 2010, 2016).
 //!
 //! Positions (`P` lines, km, columns 5-18, 19-32, 33-46) are Earth-fixed (the IGS/ITRF frame
-//! named in the header), so every track has [`Frame::EarthFixed`]. Velocities (`V` lines) are
+//! named in the header), so every track has [`Frame::EarthFixed`]; SP3 has no centre field, so
+//! a Moon-centred file is read only when the request names the Moon as centre
+//! ([`read_sp3_about`]) and the header's coordinate system (columns 47-51 of the first line)
+//! names ICRF axes (`ICRF` or `J2000`): its tracks have [`Frame::LunarInertial`]. Velocities (`V` lines) are
 //! in decimetres per second and are converted to m/s. A position written as 0.000000 in all
 //! three components (the SP3-c convention for bad or absent positions) or with a component of
 //! magnitude 999999.999999 or more is skipped for that satellite at that epoch, together with
@@ -27,6 +30,7 @@ use super::clock_values::{ClockCollector, ClockData, ClockValue};
 use super::error::TrajectoryError;
 use super::text::parse_number;
 use super::{Frame, ObjectTrack, TrajectorySet, TrajectoryState};
+use crate::physics::lunar_orbit::TrajectoryCenter;
 use crate::physics::time::calendar::CalendarDate;
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::decimal::ExactDecimal;
@@ -37,18 +41,66 @@ use header::{normalize_id, Sp3Header, Sp3TimeSystem};
 /// Absolute value from which a coordinate is read as bad or absent (999999.999999 km).
 const BAD_COORDINATE_KM: f64 = 999_999.0;
 
-/// Reads an SP3-c or SP3-d file.
+/// SP3 coordinate-system labels (columns 47-51 of the first line) that give ICRF axes, the
+/// only axes of a Moon-centred file.
+pub const SP3_LUNAR_AXES_LABELS: &[&str] = &["ICRF", "J2000"];
+
+/// Reads an SP3-c or SP3-d file (geocentric, Earth-fixed).
 pub fn read_sp3(
     text: &str,
     context: &ConversionContext<'_>,
 ) -> Result<TrajectorySet, TrajectoryError> {
-    read_sp3_with_clocks(text, context).map(|(set, _)| set)
+    read_sp3_about(text, context, TrajectoryCenter::Earth)
 }
 
-/// Reads an SP3-c or SP3-d file with its satellite clock values.
+/// Reads an SP3-c or SP3-d file whose positions are about `center`, which the file itself
+/// cannot say: the Earth (Earth-fixed, as IGS writes them) or the Moon (ICRF axes, with the
+/// coordinate system `ICRF` or `J2000` in the header; 422 `frame_center_mismatch` at line 1
+/// otherwise).
+pub fn read_sp3_about(
+    text: &str,
+    context: &ConversionContext<'_>,
+    center: TrajectoryCenter,
+) -> Result<TrajectorySet, TrajectoryError> {
+    read_sp3_clocks_about(text, context, center).map(|(set, _)| set)
+}
+
+/// Reads an SP3-c or SP3-d file (geocentric) with its satellite clock values.
 pub fn read_sp3_with_clocks(
     text: &str,
     context: &ConversionContext<'_>,
+) -> Result<(TrajectorySet, ClockData), TrajectoryError> {
+    read_sp3_clocks_about(text, context, TrajectoryCenter::Earth)
+}
+
+/// The frame of the tracks: Earth-fixed about the Earth; ICRF axes about the Moon when the
+/// coordinate system label says so.
+fn sp3_frame(
+    header: &Sp3Header,
+    center: TrajectoryCenter,
+    number: usize,
+) -> Result<Frame, TrajectoryError> {
+    let label = header.coordinate_system.as_str();
+    match center {
+        TrajectoryCenter::Earth if SP3_LUNAR_AXES_LABELS.contains(&label) => Err(TrajectoryError::at_line(
+            "frame_center_mismatch",
+            number,
+            format!("the coordinate system {label:?} (columns 47-51) gives inertial axes, but an SP3 file about the Earth is read as Earth-fixed (IGS, ITRF); name the Moon as centre (center=moon) for a selenocentric file, or give a terrestrial label such as IGS20"),
+        )),
+        TrajectoryCenter::Earth => Ok(Frame::EarthFixed),
+        TrajectoryCenter::Moon if SP3_LUNAR_AXES_LABELS.contains(&label) => Ok(Frame::LunarInertial),
+        TrajectoryCenter::Moon => Err(TrajectoryError::at_line(
+            "frame_center_mismatch",
+            number,
+            format!("the coordinate system {label:?} (columns 47-51) is not a frame for Moon-centred states; a selenocentric SP3 file takes ICRF axes, written {}", SP3_LUNAR_AXES_LABELS.join(" or ")),
+        )),
+    }
+}
+
+fn read_sp3_clocks_about(
+    text: &str,
+    context: &ConversionContext<'_>,
+    center: TrajectoryCenter,
 ) -> Result<(TrajectorySet, ClockData), TrajectoryError> {
     let mut clocks = ClockCollector::default();
     let text = text.strip_prefix('\u{feff}').unwrap_or(text);
@@ -58,6 +110,7 @@ pub fn read_sp3_with_clocks(
         .map(|(i, l)| (i + 1, l.trim_end()));
     let (first_number, first) = lines.next().unwrap_or((1, ""));
     let mut header = Sp3Header::from_first_line(first, first_number)?;
+    let frame = sp3_frame(&header, center, first_number)?;
     let mut tracks: Vec<ObjectTrack> = Vec::new();
     let mut by_id: HashMap<String, usize> = HashMap::new();
     let mut epoch: Option<Instant> = None;
@@ -89,7 +142,7 @@ pub fn read_sp3_with_clocks(
             in_header = false;
             for id in &header.satellites {
                 by_id.insert(id.clone(), tracks.len());
-                tracks.push(new_track(id, &header));
+                tracks.push(new_track(id, &header, frame));
             }
         }
         match bytes[0] {
@@ -97,7 +150,7 @@ pub fn read_sp3_with_clocks(
             b'P' => {
                 let at = epoch.ok_or_else(|| no_epoch(number))?;
                 read_clock(line, number, at, &mut clocks);
-                read_position(line, number, at, &header, &mut tracks, &mut by_id)?;
+                read_position(line, number, at, (&header, frame), &mut tracks, &mut by_id)?;
             }
             b'V' => {
                 let at = epoch.ok_or_else(|| no_epoch(number))?;
@@ -141,10 +194,10 @@ pub fn read_sp3_with_clocks(
     Ok((TrajectorySet { objects: tracks }, clocks.finish()))
 }
 
-fn new_track(id: &str, header: &Sp3Header) -> ObjectTrack {
+fn new_track(id: &str, header: &Sp3Header, frame: Frame) -> ObjectTrack {
     ObjectTrack {
         id: id.to_string(),
-        frame: Frame::EarthFixed,
+        frame,
         scale: header.scale(),
         states: Vec::new(),
     }
@@ -260,7 +313,7 @@ fn read_position(
     line: &str,
     number: usize,
     epoch: Instant,
-    header: &Sp3Header,
+    (header, frame): (&Sp3Header, Frame),
     tracks: &mut Vec<ObjectTrack>,
     by_id: &mut HashMap<String, usize>,
 ) -> Result<(), TrajectoryError> {
@@ -274,7 +327,7 @@ fn read_position(
         Some(index) => *index,
         None => {
             by_id.insert(id.clone(), tracks.len());
-            tracks.push(new_track(&id, header));
+            tracks.push(new_track(&id, header, frame));
             tracks.len() - 1
         }
     };
