@@ -77,8 +77,9 @@ fn slope(times: &[f64], values: &[f64]) -> f64 {
 
 /// Source: Lu, Yang & Xie 2025 (A&A 704 A76, LTE440 from DE440): mean dTCL/dTDB =
 /// 1 + 6.79835524e-10. Here the least-squares slope of TCL - TDB over 1960-2100 (10-day
-/// grid) with the long-period terms beside it: measured 6.7983569e-10 (1.7e-16 from theirs);
-/// tolerance 1e-15 (a plain line without the long-period terms moves the rate by 5e-15).
+/// grid) with the long-period terms beside it: measured 6.7983569e-10 (1.7e-16 from theirs,
+/// the window's bias: see `mean_rate_against_tcg_lu_yang_xie_2025_and_l_c`); tolerance 1e-15
+/// (a plain line without the long-period terms moves the rate by 5e-15).
 #[test]
 fn mean_rate_against_tdb_lu_yang_xie_2025() {
     let times = grid(10.0);
@@ -103,6 +104,46 @@ fn mean_rate_against_tcb_lu_yang_xie_2025() {
     let rate = slope(&times, &values) * (1.0 - L_B);
     eprintln!("mean dTCL/dTCB - 1 = {rate:.12e}");
     assert!((rate + 1.482_536_216_7e-8).abs() < 1e-15, "{rate:e}");
+}
+
+/// L_C = 1.48082686741e-8 +- 2e-17, the mean rate of TCB - TCG at the geocentre (IERS
+/// Conventions (2010) table 1.1, from TE405, Irwin & Fukushima 1999).
+const L_C: f64 = 1.480_826_867_41e-8;
+
+/// The 1.7e-16 between the two mean rates above and Lu, Yang & Xie's is the 140-year window,
+/// not the model: the same estimator applied to TCG - TCB at the geocentre (the Earth's own
+/// integral, which shares the long-period planetary terms the window cannot separate) lands
+/// 1.70e-16 from L_C too, and the difference of the two, dTCL/dTCG - 1 = -1.7093493e-11,
+/// agrees with Lu, Yang & Xie's dTCL/dTCB and L_C combined, (L_C - 1.4825362167e-8) /
+/// (1 - L_C) = -1.7093493e-11, within 1.5e-19 (measured; tolerance 2e-17, the uncertainty of
+/// L_C).
+#[test]
+fn mean_rate_against_tcg_lu_yang_xie_2025_and_l_c() {
+    let times = grid(10.0);
+    let rate_of = |target: Scale, minus: Scale| {
+        let values: Vec<f64> = times
+            .iter()
+            .map(|&t| difference_s(t, target, minus))
+            .collect();
+        slope(&times, &values) * (1.0 - L_B)
+    };
+    let tcl_tcg = rate_of(Scale::Tcl, Scale::Tcg);
+    let expected = (L_C - 1.482_536_216_7e-8) / (1.0 - L_C);
+    eprintln!(
+        "mean dTCL/dTCG - 1 = {tcl_tcg:.12e} (from Lu, Yang & Xie and L_C: {expected:.12e}; {:.1e})",
+        tcl_tcg - expected
+    );
+    assert!((tcl_tcg - expected).abs() < 2e-17, "{tcl_tcg:e}");
+    // The window's bias, shared: the geocentre's TCG - TCB estimate against L_C and the
+    // Moon's TCL - TCB estimate against Lu, Yang & Xie differ from each other by less than
+    // L_C's uncertainty.
+    let earth_bias = rate_of(Scale::Tcg, Scale::Tcb) + L_C;
+    let moon_bias = rate_of(Scale::Tcl, Scale::Tcb) + 1.482_536_216_7e-8;
+    eprintln!("140-year window: geocentre {earth_bias:.2e} from L_C, Moon {moon_bias:.2e} from Lu, Yang & Xie");
+    assert!(
+        (earth_bias - moon_bias).abs() < 2e-17,
+        "{earth_bias:e} {moon_bias:e}"
+    );
 }
 
 /// Source: Lu, Yang & Xie 2025: periodic terms of about 1651 us (annual) and 126 us
