@@ -105,16 +105,7 @@ pub fn from_document<O>(
 ) -> Result<TrajectorySet, TrajectoryError> {
     let center = match document.center.as_deref() {
         None => TrajectoryCenter::Earth,
-        Some(name) => TrajectoryCenter::from_name(name).ok_or_else(|| {
-            TrajectoryError::new(
-                "unknown_center",
-                format!(
-                    "center {name:?} is not known; expected {} (written exactly so)",
-                    TrajectoryCenter::NAMES.join(" or ")
-                ),
-            )
-            .with_field("center")
-        })?,
+        Some(name) => super::lunar::parse_center(name)?,
     };
     let frame = super::lunar::json_frame(center, &document.frame)?;
     let time_error = |error: TimeError, field: &'static str| {

@@ -183,19 +183,8 @@ fn merge(
 
 /// The `center` query parameter (422 `unknown_center` naming `center` for an unknown name).
 fn parse_center(name: Option<&str>) -> Result<Option<TrajectoryCenter>, ApiError> {
-    name.map(|name| {
-        TrajectoryCenter::from_name(name).ok_or_else(|| {
-            ApiError::unprocessable(
-                "unknown_center",
-                format!(
-                    "center `{name}` is not known; expected {} (written exactly so)",
-                    TrajectoryCenter::NAMES.join(" or ")
-                ),
-            )
-            .with_field("center")
-        })
-    })
-    .transpose()
+    name.map(|name| crate::trajectory::lunar::parse_center(name).map_err(ephemeris_problem))
+        .transpose()
 }
 
 /// A centre named in the query must be the file's own (OEM `CENTER_NAME`, JSON `center`; SP3

@@ -39,6 +39,22 @@ pub fn is_lunar_frame(name: &str) -> bool {
     LUNAR_BODY_FIXED_NAMES.contains(&name)
 }
 
+/// Reads a centre name written exactly (`earth`, `moon`); 422 `unknown_center` naming the
+/// field `center` otherwise (a JSON document's member and the request's query parameter share
+/// the name).
+pub fn parse_center(name: &str) -> Result<TrajectoryCenter, TrajectoryError> {
+    TrajectoryCenter::from_name(name).ok_or_else(|| {
+        TrajectoryError::new(
+            "unknown_center",
+            format!(
+                "center {name:?} is not known; expected {} (written exactly so)",
+                TrajectoryCenter::NAMES.join(" or ")
+            ),
+        )
+        .with_field("center")
+    })
+}
+
 /// Why a (centre, frame) pair was refused: (code, message). The caller adds line or field.
 pub fn check_center_frame(
     center: TrajectoryCenter,
