@@ -9,6 +9,7 @@ use criterion::{criterion_group, criterion_main, Criterion, Throughput};
 use eigenzeit::physics::constants::{GM_EARTH_M3_S2, SPEED_OF_LIGHT_SQUARED_M2_S2};
 use eigenzeit::physics::earth::eop::EopTable;
 use eigenzeit::physics::lunar_orbit::LunarReference;
+use eigenzeit::physics::moon::gravity::LunarGravityModel;
 use eigenzeit::physics::proper_time::kepler::KeplerOrbit;
 use eigenzeit::physics::proper_time::{ProperTimeOptions, Trajectory};
 use eigenzeit::physics::solar_system::gm::GM_MOON_M3_S2;
@@ -91,7 +92,7 @@ fn benches(c: &mut Criterion) {
         let settings = LunarSettings {
             ephemeris: &ephemeris,
             reference,
-            j2: true,
+            gravity_model: LunarGravityModel::GrailDegree2,
         };
         group.bench_function(format!("lunar_orbit_{}", reference.as_str()), |b| {
             b.iter(|| {

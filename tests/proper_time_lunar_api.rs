@@ -126,10 +126,10 @@ async fn tern_1_against_tl_and_tt() {
     let tl = post_oem(&server, "?reference=TL", &text).await;
     let tt = post_oem(&server, "?reference=TT", &text).await;
     assert_eq!((tcl.0, tl.0, tt.0), (200, 200, 200), "{}", tl.2);
-    assert_eq!(tcl.2["gravity_model"], "j2");
+    assert_eq!(tcl.2["gravity_model"], "grail_gl0660b_degree2");
     let (tcl, tl, tt) = (rate(&tcl.2), (rate(&tl.2), tl.2), rate(&tt.2));
     println!(
-        "TERN-1 with J2: against TCL {tcl:e}, TL {:e}, TT {tt:e}",
+        "TERN-1 with the degree-2 field: against TCL {tcl:e}, TL {:e}, TT {tt:e}",
         tl.0
     );
     // (1 + tl)(1 - L_L) = 1 + tcl, written as a difference to keep the digits.
@@ -210,6 +210,16 @@ async fn bad_lunar_inputs_name_line_field_and_object() {
         "frame_center_mismatch",
     );
     assert_eq!(body["field"], "reference");
+    let body = assert_problem(
+        &post_oem(&server, "?gravity_model=grail_gl0660b_degree2", &earth).await,
+        422,
+        "unsupported_gravity_model",
+    );
+    assert_eq!(body["field"], "gravity_model");
+    // The Moon's fields by name: the zonal J2 alone is answered under its own name.
+    let zonal = post_oem(&server, "?gravity_model=j2&include_series=false", &text).await;
+    assert_eq!(zonal.0, 200, "{}", zonal.2);
+    assert_eq!(zonal.2["gravity_model"], "j2");
     let body = assert_problem(
         &post_oem(&server, "?reference=TCM", &text).await,
         422,

@@ -12,6 +12,8 @@ use crate::api::state::Limits;
 use crate::physics::constants::MAX_GEOCENTRIC_DISTANCE_M;
 use crate::physics::gravity::GravityModel;
 use crate::physics::lunar_orbit::TrajectoryCenter;
+use crate::physics::moon::gravity::LunarGravityModel;
+use crate::physics::rate::RateErrorKind;
 use crate::physics::rate::RateReference;
 use crate::physics::time::convert::ConversionContext;
 use crate::physics::time::leap_seconds::LeapTable;
@@ -280,6 +282,13 @@ pub fn read_request(
         _ => RateReference::Tt,
     };
     let gravity_model = match (options.gravity_model.as_deref(), &lunar) {
+        (Some(text), None) if text == LunarGravityModel::GrailDegree2.as_str() => {
+            return Err(ApiError::unprocessable(
+                RateErrorKind::UnsupportedGravityModel.as_str(),
+                format!("{text} is the Moon's field; it takes a selenocentric ephemeris (center moon, or OEM CENTER_NAME = MOON)"),
+            )
+            .with_field("gravity_model"))
+        }
         (Some(text), None) => Some(parse_gravity_model(text, "gravity_model")?),
         _ => None,
     };

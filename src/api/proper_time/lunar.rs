@@ -33,7 +33,7 @@ pub fn compute(
     let settings = LunarSettings {
         ephemeris,
         reference: lunar.reference,
-        j2: lunar.j2,
+        gravity_model: lunar.gravity_model,
     };
     let mut objects = Vec::with_capacity(request.ephemeris.objects.len());
     for input in &request.ephemeris.objects {
@@ -115,7 +115,7 @@ pub fn compute(
     }
     Ok(ProperTimeAnswer {
         reference: lunar.reference.as_str().to_string(),
-        gravity_model: if lunar.j2 { "j2" } else { "point_mass" }.to_string(),
+        gravity_model: lunar.gravity_model.as_str().to_string(),
         tdb_model: request.tdb_model.as_str().to_string(),
         objects,
         model_notes: [LUNAR_INTEGRATION_NOTE, LUNAR_TIME_NOTE, LUNAR_PERIODIC_NOTE]

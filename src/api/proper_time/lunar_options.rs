@@ -1,10 +1,10 @@
 //! The options of a selenocentric proper-time request: the reference (TCL, TL, TT) and the
-//! Moon's field (j2, point_mass), and the checks that the ephemeris has one centre.
+//! Moon's field (grail_gl0660b_degree2, j2, point_mass), and the checks that the ephemeris has one centre.
 
 use super::types::ProperTimeOptionsInput;
 use crate::api::error::ApiError;
-use crate::physics::gravity::GravityModel;
 use crate::physics::lunar_orbit::LunarReference;
+use crate::physics::moon::gravity::LunarGravityModel;
 use crate::physics::rate::RateErrorKind;
 use crate::trajectory::{Frame, TrajectorySet};
 
@@ -13,8 +13,8 @@ use crate::trajectory::{Frame, TrajectorySet};
 pub struct LunarOptions {
     /// TCL (default), TL or TT.
     pub reference: LunarReference,
-    /// The Moon's J2 (default) or its point mass only.
-    pub j2: bool,
+    /// The Moon's field: its degree-2 field (default), the zonal J2 or the point mass.
+    pub gravity_model: LunarGravityModel,
 }
 
 fn mismatch(message: &str, field: &str) -> ApiError {
@@ -59,17 +59,18 @@ pub fn lunar_options(
             )
         })?,
     };
-    let model = options.gravity_model.as_deref();
-    let j2 = match model.map(|text| (text, GravityModel::from_name(text))) {
-        None | Some((_, Some(GravityModel::J2))) => true,
-        Some((_, Some(GravityModel::PointMass))) => false,
-        Some((other, _)) => {
-            return Err(ApiError::unprocessable(
+    let gravity_model = match options.gravity_model.as_deref() {
+        None => LunarGravityModel::GrailDegree2,
+        Some(text) => LunarGravityModel::from_name(text).ok_or_else(|| {
+            ApiError::unprocessable(
                 RateErrorKind::UnsupportedGravityModel.as_str(),
-                format!("{other} is a model of the Earth's field; a selenocentric ephemeris takes j2 (the Moon's J2, default) or point_mass (the Moon's point mass), both with the Earth's and the Sun's tides"),
+                format!("{text} is a model of the Earth's field; a selenocentric ephemeris takes {} (the Moon's degree-2 field, default), {} (its zonal J2) or {} (its point mass), all with the Earth's and the Sun's tides", LunarGravityModel::GrailDegree2.as_str(), LunarGravityModel::J2.as_str(), LunarGravityModel::PointMass.as_str()),
             )
-            .with_field("gravity_model"))
-        }
+            .with_field("gravity_model")
+        })?,
     };
-    Ok(Some(LunarOptions { reference, j2 }))
+    Ok(Some(LunarOptions {
+        reference,
+        gravity_model,
+    }))
 }

@@ -9,6 +9,7 @@ use crate::api::clock::evaluate::{parse_gravity_model, parse_reference};
 use crate::api::error::ApiError;
 use crate::api::names::parse_tdb_model;
 use crate::physics::lunar_orbit::LunarReference;
+use crate::physics::moon::gravity::LunarGravityModel;
 use crate::physics::readable::readable;
 use crate::trajectory::MAX_POINTS;
 
@@ -31,7 +32,10 @@ pub fn check_options(options: &ProperTimeOptionsInput, prefix: &str) -> Result<(
         }
     }
     if let Some(text) = options.gravity_model.as_deref() {
-        parse_gravity_model(text, &field("gravity_model"))?;
+        // A name of the Moon's field is checked against the track's centre later.
+        if LunarGravityModel::from_name(text).is_none() {
+            parse_gravity_model(text, &field("gravity_model"))?;
+        }
     }
     if let Some(text) = options.tdb_model.as_deref() {
         parse_tdb_model(Some(text), &field("tdb_model"))?;

@@ -4,9 +4,9 @@ use serde::{Deserialize, Serialize};
 use utoipa::{IntoParams, ToSchema};
 
 pub use super::types_lunar::{
-    LunarSampleOutput, LunarSummaryOutput, ProperTimeReferenceName, TrajectoryCenterName,
+    LunarSampleOutput, LunarSummaryOutput, ProperTimeGravityModelName, ProperTimeReferenceName,
+    TrajectoryCenterName,
 };
-use crate::api::clock::types::GravityModelName;
 use crate::api::names::{
     EphemerisFrameName, EphemerisVelocityMS, InstantFormatName, InstantString, PositionM,
     ScaleName, TdbModelName,
@@ -48,8 +48,12 @@ pub struct ProperTimeOptionsInput {
     /// Potential model: `j2_sun_moon` (default: J2 about the CIP with the IERS Conventions
     /// (2010) GM, J2, a_E, plus the Sun's and the Moon's tidal potentials from the planetary
     /// ephemeris at each epoch; J2 alone, with a note, when a track lies outside the
-    /// ephemeris), `j2`, `grs80` (the GRS80 normal field in closed form) or `point_mass`.
-    #[param(value_type = Option<GravityModelName>, example = "j2_sun_moon")]
+    /// ephemeris), `j2`, `grs80` (the GRS80 normal field in closed form) or `point_mass` for
+    /// geocentric tracks; for selenocentric tracks the Moon's field, always with the Earth's
+    /// and the Sun's tides: `grail_gl0660b_degree2` (default: J2 and C22 of GL0660B in the
+    /// Moon's body-fixed axes, the field of the lunar surface clocks), `j2` (its zonal J2) or
+    /// `point_mass` (422 `unsupported_gravity_model` for a model of the other centre).
+    #[param(value_type = Option<ProperTimeGravityModelName>, example = "j2_sun_moon")]
     pub gravity_model: Option<String>,
     /// Answer every `step_s` seconds (of TT; of TCL for selenocentric tracks) from the first
     /// epoch instead of at the input epochs; from 0.001 s to 315 537 897 600 s (the supported range of instants).
@@ -97,8 +101,9 @@ pub struct ProperTimeBodyOptions {
     #[schema(value_type = Option<ProperTimeReferenceName>)]
     pub reference: Option<String>,
     /// Potential model: `j2_sun_moon` (default; J2 alone, with a note, when a track lies
-    /// outside the planetary ephemeris), `j2`, `grs80` or `point_mass`.
-    #[schema(value_type = Option<GravityModelName>)]
+    /// outside the planetary ephemeris), `j2`, `grs80` or `point_mass`; for selenocentric
+    /// tracks `grail_gl0660b_degree2` (default), `j2` or `point_mass`.
+    #[schema(value_type = Option<ProperTimeGravityModelName>)]
     pub gravity_model: Option<String>,
     /// Output step, seconds of TT (of TCL for selenocentric tracks), from 0.001 to
     /// 315 537 897 600.
@@ -304,8 +309,8 @@ pub struct ProperTimeAnswer {
     pub reference: String,
     /// The model used: `j2_sun_moon`, `j2`, `grs80` or `point_mass` (the default `j2_sun_moon`
     /// becomes `j2` when a track lies outside the planetary ephemeris; a note says so); for a
-    /// selenocentric ephemeris `point_mass` or `j2` (the Moon's field, with the Earth's and the
-    /// Sun's tides).
+    /// selenocentric ephemeris `grail_gl0660b_degree2` (default), `j2` or `point_mass` (the
+    /// Moon's field, with the Earth's and the Sun's tides).
     pub gravity_model: String,
     /// The model of TDB - TT used (`series` or `ephemeris`): for epochs given in TDB or TCB
     /// and for the TDB at which the Sun and the Moon of the tides are read.

@@ -12,7 +12,8 @@ use crate::physics::rate::RateReference;
 /// The lunar quantities of one sample, kept apart (selenocentric objects only).
 #[derive(Debug, Clone, Serialize, ToSchema)]
 pub struct LunarSampleOutput {
-    /// The part from the Moon's own potential -U_Moon/c^2 (point mass and J2), seconds.
+    /// The part from the Moon's own potential -U_Moon/c^2 (the field named by
+    /// `gravity_model`), seconds.
     pub moon_gravity_part_s: f64,
     /// The part from the tidal potential of the Earth and the Sun -w_tidal/c^2, seconds.
     pub tidal_part_s: f64,
@@ -66,6 +67,31 @@ impl PartialSchema for ProperTimeReferenceName {
 impl ToSchema for ProperTimeReferenceName {
     fn name() -> Cow<'static, str> {
         Cow::Borrowed("ProperTimeReferenceName")
+    }
+}
+
+/// Schema of a proper-time gravity model name: the Earth's models and the Moon's fields.
+pub struct ProperTimeGravityModelName;
+
+impl PartialSchema for ProperTimeGravityModelName {
+    fn schema() -> RefOr<Schema> {
+        let earth = crate::physics::gravity::GravityModel::ACCEPTED;
+        let mut names: Vec<&str> = earth.to_vec();
+        names.extend(
+            crate::physics::moon::gravity::LunarGravityModel::ACCEPTED
+                .iter()
+                .filter(|name| !earth.contains(name)),
+        );
+        crate::api::names::string_enum(
+            names,
+            "The potential model: j2_sun_moon, j2, grs80 or point_mass for geocentric tracks; grail_gl0660b_degree2 (the Moon's J2 and C22), j2 or point_mass for selenocentric tracks.",
+        )
+    }
+}
+
+impl ToSchema for ProperTimeGravityModelName {
+    fn name() -> Cow<'static, str> {
+        Cow::Borrowed("ProperTimeGravityModelName")
     }
 }
 

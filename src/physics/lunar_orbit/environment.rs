@@ -1,7 +1,7 @@
 //! The Earth and the Sun about the Moon over a span, their tidal potential at a selenocentric
 //! clock, and the Moon's barycentric velocity for the coordinate-simultaneity term.
 
-use super::field::LunarPole;
+use super::field::LunarAxes;
 use crate::physics::constants::SPEED_OF_LIGHT_SQUARED_M2_S2;
 use crate::physics::solar_system::gm::{GM_EARTH_DE440_M3_S2, GM_SUN_M3_S2};
 use crate::physics::solar_system::{Body, Ephemeris, EphemerisError};
@@ -16,26 +16,27 @@ pub struct LunarSurroundings {
     pub sun_m: [f64; 3],
     /// The Moon's velocity relative to the solar-system barycentre, m/s.
     pub moon_velocity_m_s: [f64; 3],
-    /// The Moon's pole.
-    pub pole: LunarPole,
+    /// The Moon's body-fixed axes.
+    pub axes: LunarAxes,
 }
 
 /// One node: selenocentric (position, velocity) of the Earth and the Sun, the Moon's
-/// barycentric velocity and the pole.
+/// barycentric velocity and the body-fixed axes.
 #[derive(Debug, Clone, Copy)]
 struct Node {
     earth: ([f64; 3], [f64; 3]),
     sun: ([f64; 3], [f64; 3]),
     moon_velocity_m_s: [f64; 3],
-    pole: [f64; 3],
+    axes: LunarAxes,
 }
 
 /// The surroundings over a span, from ephemeris states at nodes [`Self::NODE_STEP_S`] apart:
 /// the Earth's and the Sun's positions by cubic Hermite interpolation (position error below
 /// h^4/384 max|x''''| = 0.02 m for the Earth with h = 3600 s, as for the geocentric Moon in
-/// `solar_system::tides`), the Moon's barycentric velocity and the pole linearly (velocity
-/// error below h^2/8 max|v''| = 1.1e-2 m/s, i.e. below 1e-11 s in the simultaneity term at
-/// the 60 000 km range limit).
+/// `solar_system::tides`), the Moon's barycentric velocity and the body-fixed axes linearly
+/// (velocity error below h^2/8 max|v''| = 1.1e-2 m/s, i.e. below 1e-11 s in the simultaneity
+/// term at the 60 000 km range limit; the axes turn by 9.6e-3 rad between nodes, so a chord
+/// shortens them by at most 1.2e-5, a change of the C22 term below 4e-3 m^2/s^2, 4e-20 of rate).
 #[derive(Debug, Clone)]
 pub struct LunarEnvironment {
     first_tdb_s: f64,
@@ -72,7 +73,7 @@ impl LunarEnvironment {
                 earth: (earth.position_m, earth.velocity_m_s),
                 sun: (sun.position_m, sun.velocity_m_s),
                 moon_velocity_m_s: moon.velocity_m_s,
-                pole: LunarPole::at_tdb_s(tdb_s).unit,
+                axes: LunarAxes::at_tdb_s(tdb_s),
             });
         }
         Ok(Self { first_tdb_s, nodes })
@@ -91,7 +92,7 @@ impl LunarEnvironment {
                 earth_m: node.earth.0,
                 sun_m: node.sun.0,
                 moon_velocity_m_s: node.moon_velocity_m_s,
-                pole: LunarPole { unit: node.pole },
+                axes: node.axes,
             });
         }
         let i = (x.floor() as usize).min(last - 1);
@@ -109,8 +110,10 @@ impl LunarEnvironment {
             earth_m: basis.apply(&a.earth, &b.earth),
             sun_m: basis.apply(&a.sun, &b.sun),
             moon_velocity_m_s: linear(a.moon_velocity_m_s, b.moon_velocity_m_s),
-            pole: LunarPole {
-                unit: linear(a.pole, b.pole),
+            axes: LunarAxes {
+                pole: linear(a.axes.pole, b.axes.pole),
+                x_axis: linear(a.axes.x_axis, b.axes.x_axis),
+                y_axis: linear(a.axes.y_axis, b.axes.y_axis),
             },
         })
     }

@@ -2,15 +2,16 @@
 //! notes of [`super`]).
 
 use super::environment::{earth_sun_tidal_potential_m2_s2, simultaneity_term_s, LunarSurroundings};
-use super::field::moon_zonal_potential_m2_s2;
+use super::field::moon_field_potential_m2_s2;
 use crate::physics::constants::{SECONDS_PER_DAY, SPEED_OF_LIGHT_SQUARED_M2_S2};
+use crate::physics::moon::gravity::LunarGravityModel;
 use crate::physics::proper_time::{
     kepler_periodic_term_s, CompensatedSum, GaussLegendre, ProperTimeError, ProperTimeErrorKind,
     ProperTimeOptions, Trajectory,
 };
 
 /// The model note of [`integrate_lunar_proper_time`].
-pub const LUNAR_INTEGRATION_NOTE: &str = "lunar orbit: d(tau)/d(TCL) - 1 = -(v^2/2 + U_Moon + w_tidal)/c^2 in the LCRS (the form of IAU 2000 Resolution B1.3 with the Moon in place of the Earth); U_Moon = point mass (GM of DE440) with the zonal J2 = 2.0323e-4 of the GRAIL field GL0660B (from memory; the same constant as the lunar surface clocks) about the pole of the IAU rotation model of the Moon (Archinal et al. 2018); w_tidal of the Earth and the Sun from DE440; left out: C22 and higher lunar harmonics (up to about 6e-16 in rate at 100 km), other planets' tides (below 1e-20); selenocentric positions are taken as LCRS positions, velocities as d x / d TCL";
+pub const LUNAR_INTEGRATION_NOTE: &str = "lunar orbit: d(tau)/d(TCL) - 1 = -(v^2/2 + U_Moon + w_tidal)/c^2 in the LCRS (the form of IAU 2000 Resolution B1.3 with the Moon in place of the Earth); U_Moon = the gravity_model named in the answer: grail_gl0660b_degree2 (default) the point mass (GM of DE440) with J2 = 2.0323e-4 and C22 = 2.2356e-5 of the GRAIL field GL0660B (from memory; the field of the lunar surface clocks) in the body-fixed axes of the IAU rotation model of the Moon (Archinal et al. 2018), j2 the zonal J2 alone about its pole, point_mass the monopole; w_tidal of the Earth and the Sun from DE440; left out: the Moon's degree 3 and above (C31 about 2.7e-5, from memory: about 1e-15 in rate at 100 km; the mass concentrations of the higher degrees not estimated here), C22 with j2 (up to 1.8e-15 at 100 km, 8.9e-16 in a polar orbit's mean), other planets' tides (below 1e-20); selenocentric positions are taken as LCRS positions, velocities as d x / d TCL";
 
 /// The model note of the periodic part and the simultaneity term.
 pub const LUNAR_PERIODIC_NOTE: &str = "periodic_s is tau - t minus its least-squares line (the clock-rate periodic part: eccentricity, J2, tides); kepler_periodic_s is -2 x.v/c^2 for comparison; simultaneity_s = v_M.(x - x_M)/c^2 is the position-dependent part of TCB - TCL at the clock (IAU 2000 Resolution B1.5 with the Moon for the Earth): not a clock rate, never included in tau - t; add it to a TCL-derived TCB (or, scaled by 1 - L_B, TDB) of an event at the clock";
@@ -80,14 +81,14 @@ fn refuse(kind: ProperTimeErrorKind, index: usize, message: impl Into<String>) -
 /// consecutive `epochs_s` (TCL seconds, strictly increasing, at least two).
 ///
 /// `surroundings(t_s)` gives the Earth, the Sun, the Moon's barycentric velocity and the pole
-/// at TCL second `t_s`; `j2` adds the Moon's J2. Quadrature as in
+/// at TCL second `t_s`; `model` is the Moon's field. Quadrature as in
 /// [`crate::physics::proper_time::integrate_proper_time`] (Gauss-Legendre with the node count
 /// from the interval's angle of orbit, Neumaier's compensated sums).
 pub fn integrate_lunar_proper_time<T, S>(
     trajectory: &T,
     epochs_s: &[f64],
     surroundings: S,
-    j2: bool,
+    model: LunarGravityModel,
     options: &ProperTimeOptions,
 ) -> Result<LunarProperTimeSeries, ProperTimeError>
 where
@@ -175,7 +176,7 @@ where
                 let (p, v) = trajectory.state_at(t_s);
                 let around = surroundings(t_s).ok_or_else(|| outside(index))?;
                 parts[0] += weight * 0.5 * dot(&v, &v);
-                parts[1] += weight * moon_zonal_potential_m2_s2(&p, &around.pole, j2);
+                parts[1] += weight * moon_field_potential_m2_s2(&p, &around.axes, model);
                 parts[2] += weight * earth_sun_tidal_potential_m2_s2(&around, &p);
             }
         }

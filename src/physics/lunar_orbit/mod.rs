@@ -6,8 +6,9 @@
 //! d(tau)/d(TCL) = 1 - (v^2/2 + U_Moon(x) + w_tidal(x))/c^2
 //!
 //! the form of IAU 2000 Resolution B1.3 (the GCRS metric; IERS Conventions (2010) eq. 10.6)
-//! with the Moon in place of the Earth: U_Moon is the Moon's own potential ([`field`]: point
-//! mass with GM of DE440 and the zonal J2 about the lunar pole), w_tidal the tidal potential of
+//! with the Moon in place of the Earth: U_Moon is the Moon's own potential ([`field`]: by
+//! default the degree-2 field of the lunar surface clocks, GM of DE440 with J2 and C22 of
+//! GL0660B in the body-fixed axes of the IAU rotation model), w_tidal the tidal potential of
 //! the Earth and the Sun expanded about the Moon's centre without its monopole and dipole
 //! terms ([`environment`]). The integration ([`integrate`]) keeps three quantities apart:
 //!
@@ -19,8 +20,10 @@
 //!   the Moon for the Earth). It is not a clock rate: it says how TCL labels of events at the
 //!   clock map to TCB (and so to TDB and TT) and is never added to tau - TCL.
 //!
-//! Left out (sizes at a 100 km circular orbit, rate): the Moon's C22 and higher harmonics
-//! (C22 = 2.24e-5 from memory: up to about 6e-16), the J2 of the Earth in its tide (below
+//! Left out (sizes at a 100 km circular orbit, rate): the Moon's degree 3 and above (C31 about
+//! 2.7e-5, from memory: about 1e-15; the mass concentrations of the higher degrees are not
+//! estimated here), C22 when `j2` is asked for instead of the default degree-2 field (up to
+//! 1.8e-15, 8.9e-16 in a polar orbit's mean over a revolution), the J2 of the Earth in its tide (below
 //! 1e-22), the other planets' tides (below 1e-20), c^-4 terms (about 1e-19), the difference
 //! between TDB-compatible and LCRS coordinates (a scale of about 1.5e-8 on x and v: below
 //! 1e-18 of rate).
@@ -36,7 +39,8 @@ use crate::physics::vocabulary::vocabulary;
 
 pub use environment::{LunarEnvironment, LunarSurroundings};
 pub use field::{
-    check_orbit_distance, moon_zonal_potential_m2_s2, LunarPole, MAX_SELENOCENTRIC_DISTANCE_M,
+    check_orbit_distance, moon_field_potential_m2_s2, moon_zonal_potential_m2_s2, LunarAxes,
+    MAX_SELENOCENTRIC_DISTANCE_M,
 };
 pub use integrate::{
     integrate_lunar_proper_time, LunarProperTimeSample, LunarProperTimeSeries,

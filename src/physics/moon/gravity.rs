@@ -18,6 +18,7 @@
 //! 1737.4 km sphere, not above the selenoid).
 
 use crate::physics::solar_system::gm::GM_MOON_M3_S2;
+use crate::physics::vocabulary::vocabulary;
 
 /// Reference radius of GL0660B, m (Konopliv et al. 2013; from memory).
 pub const GL0660B_REFERENCE_RADIUS_M: f64 = 1_738_000.0;
@@ -26,8 +27,22 @@ pub const GL0660B_J2: f64 = 2.0323e-4;
 /// C22 (unnormalized) of GL0660B (from memory).
 pub const GL0660B_C22: f64 = 2.2356e-5;
 
+vocabulary! {
+    /// The Moon's field a lunar clock's rate uses.
+    #[derive(Debug, Clone, Copy, PartialEq, Eq)]
+    pub enum LunarGravityModel {
+        /// The Moon's point mass: U = GM_M / r.
+        PointMass = "point_mass",
+        /// The point mass with the zonal J2 of GL0660B about the lunar pole.
+        J2 = "j2",
+        /// The degree-2 field of GL0660B, J2 and C22, in the body-fixed axes of the IAU
+        /// rotation model ([`moon_potential_m2_s2`]): the default, and the surface clocks'.
+        GrailDegree2 = "grail_gl0660b_degree2",
+    }
+}
+
 /// The lunar gravity model's name, as answers give it.
-pub const LUNAR_GRAVITY_MODEL: &str = "grail_gl0660b_degree2";
+pub const LUNAR_GRAVITY_MODEL: &str = LunarGravityModel::GrailDegree2.as_str();
 
 /// The Moon's potential (positive, m^2/s^2) at the body-fixed position `body_fixed_m` (m,
 /// IAU mean-Earth frame):

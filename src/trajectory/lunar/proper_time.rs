@@ -14,6 +14,7 @@ use super::tcl_axis::TclAxis;
 use crate::physics::lunar_orbit::{
     integrate_lunar_proper_time, LunarEnvironment, LunarProperTimeSeries, LunarReference,
 };
+use crate::physics::moon::gravity::LunarGravityModel;
 use crate::physics::proper_time::ProperTimeOptions;
 use crate::physics::readable::readable;
 use crate::physics::solar_system::Ephemeris;
@@ -45,8 +46,8 @@ pub struct LunarSettings<'a> {
     pub ephemeris: &'a Ephemeris,
     /// The scale tau is compared with.
     pub reference: LunarReference,
-    /// Whether the Moon's J2 is in the potential.
-    pub j2: bool,
+    /// The Moon's field.
+    pub gravity_model: LunarGravityModel,
 }
 
 fn seconds(attos: i128) -> f64 {
@@ -144,7 +145,7 @@ pub fn lunar_proper_time_of_track(
         &interpolator,
         &epochs_s,
         |t_s| environment.at(first_tdb_s + t_s * tdb_per_tcl),
-        settings.j2,
+        settings.gravity_model,
         options,
     )
     .map_err(|e| TrajectoryError {

@@ -111,7 +111,7 @@ fn settings(ephemeris: &Ephemeris, reference: LunarReference) -> LunarSettings<'
     LunarSettings {
         ephemeris,
         reference,
-        j2: false,
+        gravity_model: crate::physics::moon::gravity::LunarGravityModel::PointMass,
     }
 }
 
