@@ -282,7 +282,10 @@ pub fn read_request(
         _ => RateReference::Tt,
     };
     let gravity_model = match (options.gravity_model.as_deref(), &lunar) {
-        (Some(text), None) if text == LunarGravityModel::GrailDegree2.as_str() => {
+        (Some(text), None)
+            if GravityModel::from_name(text).is_none()
+                && LunarGravityModel::from_name(text).is_some() =>
+        {
             return Err(ApiError::unprocessable(
                 RateErrorKind::UnsupportedGravityModel.as_str(),
                 format!("{text} is the Moon's field; it takes a selenocentric ephemeris (center moon, or OEM CENTER_NAME = MOON)"),
