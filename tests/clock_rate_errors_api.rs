@@ -154,7 +154,7 @@ fn bad_items() -> Vec<(Value, &'static str, &'static str)> {
             "items[1].reference",
         ),
         (
-            json!({"orbit": {"semi_major_axis_m": NAV_A_M, "eccentricity": 0.0}, "gravity_model": "egm2008"}),
+            json!({"orbit": {"semi_major_axis_m": NAV_A_M, "eccentricity": 0.0}, "gravity_model": "jgm3"}),
             "unknown_gravity_model",
             "items[1].gravity_model",
         ),

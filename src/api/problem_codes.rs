@@ -199,11 +199,11 @@ pub const PROBLEM_CODES: &[(&str, &str)] = &[
     ),
     (
         "unknown_gravity_model",
-        "The gravity model is not `point_mass`, `j2`, `grs80` or `j2_sun_moon`.",
+        "The gravity model is not `point_mass`, `j2`, `grs80`, `j2_sun_moon` or `egm2008` (the Earth's fields), nor `grail_gl0660b_degree2` (the Moon's, for selenocentric tracks).",
     ),
     (
         RateErrorKind::UnsupportedGravityModel.as_str(),
-        "The gravity model does not apply to this subject (e.g. `grs80` for a Keplerian orbit); use `point_mass` or `j2`, or give a state vector.",
+        "The gravity model does not apply to this subject (e.g. `grs80` for a Keplerian orbit, `egm2008` for anything but a ground site, an Earth model for a track about the Moon); `field` names the option.",
     ),
     (
         RateErrorKind::InputRequired.as_str(),

@@ -123,6 +123,10 @@ vocabulary! {
         /// the planetary ephemeris at the epoch (IAU 2000 Resolution B1.3; IERS Conventions
         /// (2010) eq. 10.6): needs the epoch; the default for states with an epoch.
         J2SunMoon = "j2_sun_moon",
+        /// The EGM2008 geopotential to degree and order 120 (Pavlis et al. 2012), tide-free,
+        /// in the ITRS: the Earth's real field with its geoid undulations, for ground sites
+        /// given by ellipsoidal height ([`crate::physics::earth::geopotential`]).
+        Egm2008 = "egm2008",
     }
 }
 
@@ -139,8 +143,13 @@ pub fn earth_potential_m2_s2(model: GravityModel, position_m: [f64; 3]) -> Resul
             distance_m("position_m", position_m)?;
             grs80_normal_gravitational_potential_m2_s2(position_m)
         }
+        GravityModel::Egm2008 => Err(RateError::new("gravity_model", EGM2008_GROUND_ONLY)
+            .with_kind(RateErrorKind::UnsupportedGravityModel)),
     }
 }
+
+/// Why `egm2008` is refused where the position is not a ground site's.
+pub const EGM2008_GROUND_ONLY: &str = "egm2008 is offered for ground sites given by ellipsoidal height (the field is evaluated at the site's ITRS position); states and ephemerides take j2_sun_moon, j2, grs80 or point_mass";
 
 /// Earth-fixed gravity plus centrifugal potential W(x) = U(x) + omega_E^2 (x^2 + y^2)/2.
 ///

@@ -223,6 +223,10 @@ pub fn evaluate_item(
                     notes.push(notes::ORBIT_REQUEST_TIDES.to_string());
                     GravityModel::PointMass
                 }
+                (None, Some(GravityModel::Egm2008)) => {
+                    notes.push(notes::ORBIT_REQUEST_EGM2008.to_string());
+                    GravityModel::PointMass
+                }
                 _ => GravityModel::PointMass,
             };
             let (parts, periodic, inclination, j2) =

@@ -10,6 +10,7 @@ use crate::physics::rate::state::{STATE_GRS80_NOTE, STATE_J2_NOTE, STATE_NOTES};
 use crate::physics::rate::state_tides::{STATE_NO_TIDES_NOTE, STATE_TIDES_NOTE};
 use crate::physics::rate::{HeightReference, FIRST_ORDER_NOTE};
 
+pub use crate::physics::rate::orbit::ORBIT_EGM2008_NOT_APPLIED_NOTE as ORBIT_REQUEST_EGM2008;
 pub use crate::physics::rate::orbit::ORBIT_GRS80_NOT_APPLIED_NOTE as ORBIT_REQUEST_GRS80;
 pub use crate::physics::rate::orbit::ORBIT_J2_NOT_APPLIED_NOTE as ORBIT_REQUEST_J2;
 
@@ -27,6 +28,7 @@ pub fn state(model: GravityModel) -> Vec<String> {
         GravityModel::J2 => Some(STATE_J2_NOTE),
         GravityModel::Grs80 => Some(STATE_GRS80_NOTE),
         GravityModel::J2SunMoon => Some(STATE_J2_NOTE),
+        GravityModel::Egm2008 => None,
     };
     let tides = if model == GravityModel::J2SunMoon {
         STATE_TIDES_NOTE

@@ -166,8 +166,9 @@ pub struct RateItem {
     /// Reference scale for this clock (`TT` or `TCG`); overrides the request's.
     #[schema(value_type = Option<ReferenceName>)]
     pub reference: Option<String>,
-    /// Gravity model for this clock (`point_mass`, `j2`, `grs80` or `j2_sun_moon`: J2 with the
-    /// Sun and Moon tides, states with an epoch only); overrides the request's. Orbits offer
+    /// Gravity model for this clock (`point_mass`, `j2`, `grs80`, `j2_sun_moon`: J2 with the
+    /// Sun and Moon tides, states with an epoch only, or `egm2008`: the EGM2008 geopotential to
+    /// degree 120, ground sites with an ellipsoidal height only); overrides the request's. Orbits offer
     /// `point_mass` and `j2` (with `inclination_deg`; a the energy semi-major axis).
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,
@@ -201,10 +202,12 @@ pub struct RateRequest {
     /// Gravity model for every item without its own: `point_mass`, `j2`, `grs80` (the GRS80
     /// normal field in closed form) or `j2_sun_moon` (J2 about the CIP with the tidal
     /// potentials of the Sun and the Moon from the planetary ephemeris; states with an epoch
-    /// only). Without any, ground sites (ellipsoidal height) use `grs80` (`j2` is off by up to
+    /// only) or `egm2008` (the EGM2008 geopotential to degree and order 120 with the real geoid
+    /// undulation, for ground sites given by ellipsoidal height; states answer 422
+    /// `unsupported_gravity_model`). Without any, ground sites (ellipsoidal height) use `grs80` (`j2` is off by up to
     /// 1.8e-15 and a point-mass Earth by up to about 7e-13 on the ground), states with an epoch
     /// `j2_sun_moon`, and the other subjects `point_mass`. Orbits always use `point_mass` (a
-    /// request-level `j2`, `grs80` or `j2_sun_moon` does not apply to them; their answer says
+    /// request-level `j2`, `grs80`, `j2_sun_moon` or `egm2008` does not apply to them; their answer says
     /// so); the Earth's flattening is below 1e-17 of rate at the Moon.
     #[schema(value_type = Option<GravityModelName>)]
     pub gravity_model: Option<String>,

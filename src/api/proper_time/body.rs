@@ -292,7 +292,16 @@ pub fn read_request(
             )
             .with_field("gravity_model"))
         }
-        (Some(text), None) => Some(parse_gravity_model(text, "gravity_model")?),
+        (Some(text), None) => match parse_gravity_model(text, "gravity_model")? {
+            GravityModel::Egm2008 => {
+                return Err(ApiError::unprocessable(
+                    RateErrorKind::UnsupportedGravityModel.as_str(),
+                    crate::physics::gravity::EGM2008_GROUND_ONLY,
+                )
+                .with_field("gravity_model"))
+            }
+            model => Some(model),
+        },
         _ => None,
     };
     let interpolation = InterpolationOptions {

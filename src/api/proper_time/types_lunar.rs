@@ -75,8 +75,14 @@ pub struct ProperTimeGravityModelName;
 
 impl PartialSchema for ProperTimeGravityModelName {
     fn schema() -> RefOr<Schema> {
-        let earth = crate::physics::gravity::GravityModel::ACCEPTED;
-        let mut names: Vec<&str> = earth.to_vec();
+        use crate::physics::gravity::GravityModel;
+        let earth = GravityModel::ACCEPTED;
+        // egm2008 is a field at fixed ITRS positions: ground sites only, not tracks.
+        let mut names: Vec<&str> = earth
+            .iter()
+            .copied()
+            .filter(|name| *name != GravityModel::Egm2008.as_str())
+            .collect();
         names.extend(
             crate::physics::moon::gravity::LunarGravityModel::ACCEPTED
                 .iter()

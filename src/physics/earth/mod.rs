@@ -3,5 +3,6 @@
 //! (2010) ch. 5).
 
 pub mod eop;
+pub mod geopotential;
 pub mod normal_field;
 pub mod orientation;

@@ -1,6 +1,7 @@
 //! Rate of a clock fixed on the rotating Earth.
 
 use crate::physics::constants::{EARTH_ROTATION_RAD_S, L_G, SPEED_OF_LIGHT_SQUARED_M2_S2};
+use crate::physics::earth::geopotential::egm2008;
 use crate::physics::earth::normal_field::grs80_normal_potential_drop_at_m2_s2;
 use crate::physics::geodesy::geodetic_to_ecef_m;
 use crate::physics::gravity::{centrifugal_potential_m2_s2, earth_potential_m2_s2, GravityModel};
@@ -61,6 +62,7 @@ pub fn ground_height_note(height_reference: HeightReference, model: GravityModel
         (HeightReference::Ellipsoid, GravityModel::Grs80) => "height above the GRS80 ellipsoid with the GRS80 normal field in closed form (Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)): W0 - W = U0 - U(x), the ellipsoid taken as the geoid (undulation N = 0), so a site on the ellipsoid has rate 0 against TT and the answer equals height_reference geoid at the same height; the real N, up to about +-100 m (about +-1.1e-14 per 100 m), is not in the model: give height_reference geoid with the orthometric height for 1e-16 work. A normal field with no disturbing potential instead (T = 0) would add (W0 - U0)/c^2 = (62 636 856.0 - 62 636 860.850)/c^2 = -5.4e-17 (IERS Conventions (2010) table 1.1 W0; Moritz (2000) U0); TT's L_G c^2 = 62 636 856.0 m^2/s^2 is itself about 2.6 m^2/s^2 (2.9e-17) above the present best geoid potential 62 636 853.4 (IAG 2015 Resolution 1; from memory)",
         (HeightReference::Ellipsoid, GravityModel::J2) => "height above the GRS80 ellipsoid with a J2 Earth: within 1.8e-15 of W0 on the ellipsoid (the truncated J4 term); grs80 (the default for ground sites) is the exact normal field; the geoid undulation (up to about +-100 m, +-1.1e-14) is in neither model: give height_reference geoid for 1e-16 work",
         (HeightReference::Ellipsoid, GravityModel::J2SunMoon) => "j2_sun_moon needs an epoch, which a ground site does not have: refused (give an ITRF state with its epoch for the Sun and Moon tides)",
+        (HeightReference::Ellipsoid, GravityModel::Egm2008) => "height above the GRS80 ellipsoid with the EGM2008 geopotential to degree and order 120 (Pavlis et al. 2012, tide-free) and the centrifugal potential at the site's ITRS position: W0 - W with the real geoid undulation N (up to about +-100 m) in it. Left out: the field beyond degree 120 (geoid about 0.5 m rms, a few metres at most in mountains: about 5e-17 rms, 3e-16 at most, from memory of the EGM2008 degree-variance), the permanent and periodic tides (zero-tide and tide-free fields differ by up to 0.3 m^2/s^2, 3e-18), the height of the site itself against the real ground (topography between the site and the geoid is outside the model's validity below the surface, a few 1e-17). A clock on the geoid has rate (W0 - W_geoid)/c^2 = +2.9e-17 against TT: TT's L_G c^2 = 62 636 856.0 m^2/s^2 lies about 2.6 m^2/s^2 above the present best geoid potential 62 636 853.4 (IAG 2015 Resolution 1; from memory)",
         (HeightReference::Ellipsoid, GravityModel::PointMass) => "height above the GRS80 ellipsoid with a point-mass Earth: ignores the Earth's flattening, off by up to about 7e-13 on the ground; grs80 (the default for ground sites) is exact for the normal field",
     }
 }
@@ -78,6 +80,9 @@ pub fn ground_height_note(height_reference: HeightReference, model: GravityModel
 ///   (N = 0): the same answer as [`GroundHeight::AboveGeoidM`] at the same height. A real clock
 ///   also sees the geoid undulation N, up to about +-100 m (about +-1.1e-14), which no
 ///   ellipsoidal model knows: for 1e-16 work give the height above the geoid instead.
+/// * [`GroundHeight::EllipsoidalM`] with [`GravityModel::Egm2008`]: W = V(x) + Phi(x) with V
+///   the EGM2008 geopotential to degree 120 at the site's ITRS position
+///   ([`crate::physics::earth::geopotential`]): the real field, geoid undulation included.
 /// * [`GroundHeight::EllipsoidalM`] with point mass or J2: U from `model` against W0. With J2
 ///   the model potential on the ellipsoid (h = 0) is within 1.8e-15 of W0 (measured: +6.7e-16
 ///   at the equator, -6.3e-16 at 45 deg, +1.7e-15 at the poles; the rest is the truncated J4
@@ -116,6 +121,15 @@ pub fn ground_site_rate(
             GroundHeight::EllipsoidalM(_),
             GravityModel::PointMass | GravityModel::J2 | GravityModel::J2SunMoon,
         ) => earth_potential_m2_s2(model, position_m)?,
+        (GroundHeight::EllipsoidalM(_), GravityModel::Egm2008) => {
+            let model = egm2008().map_err(|e| {
+                RateError::new(
+                    "gravity_model",
+                    format!("the built-in EGM2008 model cannot be read: {e}"),
+                )
+            })?;
+            model.potential_m2_s2(position_m, model.max_degree)
+        }
         (GroundHeight::EllipsoidalM(_), GravityModel::Grs80)
         | (GroundHeight::AboveGeoidM(_), _) => {
             let w0_m2_s2 = L_G * SPEED_OF_LIGHT_SQUARED_M2_S2;

@@ -143,7 +143,7 @@ pub const TRACK_POLE_NOTE: &str = "the zonal field is taken about the Celestial 
 /// The model note of an inertial rate with `model`, if it has one (J2 or GRS80).
 pub fn inertial_model_note(model: GravityModel) -> Option<&'static str> {
     match model {
-        GravityModel::PointMass => None,
+        GravityModel::PointMass | GravityModel::Egm2008 => None,
         GravityModel::J2 | GravityModel::J2SunMoon => Some(INERTIAL_J2_NOTE),
         GravityModel::Grs80 => Some(INERTIAL_GRS80_NOTE),
     }

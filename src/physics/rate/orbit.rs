@@ -68,6 +68,9 @@ pub const ORBIT_J2_NOT_APPLIED_NOTE: &str = "the request-level gravity_model j2 
 /// The same note for a request-level `grs80`.
 pub const ORBIT_GRS80_NOT_APPLIED_NOTE: &str = "the request-level gravity_model grs80 does not apply to orbit mean rates (the average of its zonal terms depends on the definition of a and e at their own level); point_mass used: give a state vector for grs80";
 
+/// The note of an orbit under a request-level `egm2008`.
+pub const ORBIT_EGM2008_NOT_APPLIED_NOTE: &str = "the request-level gravity_model egm2008 applies to ground sites (the field at a fixed ITRS position); point_mass used for orbit mean rates";
+
 /// Mean rate and periodic term of a clock on a Keplerian orbit (GM of IERS Conventions (2010)
 /// table 1.1, TCG-compatible).
 ///
