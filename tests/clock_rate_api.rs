@@ -119,8 +119,9 @@ async fn ground_clocks_higher_run_faster() {
     let results = rate_of(
         &server,
         json!({"items": [geoid_site(45.0, 0.0), geoid_site(45.0, 1.0), geoid_site(45.0, 1000.0),
-            {"ground_site": {"latitude_deg": 45.0, "longitude_deg": 8.5, "height_m": 0.0}},
-            {"ground_site": {"latitude_deg": 45.0, "longitude_deg": 8.5, "height_m": 1.0}}]}),
+            {"ground_site": {"latitude_deg": 45.0, "longitude_deg": 8.5, "height_m": 0.0}, "gravity_model": "grs80"},
+            {"ground_site": {"latitude_deg": 45.0, "longitude_deg": 8.5, "height_m": 1.0}, "gravity_model": "grs80"},
+            {"ground_site": {"latitude_deg": 45.0, "longitude_deg": 8.5, "height_m": 0.0}}]}),
     )
     .await;
     let total = |i: usize| num(&results[i]["fractional"]["total"]);
@@ -132,9 +133,9 @@ async fn ground_clocks_higher_run_faster() {
     assert!((per_metre - 1.09e-16).abs() < 0.005e-16, "{per_metre:e}");
     // Common practice: 1 km higher gains about 1.09e-13 (9.4 ns/day).
     assert!(total(2) > total(1) && (total(2) - total(0) - 1.09e-13).abs() < 0.005e-13);
-    // The default model for ellipsoidal heights is the GRS80 normal field; its vertical
-    // gradient is g as well (common practice, 1.09e-16 per metre), and on the ellipsoid it
-    // equals the geoid answer at the same height (N = 0; Heiskanen & Moritz 1967 h = H + N).
+    // The GRS80 normal field for ellipsoidal heights: its vertical gradient is g as well
+    // (common practice, 1.09e-16 per metre), and on the ellipsoid it equals the geoid answer
+    // at the same height (N = 0; Heiskanen & Moritz 1967 h = H + N).
     assert_eq!(results[3]["gravity_model"], "grs80");
     assert!((total(3) - total(0)).abs() < 1e-23, "{:e}", total(3));
     let per_metre_j2 = total(4) - total(3);
@@ -142,6 +143,13 @@ async fn ground_clocks_higher_run_faster() {
         (per_metre_j2 - 1.09e-16).abs() < 0.005e-16,
         "{per_metre_j2:e}"
     );
+    // The default for ellipsoidal heights is the EGM2008 field: the ellipsoid point lies N
+    // below the geoid there, N about +47 m in northern Italy (from memory of the EGM2008 geoid
+    // of Europe: 45 to 50 m), so the clock runs slow by about N g / c^2 = 5e-15.
+    assert_eq!(results[5]["gravity_model"], "egm2008");
+    let undulation_m = -(total(5) - total(3)) * 299_792_458f64.powi(2) / 9.806;
+    println!("EGM2008 geoid at 45 N 8.5 E: {undulation_m:.1} m");
+    assert!((40.0..55.0).contains(&undulation_m), "{undulation_m}");
 }
 
 #[tokio::test]

@@ -116,8 +116,8 @@ vocabulary! {
         /// U = GM/r (1 - J2 (a_E/r)^2 P2(sin phi)).
         J2 = "j2",
         /// The GRS80 normal field in closed form: the potential of the level ellipsoid with
-        /// every zonal term (Heiskanen & Moritz 1967 eq. 2-126; Moritz 2000), the default for
-        /// ground sites.
+        /// every zonal term (Heiskanen & Moritz 1967 eq. 2-126; Moritz 2000): the ellipsoid
+        /// taken as the geoid for ground sites.
         Grs80 = "grs80",
         /// The J2 Earth plus the tidal potentials of the Sun and the Moon at the clock, from
         /// the planetary ephemeris at the epoch (IAU 2000 Resolution B1.3; IERS Conventions
@@ -125,7 +125,8 @@ vocabulary! {
         J2SunMoon = "j2_sun_moon",
         /// The EGM2008 geopotential to degree and order 120 (Pavlis et al. 2012), tide-free,
         /// in the ITRS: the Earth's real field with its geoid undulations, for ground sites
-        /// given by ellipsoidal height ([`crate::physics::earth::geopotential`]).
+        /// given by ellipsoidal height, and their default
+        /// ([`crate::physics::earth::geopotential`]).
         Egm2008 = "egm2008",
     }
 }

@@ -80,8 +80,8 @@ pub struct RateAnswer {
     pub subject: String,
     /// The reference scale: `TT` or `TCG`.
     pub reference: String,
-    /// The model actually used: `point_mass`, `j2`, `grs80` (the default for ground sites with
-    /// ellipsoidal heights), `j2_sun_moon` (the default for states with an epoch), or
+    /// The model actually used: `point_mass`, `j2`, `grs80`, `egm2008` (the default for ground
+    /// sites with ellipsoidal heights), `j2_sun_moon` (the default for states with an epoch), or
     /// `grs80_normal_gravity` (ground sites with heights above the geoid).
     pub gravity_model: String,
     /// Fractional rate d(tau)/dt - 1 (dimensionless). Positive = the clock runs fast relative

@@ -439,7 +439,7 @@ fn ground_answer(
             format!("{path}.ground_site.height_reference"),
         )?,
     };
-    let model = requested_model.unwrap_or(GravityModel::Grs80);
+    let model = requested_model.unwrap_or(GravityModel::Egm2008);
     let height = height_reference.height(site.height_m);
     let label = match height_reference {
         HeightReference::Geoid => "grs80_normal_gravity",

@@ -204,8 +204,9 @@ pub struct RateRequest {
     /// potentials of the Sun and the Moon from the planetary ephemeris; states with an epoch
     /// only) or `egm2008` (the EGM2008 geopotential to degree and order 120 with the real geoid
     /// undulation, for ground sites given by ellipsoidal height; states answer 422
-    /// `unsupported_gravity_model`). Without any, ground sites (ellipsoidal height) use `grs80` (`j2` is off by up to
-    /// 1.8e-15 and a point-mass Earth by up to about 7e-13 on the ground), states with an epoch
+    /// `unsupported_gravity_model`). Without any, ground sites (ellipsoidal height) use `egm2008` (`grs80` takes the ellipsoid
+    /// for the geoid, off by the undulation N of up to about +-1.1e-14; `j2` is off by up to
+    /// 1.8e-15 more and a point-mass Earth by up to about 7e-13 on the ground), states with an epoch
     /// `j2_sun_moon`, and the other subjects `point_mass`. Orbits always use `point_mass` (a
     /// request-level `j2`, `grs80`, `j2_sun_moon` or `egm2008` does not apply to them; their answer says
     /// so); the Earth's flattening is below 1e-17 of rate at the Moon.

@@ -35,6 +35,9 @@ pub struct Geopotential {
     c: Vec<f64>,
     /// Fully normalized Snm at the same index.
     s: Vec<f64>,
+    /// The recursion's factors a_nm and b_nm (Holmes & Featherstone 2002 eq. 12) at the same
+    /// index, computed once.
+    recursion: Vec<(f64, f64)>,
 }
 
 /// Why a model text was refused: the line (1-based) and what is wrong.
@@ -121,6 +124,12 @@ impl Geopotential {
             c[index(n, m)] = number(cnm, line)?;
             s[index(n, m)] = number(snm, line)?;
         }
+        let mut recursion = vec![(0.0, 0.0); size];
+        for n in 1..=max_degree {
+            for m in 0..n {
+                recursion[index(n, m)] = recursion_factors(n, m);
+            }
+        }
         Ok(Self {
             name,
             gm_m3_s2: gm.ok_or_else(|| missing("earth_gravity_constant"))?,
@@ -128,6 +137,7 @@ impl Geopotential {
             max_degree,
             c,
             s,
+            recursion,
         })
     }
 
@@ -173,22 +183,14 @@ impl Geopotential {
             let mut p_n = p_mm;
             let mut scale = ratio.powi(m as i32);
             for n in m..=degree {
+                let k = index(n, m);
                 if n > m {
-                    let (nf, mf) = (n as f64, m as f64);
-                    let a = ((2.0 * nf - 1.0) * (2.0 * nf + 1.0) / ((nf - mf) * (nf + mf))).sqrt();
-                    let b = if n == m + 1 {
-                        0.0
-                    } else {
-                        ((2.0 * nf + 1.0) * (nf + mf - 1.0) * (nf - mf - 1.0)
-                            / ((nf - mf) * (nf + mf) * (2.0 * nf - 3.0)))
-                            .sqrt()
-                    };
+                    let (a, b) = self.recursion[k];
                     let p_next = a * sin_phi * p_n - b * p_prev;
                     p_prev = p_n;
                     p_n = p_next;
                     scale *= ratio;
                 }
-                let k = index(n, m);
                 sum_c += scale * p_n * self.c[k];
                 sum_s += scale * p_n * self.s[k];
             }
@@ -196,6 +198,22 @@ impl Geopotential {
         }
         self.gm_m3_s2 / r * total
     }
+}
+
+/// The factors of P_nm = a_nm sin(phi) P_(n-1)m - b_nm P_(n-2)m for n > m (Holmes &
+/// Featherstone 2002 eq. 12): a_nm = sqrt((2n - 1)(2n + 1) / ((n - m)(n + m))), b_nm =
+/// sqrt((2n + 1)(n + m - 1)(n - m - 1) / ((n - m)(n + m)(2n - 3))), b = 0 for n = m + 1.
+fn recursion_factors(n: usize, m: usize) -> (f64, f64) {
+    let (nf, mf) = (n as f64, m as f64);
+    let a = ((2.0 * nf - 1.0) * (2.0 * nf + 1.0) / ((nf - mf) * (nf + mf))).sqrt();
+    let b = if n == m + 1 {
+        0.0
+    } else {
+        ((2.0 * nf + 1.0) * (nf + mf - 1.0) * (nf - mf - 1.0)
+            / ((nf - mf) * (nf + mf) * (2.0 * nf - 3.0)))
+            .sqrt()
+    };
+    (a, b)
 }
 
 /// The built-in EGM2008 model (degree 120), read once.

@@ -59,11 +59,11 @@ pub const GROUND_NOTE: &str = "clock at rest on the Earth rotating at omega_E = 
 pub fn ground_height_note(height_reference: HeightReference, model: GravityModel) -> &'static str {
     match (height_reference, model) {
         (HeightReference::Geoid, _) => "height above the geoid: W0 - W from GRS80 normal gravity (Heiskanen & Moritz (1967) eq. 2-215), so a clock on the geoid has rate 0 against TT; gravity_model is not used",
-        (HeightReference::Ellipsoid, GravityModel::Grs80) => "height above the GRS80 ellipsoid with the GRS80 normal field in closed form (Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)): W0 - W = U0 - U(x), the ellipsoid taken as the geoid (undulation N = 0), so a site on the ellipsoid has rate 0 against TT and the answer equals height_reference geoid at the same height; the real N, up to about +-100 m (about +-1.1e-14 per 100 m), is not in the model: give height_reference geoid with the orthometric height for 1e-16 work. A normal field with no disturbing potential instead (T = 0) would add (W0 - U0)/c^2 = (62 636 856.0 - 62 636 860.850)/c^2 = -5.4e-17 (IERS Conventions (2010) table 1.1 W0; Moritz (2000) U0); TT's L_G c^2 = 62 636 856.0 m^2/s^2 is itself about 2.6 m^2/s^2 (2.9e-17) above the present best geoid potential 62 636 853.4 (IAG 2015 Resolution 1; from memory)",
-        (HeightReference::Ellipsoid, GravityModel::J2) => "height above the GRS80 ellipsoid with a J2 Earth: within 1.8e-15 of W0 on the ellipsoid (the truncated J4 term); grs80 (the default for ground sites) is the exact normal field; the geoid undulation (up to about +-100 m, +-1.1e-14) is in neither model: give height_reference geoid for 1e-16 work",
+        (HeightReference::Ellipsoid, GravityModel::Grs80) => "height above the GRS80 ellipsoid with the GRS80 normal field in closed form (Heiskanen & Moritz (1967) eq. 2-126, Moritz (2000)): W0 - W = U0 - U(x), the ellipsoid taken as the geoid (undulation N = 0), so a site on the ellipsoid has rate 0 against TT and the answer equals height_reference geoid at the same height; the real N, up to about +-100 m (about +-1.1e-14 per 100 m), is not in the model: egm2008 (the default for ellipsoidal heights) has it, or give height_reference geoid with the orthometric height. A normal field with no disturbing potential instead (T = 0) would add (W0 - U0)/c^2 = (62 636 856.0 - 62 636 860.850)/c^2 = -5.4e-17 (IERS Conventions (2010) table 1.1 W0; Moritz (2000) U0); TT's L_G c^2 = 62 636 856.0 m^2/s^2 is itself about 2.6 m^2/s^2 (2.9e-17) above the present best geoid potential 62 636 853.4 (IAG 2015 Resolution 1; from memory)",
+        (HeightReference::Ellipsoid, GravityModel::J2) => "height above the GRS80 ellipsoid with a J2 Earth: within 1.8e-15 of W0 on the ellipsoid (the truncated J4 term); grs80 is the exact normal field; the geoid undulation (up to about +-100 m, +-1.1e-14) is in neither: egm2008 (the default for ellipsoidal heights) has it, or give height_reference geoid",
         (HeightReference::Ellipsoid, GravityModel::J2SunMoon) => "j2_sun_moon needs an epoch, which a ground site does not have: refused (give an ITRF state with its epoch for the Sun and Moon tides)",
         (HeightReference::Ellipsoid, GravityModel::Egm2008) => "height above the GRS80 ellipsoid with the EGM2008 geopotential to degree and order 120 (Pavlis et al. 2012, tide-free) and the centrifugal potential at the site's ITRS position: W0 - W with the real geoid undulation N (up to about +-100 m) in it. Left out: the field beyond degree 120 (geoid about 0.5 m rms, a few metres at most in mountains: about 5e-17 rms, 3e-16 at most, from memory of the EGM2008 degree-variance), the permanent and periodic tides (zero-tide and tide-free fields differ by up to 0.3 m^2/s^2, 3e-18), the height of the site itself against the real ground (topography between the site and the geoid is outside the model's validity below the surface, a few 1e-17). A clock on the geoid has rate (W0 - W_geoid)/c^2 = +2.9e-17 against TT: TT's L_G c^2 = 62 636 856.0 m^2/s^2 lies about 2.6 m^2/s^2 above the present best geoid potential 62 636 853.4 (IAG 2015 Resolution 1; from memory)",
-        (HeightReference::Ellipsoid, GravityModel::PointMass) => "height above the GRS80 ellipsoid with a point-mass Earth: ignores the Earth's flattening, off by up to about 7e-13 on the ground; grs80 (the default for ground sites) is exact for the normal field",
+        (HeightReference::Ellipsoid, GravityModel::PointMass) => "height above the GRS80 ellipsoid with a point-mass Earth: ignores the Earth's flattening, off by up to about 7e-13 on the ground; egm2008 (the default for ellipsoidal heights) is the real field",
     }
 }
 
@@ -74,13 +74,14 @@ pub fn ground_height_note(height_reference: HeightReference, model: GravityModel
 /// L_G = W0/c^2, IAU 2000 Resolution B1.9). Split: `sr = -omega_E^2 (x^2 + y^2)/(2c^2)` (the
 /// rotation speed), `gr = (W0 - U)/c^2` (TT) or `-U/c^2` (TCG).
 ///
-/// * [`GroundHeight::EllipsoidalM`] with [`GravityModel::Grs80`] (the API's default): x from
+/// * [`GroundHeight::EllipsoidalM`] with [`GravityModel::Grs80`]: x from
 ///   GRS80 geodetic coordinates and W0 - W = U0 - U(x), the GRS80 normal potential in closed
 ///   form (Heiskanen & Moritz 1967 eq. 2-126; Moritz 2000), the ellipsoid taken as the geoid
 ///   (N = 0): the same answer as [`GroundHeight::AboveGeoidM`] at the same height. A real clock
 ///   also sees the geoid undulation N, up to about +-100 m (about +-1.1e-14), which no
 ///   ellipsoidal model knows: for 1e-16 work give the height above the geoid instead.
-/// * [`GroundHeight::EllipsoidalM`] with [`GravityModel::Egm2008`]: W = V(x) + Phi(x) with V
+/// * [`GroundHeight::EllipsoidalM`] with [`GravityModel::Egm2008`] (the API's default):
+///   W = V(x) + Phi(x) with V
 ///   the EGM2008 geopotential to degree 120 at the site's ITRS position
 ///   ([`crate::physics::earth::geopotential`]): the real field, geoid undulation included.
 /// * [`GroundHeight::EllipsoidalM`] with point mass or J2: U from `model` against W0. With J2
