@@ -2,6 +2,7 @@
 //! pole, or the degree-2 field (J2 and C22) in the Moon's body-fixed axes; and the range of
 //! selenocentric positions the model takes.
 
+use crate::physics::gravity::dot;
 use crate::physics::moon::gravity::{
     moon_potential_m2_s2, LunarGravityModel, GL0660B_J2, GL0660B_REFERENCE_RADIUS_M,
 };
@@ -63,7 +64,7 @@ pub fn moon_field_potential_m2_s2(
             // 1.2e-5 short): the body-fixed vector keeps its direction and takes the ICRF
             // length, so that the monopole GM/r stays exact.
             let body = axes.body_fixed(position_m);
-            let scale = (dot(position_m, position_m) / dot(&body, &body)).sqrt();
+            let scale = (dot(*position_m, *position_m) / dot(body, body)).sqrt();
             moon_potential_m2_s2(body.map(|c| c * scale)).unwrap_or(f64::NAN)
         }
     }
@@ -112,8 +113,4 @@ pub fn check_orbit_distance(radius_m: f64) -> Result<(), (&'static str, String)>
         ));
     }
     Ok(())
-}
-
-fn dot(a: &[f64; 3], b: &[f64; 3]) -> f64 {
-    a[0] * b[0] + a[1] * b[1] + a[2] * b[2]
 }

@@ -4,6 +4,7 @@
 use super::environment::{earth_sun_tidal_potential_m2_s2, simultaneity_term_s, LunarSurroundings};
 use super::field::moon_field_potential_m2_s2;
 use crate::physics::constants::{SECONDS_PER_DAY, SPEED_OF_LIGHT_SQUARED_M2_S2};
+use crate::physics::gravity::{dot, norm};
 use crate::physics::moon::gravity::LunarGravityModel;
 use crate::physics::proper_time::{
     kepler_periodic_term_s, CompensatedSum, GaussLegendre, ProperTimeError, ProperTimeErrorKind,
@@ -145,7 +146,7 @@ where
         let (start_s, end_s) = (pair[0], pair[1]);
         let (position_m, velocity_m_s) = start_state;
         let length_s = end_s - start_s;
-        let angle = length_s * norm(&velocity_m_s) / norm(&position_m);
+        let angle = length_s * norm(velocity_m_s) / norm(position_m);
         if !angle.is_finite() {
             return Err(refuse(
                 ProperTimeErrorKind::NotFinite,
@@ -153,7 +154,7 @@ where
                 "the state at the start of this interval has a zero or non-finite position or velocity",
             ));
         }
-        if dot(&velocity_m_s, &velocity_m_s) >= SPEED_OF_LIGHT_SQUARED_M2_S2 {
+        if dot(velocity_m_s, velocity_m_s) >= SPEED_OF_LIGHT_SQUARED_M2_S2 {
             return Err(refuse(
                 ProperTimeErrorKind::SpeedNotBelowC,
                 index,
@@ -175,7 +176,7 @@ where
                 let t_s = middle_s + 0.5 * piece_s * node;
                 let (p, v) = trajectory.state_at(t_s);
                 let around = surroundings(t_s).ok_or_else(|| outside(index))?;
-                parts[0] += weight * 0.5 * dot(&v, &v);
+                parts[0] += weight * 0.5 * dot(v, v);
                 parts[1] += weight * moon_field_potential_m2_s2(&p, &around.axes, model);
                 parts[2] += weight * earth_sun_tidal_potential_m2_s2(&around, &p);
             }
@@ -271,12 +272,4 @@ fn finish(mut samples: Vec<LunarProperTimeSample>) -> LunarProperTimeSeries {
         },
         samples,
     }
-}
-
-fn dot(a: &[f64; 3], b: &[f64; 3]) -> f64 {
-    a[0] * b[0] + a[1] * b[1] + a[2] * b[2]
-}
-
-fn norm(a: &[f64; 3]) -> f64 {
-    dot(a, a).sqrt()
 }
